@@ -1,0 +1,282 @@
+//! A cubic equation of state bound to a set of components and their k_ij.
+
+use super::alpha::SqrtAlpha;
+use super::roots::solve_cubic;
+use super::spec::{CriticalConstants, CubicSpec};
+use super::CubicKind;
+use crate::component::Component;
+use crate::constants::R;
+use crate::error::{Error, Result};
+use crate::model::{DensityRoots, Model};
+use crate::residual::Residual;
+
+/// Most components a model accepts; per-state work uses stack arrays of this size.
+pub const MAX_COMPONENTS: usize = 64;
+
+/// A member of the cubic family for given components. Composition-independent constants are
+/// computed once here; composition and temperature come with each call.
+#[derive(Debug, Clone)]
+pub struct Cubic {
+    kind: CubicKind,
+    spec: &'static CubicSpec,
+    crit: CriticalConstants,
+    comps: Vec<Component>,
+    /// sqrt(a_c,i), Pa^(1/2) m3/mol.
+    sqrt_ac: Vec<f64>,
+    /// b_i, m3/mol.
+    b: Vec<f64>,
+    /// Alpha parameter of each component.
+    m: Vec<f64>,
+    /// 1 - k_ij, row-major n x n.
+    one_minus_k: Vec<f64>,
+}
+
+/// The mixture parameters at one (T, x): a, T da/dT, T^2 d2a/dT2 and b.
+#[derive(Debug, Clone, Copy)]
+pub(crate) struct MixParams {
+    pub a: f64,
+    pub a_t: f64,
+    pub a_tt: f64,
+    pub b: f64,
+}
+
+impl Cubic {
+    /// Builds a member of the family for `comps`. `kij` is the n x n matrix of binary
+    /// interaction parameters, row-major (zero when `None`); it must be symmetric with a zero
+    /// diagonal.
+    pub fn new(kind: CubicKind, comps: &[Component], kij: Option<&[f64]>) -> Result<Self> {
+        let n = comps.len();
+        if n == 0 || n > MAX_COMPONENTS {
+            return Err(Error::invalid(
+                "number of components",
+                n as f64,
+                format!("1 to {MAX_COMPONENTS}"),
+            ));
+        }
+        for c in comps {
+            for (what, v) in [
+                ("critical temperature", c.tc),
+                ("critical pressure", c.pc),
+                ("molar mass", c.molar_mass),
+            ] {
+                crate::error::positive(what, v)?;
+            }
+            if !c.omega.is_finite() {
+                return Err(Error::invalid("acentric factor", c.omega, "a finite number"));
+            }
+        }
+        let one_minus_k = match kij {
+            None => vec![1.0; n * n],
+            Some(k) => {
+                if k.len() != n * n {
+                    return Err(Error::invalid(
+                        "k_ij matrix size",
+                        k.len() as f64,
+                        format!("{} entries for {n} components", n * n),
+                    ));
+                }
+                for i in 0..n {
+                    for j in 0..n {
+                        let (kij, kji) = (k[i * n + j], k[j * n + i]);
+                        if !kij.is_finite() || (kij - kji).abs() > 1e-12 || (i == j && kij != 0.0)
+                        {
+                            return Err(Error::invalid(
+                                "k_ij",
+                                kij,
+                                "finite, symmetric, zero on the diagonal",
+                            ));
+                        }
+                    }
+                }
+                k.iter().map(|k| 1.0 - k).collect()
+            }
+        };
+        let spec = kind.spec();
+        let crit = CriticalConstants::from_deltas(spec.d1, spec.d2);
+        Ok(Cubic {
+            kind,
+            spec,
+            crit,
+            sqrt_ac: comps
+                .iter()
+                .map(|c| (crit.omega_a * (R * c.tc).powi(2) / c.pc).sqrt())
+                .collect(),
+            b: comps.iter().map(|c| crit.omega_b * R * c.tc / c.pc).collect(),
+            m: comps.iter().map(|c| spec.alpha.parameter(c.omega)).collect(),
+            one_minus_k,
+            comps: comps.to_vec(),
+        })
+    }
+
+    /// Which member this is.
+    pub fn kind(&self) -> CubicKind {
+        self.kind
+    }
+
+    /// The member's constants.
+    pub fn spec(&self) -> &'static CubicSpec {
+        self.spec
+    }
+
+    /// Omega_a, Omega_b and Zc of this member.
+    pub fn critical_constants(&self) -> CriticalConstants {
+        self.crit
+    }
+
+    /// Co-volume b_i of each component, m3/mol.
+    pub fn covolumes(&self) -> &[f64] {
+        &self.b
+    }
+
+    /// 1 - k_ij, row-major.
+    pub fn one_minus_kij(&self) -> &[f64] {
+        &self.one_minus_k
+    }
+
+    /// sqrt(a_c,i) of each component.
+    pub fn sqrt_ac(&self) -> &[f64] {
+        &self.sqrt_ac
+    }
+
+    /// Alpha-function parameter of each component (m or kappa; zero where unused).
+    pub fn alpha_parameters(&self) -> &[f64] {
+        &self.m
+    }
+
+    fn sqrt_alphas(&self, t: f64, out: &mut [SqrtAlpha]) {
+        for (i, o) in out.iter_mut().enumerate() {
+            let sa = self.spec.alpha.sqrt_alpha(t / self.comps[i].tc, self.m[i]);
+            let k = self.sqrt_ac[i];
+            *o = SqrtAlpha {
+                s: k * sa.s,
+                s_t: k * sa.s_t,
+                s_tt: k * sa.s_tt,
+            };
+        }
+    }
+
+    /// a, T da/dT, T^2 d2a/dT2 and b of composition x at T; fills `sum_a` with
+    /// sum_j x_j a_ij when given (needed for fugacity coefficients).
+    pub(crate) fn mix(&self, t: f64, x: &[f64], mut sum_a: Option<&mut [f64]>) -> MixParams {
+        let n = self.comps.len();
+        let mut sa = [SqrtAlpha {
+            s: 0.0,
+            s_t: 0.0,
+            s_tt: 0.0,
+        }; MAX_COMPONENTS];
+        self.sqrt_alphas(t, &mut sa[..n]);
+        let (mut a, mut a_t, mut a_tt, mut b) = (0.0, 0.0, 0.0, 0.0);
+        for i in 0..n {
+            let row = &self.one_minus_k[i * n..(i + 1) * n];
+            let (mut ra, mut ra_t, mut ra_tt) = (0.0, 0.0, 0.0);
+            for j in 0..n {
+                let w = x[j] * row[j];
+                ra += w * sa[j].s;
+                ra_t += w * sa[j].s_t;
+                ra_tt += w * sa[j].s_tt;
+            }
+            // sum_j x_j a_ij = s_i sum_j x_j (1-k_ij) s_j and its T derivatives.
+            let si = sa[i];
+            let ai = si.s * ra;
+            if let Some(out) = sum_a.as_deref_mut() {
+                out[i] = ai;
+            }
+            a += x[i] * ai;
+            a_t += x[i] * (si.s_t * ra + si.s * ra_t);
+            a_tt += x[i] * (si.s_tt * ra + 2.0 * si.s_t * ra_t + si.s * ra_tt);
+            b += x[i] * self.b[i];
+        }
+        MixParams { a, a_t, a_tt, b }
+    }
+
+    /// The density integral D(rho) = int_0^rho dr / ((1 + d1 b r)(1 + d2 b r)) with
+    /// rho D' and rho^2 D''.
+    #[inline]
+    fn d_integral(&self, b: f64, rho: f64) -> (f64, f64, f64) {
+        let (d1, d2) = (self.spec.d1, self.spec.d2);
+        let eta = b * rho;
+        let (e1, e2) = (1.0 + d1 * eta, 1.0 + d2 * eta);
+        let d = if (d1 - d2).abs() < 1e-12 {
+            rho / e1
+        } else {
+            (e1 / e2).ln() / (b * (d1 - d2))
+        };
+        let rd1 = rho / (e1 * e2);
+        let rd2 = -rd1 * (d1 * eta / e1 + d2 * eta / e2);
+        (d, rd1, rd2)
+    }
+}
+
+impl Model for Cubic {
+    fn id(&self) -> &str {
+        self.spec.id
+    }
+
+    fn components(&self) -> &[Component] {
+        &self.comps
+    }
+
+    fn residual(&self, t: f64, rho: f64, x: &[f64]) -> Residual {
+        let mp = self.mix(t, x, None);
+        let rt = R * t;
+        let eta = mp.b * rho;
+        let (d, rd1, rd2) = self.d_integral(mp.b, rho);
+        let f = mp.a / rt;
+        let f_t = (mp.a_t - mp.a) / rt;
+        let f_tt = (mp.a_tt - 2.0 * mp.a_t + 2.0 * mp.a) / rt;
+        let one_eta = 1.0 - eta;
+        Residual {
+            a: -one_eta.ln() - f * d,
+            a_d: eta / one_eta - f * rd1,
+            a_dd: (eta / one_eta).powi(2) - f * rd2,
+            a_t: -f_t * d,
+            a_tt: -f_tt * d,
+            a_dt: -f_t * rd1,
+        }
+    }
+
+    fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]) {
+        let n = self.comps.len();
+        let mut sum_a = [0.0; MAX_COMPONENTS];
+        let mp = self.mix(t, x, Some(&mut sum_a[..n]));
+        let rt = R * t;
+        let eta = mp.b * rho;
+        let (d, rd1, _) = self.d_integral(mp.b, rho);
+        let f = mp.a / rt;
+        let z = 1.0 + eta / (1.0 - eta) - f * rd1;
+        let ln_z_b = z.ln() + (1.0 - eta).ln();
+        for i in 0..n {
+            let bi_b = self.b[i] / mp.b;
+            out[i] = bi_b * (z - 1.0) - ln_z_b - f * d * (2.0 * sum_a[i] / mp.a - bi_b);
+        }
+    }
+
+    fn densities(&self, t: f64, p: f64, x: &[f64]) -> DensityRoots {
+        let mp = self.mix(t, x, None);
+        let rt = R * t;
+        let aa = mp.a * p / (rt * rt);
+        let bb = mp.b * p / rt;
+        let (u, w) = (self.spec.d1 + self.spec.d2, self.spec.d1 * self.spec.d2);
+        let c2 = (u - 1.0) * bb - 1.0;
+        let c1 = aa + (w - u) * bb * bb - u * bb;
+        let c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
+        let roots = solve_cubic(c2, c1, c0);
+        let mut rho = [0.0; 3];
+        let mut k = 0;
+        for &z in roots.as_slice() {
+            if z > bb {
+                rho[k] = p / (z * rt);
+                k += 1;
+            }
+        }
+        DensityRoots::from_slice(&rho[..k])
+    }
+
+    fn max_density(&self, x: &[f64]) -> f64 {
+        1.0 / x.iter().zip(&self.b).map(|(x, b)| x * b).sum::<f64>()
+    }
+
+    fn critical_z(&self) -> f64 {
+        self.crit.zc
+    }
+}

@@ -1,0 +1,45 @@
+//! # eos: equations of state for real gases
+//!
+//! The physics of zfactor: models, solvers and properties, in SI units only (K, Pa, mol, m3,
+//! J). No I/O and no printing happen here; every function returns plain data or a typed
+//! [`Error`].
+//!
+//! ## Layout
+//! - [`component`], [`ideal_cp`]: what a model needs to know of one component.
+//! - [`model`]: the [`Model`] trait. Every model gives its reduced residual Helmholtz energy
+//!   and its derivatives at (T, rho, x); every property is derived from those once, in
+//!   [`properties`].
+//! - [`cubic`]: the generic two-parameter cubic and its members (van der Waals,
+//!   Redlich-Kwong, Soave-Redlich-Kwong, Peng-Robinson 1976 and 1978) over one root solver.
+//! - [`ideal`]: the ideal gas, as a model with zero residual.
+//! - [`state`]: a state from (T, P), (T, rho) or (P, rho), with the root choice.
+//!
+//! ## Example
+//! ```
+//! use eos::{Component, IdealGasCp, cubic::{Cubic, CubicKind}, state::{State, RootChoice}};
+//! // methane, constants from Poling et al. (2001), constant cp of 4.3 R for the example
+//! let ch4 = Component::new("methane", 0.016043, 190.56, 45.99e5, 0.011)
+//!     .with_cp(IdealGasCp::constant(4.3));
+//! let pr = Cubic::new(CubicKind::Pr76, &[ch4], None).unwrap();
+//! let s = State::at_tp(&pr, 300.0, 70e5, &[1.0], RootChoice::LowestGibbs).unwrap();
+//! assert!(s.props.z > 0.85 && s.props.z < 0.95);
+//! ```
+
+pub mod component;
+pub mod composition;
+pub mod constants;
+pub mod cubic;
+pub mod error;
+pub mod ideal;
+pub mod ideal_cp;
+pub mod model;
+pub mod phase;
+pub mod properties;
+pub mod residual;
+pub mod state;
+
+pub use component::Component;
+pub use error::{Error, Result};
+pub use ideal_cp::IdealGasCp;
+pub use model::Model;
+pub use residual::Residual;

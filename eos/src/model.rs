@@ -1,0 +1,106 @@
+//! The trait every equation of state implements.
+//!
+//! A model states its residual Helmholtz energy; [`crate::properties`] derives every property
+//! from it, once, for all models. Composition is an argument (not part of the model) so that
+//! phase-equilibrium solvers can evaluate trial phases of any composition with one model.
+
+use crate::component::Component;
+use crate::ideal_cp::IdealGasValues;
+use crate::residual::Residual;
+
+/// Up to three densities (mol/m3) that satisfy P(T, rho) = P for one (T, P, x), lowest first.
+#[derive(Debug, Clone, Copy, PartialEq, Default)]
+pub struct DensityRoots {
+    len: usize,
+    rho: [f64; 3],
+}
+
+impl DensityRoots {
+    /// Builds the set from candidates; keeps finite positive ones, sorted ascending.
+    pub fn from_slice(values: &[f64]) -> Self {
+        let mut out = DensityRoots::default();
+        for &v in values {
+            if v.is_finite() && v > 0.0 && out.len < 3 {
+                out.rho[out.len] = v;
+                out.len += 1;
+            }
+        }
+        out.rho[..out.len].sort_by(f64::total_cmp);
+        out
+    }
+
+    /// The roots, lowest density (most vapour-like) first.
+    pub fn as_slice(&self) -> &[f64] {
+        &self.rho[..self.len]
+    }
+
+    /// True when no physical density exists.
+    pub fn is_empty(&self) -> bool {
+        self.len == 0
+    }
+}
+
+/// An equation of state for a pure fluid or a mixture of the components it was built with.
+pub trait Model: Send + Sync {
+    /// Short identifier used in the command line and in JSON (`pr`, `srk`, ...).
+    fn id(&self) -> &str;
+
+    /// The components, in the order of every composition vector.
+    fn components(&self) -> &[Component];
+
+    /// Reduced residual Helmholtz energy and its derivatives at T (K), molar density rho
+    /// (mol/m3) and mole fractions x.
+    fn residual(&self, t: f64, rho: f64, x: &[f64]) -> Residual;
+
+    /// Natural logarithm of each component's fugacity coefficient at (T, rho, x), into `out`.
+    fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]);
+
+    /// Every density at which the model gives pressure `p` at (T, x), in mol/m3.
+    fn densities(&self, t: f64, p: f64, x: &[f64]) -> DensityRoots;
+
+    /// The highest molar density the model can represent at composition x (the co-volume
+    /// limit 1/b for a cubic), mol/m3.
+    fn max_density(&self, x: &[f64]) -> f64;
+
+    /// Ideal-gas part: cp0/R, h0/R and s0/R at P_REF for the mixture at T (no mixing
+    /// entropy; that is added by the property layer). Default: mole-fraction average of the
+    /// components' heat capacities.
+    fn ideal_gas(&self, t: f64, x: &[f64]) -> IdealGasValues {
+        let mut sum = IdealGasValues {
+            cp_r: 0.0,
+            h_r: 0.0,
+            s_r: 0.0,
+        };
+        for (c, &xi) in self.components().iter().zip(x) {
+            let v = c.cp.values(t);
+            sum.cp_r += xi * v.cp_r;
+            sum.h_r += xi * v.h_r;
+            sum.s_r += xi * v.s_r;
+        }
+        sum
+    }
+
+    /// A pseudo-critical point (T, P) of composition x used to name phases of single-phase
+    /// states: by default Kay's rule (mole-fraction averages of Tc and Pc).
+    fn pseudo_critical(&self, x: &[f64]) -> (f64, f64) {
+        self.components()
+            .iter()
+            .zip(x)
+            .fold((0.0, 0.0), |(t, p), (c, &xi)| (t + xi * c.tc, p + xi * c.pc))
+    }
+
+    /// Critical compressibility factor used with [`Model::pseudo_critical`] to estimate a
+    /// critical density when naming phases; default 0.29, a typical value for light gases.
+    fn critical_z(&self) -> f64 {
+        0.29
+    }
+
+    /// Molar mass of composition x, kg/mol.
+    fn molar_mass(&self, x: &[f64]) -> f64 {
+        self.components()
+            .iter()
+            .zip(x)
+            .map(|(c, &xi)| xi * c.molar_mass)
+            .sum()
+    }
+}

@@ -1,0 +1,210 @@
+//! A single-phase state from two intensive properties: (T, P), (T, rho) or (P, rho).
+//!
+//! For (T, P) the model may have up to three density roots; the caller chooses the one of
+//! lowest Gibbs energy (the stable one when the state is one phase), or the liquid-like
+//! (densest) or vapour-like (least dense) root. Whether a mixture splits into two phases is
+//! decided by the stability test of the phase-equilibrium layer, not here.
+
+use crate::composition;
+use crate::constants::R;
+use crate::error::{positive, Error, Result};
+use crate::model::Model;
+use crate::phase::Phase;
+use crate::properties::{evaluate, Properties};
+
+/// Which density root of (T, P) to report.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum RootChoice {
+    /// The root of lowest Gibbs energy: the stable one.
+    #[default]
+    LowestGibbs,
+    /// The densest root.
+    Liquid,
+    /// The least dense root.
+    Vapor,
+}
+
+/// A single-phase state with its phase name.
+#[derive(Debug, Clone, PartialEq)]
+pub struct State {
+    /// Every property of the state.
+    pub props: Properties,
+    /// Phase name (from the pseudo-critical point and the position among the roots).
+    pub phase: Phase,
+    /// How many density roots the model has at this (T, P).
+    pub roots: usize,
+}
+
+/// Residual Gibbs energy over RT at fixed T and P of a root; composition terms are the same
+/// for every root and left out.
+fn g_res_rt(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> f64 {
+    let r = model.residual(t, rho, x);
+    let z = r.z();
+    r.a + z - 1.0 - z.ln()
+}
+
+/// Names the phase of a single-phase state at (T, P, rho).
+fn phase_of(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -> (Phase, usize) {
+    let roots = model.densities(t, p, x);
+    let n = roots.as_slice().len();
+    let (tc, pc) = model.pseudo_critical(x);
+    if t >= tc {
+        let phase = if p >= pc {
+            Phase::Supercritical
+        } else {
+            Phase::Gas
+        };
+        return (phase, n);
+    }
+    let r = roots.as_slice();
+    let phase = if r.len() > 1 {
+        let densest = r[r.len() - 1];
+        if (rho - densest).abs() <= 1e-9 * densest {
+            Phase::Liquid
+        } else {
+            Phase::Vapor
+        }
+    } else {
+        let rho_c = pc / (model.critical_z() * R * tc);
+        if rho > rho_c {
+            Phase::Liquid
+        } else {
+            Phase::Vapor
+        }
+    };
+    (phase, n)
+}
+
+impl State {
+    /// The state at temperature `t` (K) and pressure `p` (Pa).
+    pub fn at_tp(model: &dyn Model, t: f64, p: f64, x: &[f64], root: RootChoice) -> Result<Self> {
+        positive("temperature (K)", t)?;
+        positive("pressure (Pa)", p)?;
+        composition::check(x, model.components().len())?;
+        let roots = model.densities(t, p, x);
+        let r = roots.as_slice();
+        if r.is_empty() {
+            return Err(Error::NoSolution(format!(
+                "{} has no density root at T = {t} K, P = {p} Pa",
+                model.id()
+            )));
+        }
+        let rho = match root {
+            RootChoice::Vapor => r[0],
+            RootChoice::Liquid => r[r.len() - 1],
+            RootChoice::LowestGibbs => r
+                .iter()
+                .copied()
+                .min_by(|a, b| g_res_rt(model, t, *a, x).total_cmp(&g_res_rt(model, t, *b, x)))
+                .unwrap_or(r[0]),
+        };
+        let props = evaluate(model, t, rho, x);
+        let (phase, n) = phase_of(model, t, p, rho, x);
+        Ok(State {
+            props,
+            phase,
+            roots: n,
+        })
+    }
+
+    /// The state at temperature `t` (K) and molar density `rho` (mol/m3).
+    pub fn at_trho(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> Result<Self> {
+        positive("temperature (K)", t)?;
+        positive("molar density (mol/m3)", rho)?;
+        composition::check(x, model.components().len())?;
+        check_density(model, rho, x)?;
+        let props = evaluate(model, t, rho, x);
+        if !(props.p > 0.0) || !props.p.is_finite() {
+            return Err(Error::NoSolution(format!(
+                "{} gives a pressure of {:.6e} Pa at T = {t} K, rho = {rho} mol/m3: \
+                 the state is inside the two-phase region and has no single-phase answer",
+                model.id(),
+                props.p
+            )));
+        }
+        let (phase, n) = phase_of(model, t, props.p, rho, x);
+        Ok(State {
+            props,
+            phase,
+            roots: n,
+        })
+    }
+
+    /// The state at pressure `p` (Pa) and molar density `rho` (mol/m3): the temperature is
+    /// found by a bracketed Brent search on P(T, rho) = p.
+    pub fn at_prho(model: &dyn Model, p: f64, rho: f64, x: &[f64]) -> Result<Self> {
+        positive("pressure (Pa)", p)?;
+        positive("molar density (mol/m3)", rho)?;
+        composition::check(x, model.components().len())?;
+        check_density(model, rho, x)?;
+        let f = |t: f64| rho * R * t * model.residual(t, rho, x).z() / p - 1.0;
+        let t_ideal = p / (rho * R);
+        let (mut lo, mut hi) = (t_ideal, t_ideal);
+        let mut k = 0;
+        while !(f(hi) > 0.0) {
+            hi *= 2.0;
+            k += 1;
+            if k > 60 {
+                return Err(Error::NoSolution(format!(
+                    "{} reaches no pressure of {p} Pa at rho = {rho} mol/m3 at any temperature",
+                    model.id()
+                )));
+            }
+        }
+        k = 0;
+        while !(f(lo) < 0.0) {
+            lo *= 0.5;
+            k += 1;
+            if k > 60 || lo < 1e-6 {
+                return Err(Error::NoSolution(format!(
+                    "{} has no temperature with P = {p} Pa at rho = {rho} mol/m3",
+                    model.id()
+                )));
+            }
+        }
+        let mut conv = RelTol {
+            rel: 1e-14,
+            max_iter: 200,
+        };
+        let t = roots::find_root_brent(lo, hi, f, &mut conv).map_err(|_| Error::NotConverged {
+            solver: "temperature from (P, rho)",
+            iterations: 200,
+            residual: f64::NAN,
+        })?;
+        let mut s = Self::at_trho(model, t, rho, x)?;
+        s.props.p = p;
+        Ok(s)
+    }
+}
+
+fn check_density(model: &dyn Model, rho: f64, x: &[f64]) -> Result<()> {
+    let max = model.max_density(x);
+    if rho >= max {
+        return Err(Error::OutOfRange {
+            model: model.id().to_string(),
+            what: "density",
+            detail: format!(
+                "{rho} mol/m3 is at or above the co-volume limit 1/b = {max:.6e} mol/m3"
+            ),
+        });
+    }
+    Ok(())
+}
+
+/// Brent convergence on a relative step in x and an absolute residual in y.
+struct RelTol {
+    rel: f64,
+    max_iter: usize,
+}
+
+impl roots::Convergency<f64> for RelTol {
+    fn is_root_found(&mut self, y: f64) -> bool {
+        y.abs() < 1e-15
+    }
+    fn is_converged(&mut self, x1: f64, x2: f64) -> bool {
+        (x1 - x2).abs() <= self.rel * x1.abs().max(x2.abs())
+    }
+    fn is_iteration_limit_reached(&mut self, iter: usize) -> bool {
+        iter >= self.max_iter
+    }
+}
