@@ -27,7 +27,7 @@ mod srk;
 mod vdw;
 
 pub use alpha::Alpha;
-pub use model::Cubic;
+pub use model::{Cubic, MAX_COMPONENTS};
 pub use spec::{CriticalConstants, CubicSpec};
 
 /// The members of the cubic family.

@@ -117,6 +117,27 @@ impl Cubic {
         })
     }
 
+    /// Replaces the exact Omega_a and Omega_b with rounded values, as printed in a paper or
+    /// used by another implementation whose answers are to be matched digit for digit
+    /// (Zc stays that of the exact constants).
+    pub fn with_omegas(mut self, omega_a: f64, omega_b: f64) -> Result<Self> {
+        crate::error::positive("Omega_a", omega_a)?;
+        crate::error::positive("Omega_b", omega_b)?;
+        self.sqrt_ac = self
+            .comps
+            .iter()
+            .map(|c| (omega_a * (R * c.tc).powi(2) / c.pc).sqrt())
+            .collect();
+        self.b = self
+            .comps
+            .iter()
+            .map(|c| omega_b * R * c.tc / c.pc)
+            .collect();
+        self.crit.omega_a = omega_a;
+        self.crit.omega_b = omega_b;
+        Ok(self)
+    }
+
     /// Which member this is.
     pub fn kind(&self) -> CubicKind {
         self.kind

@@ -1,0 +1,56 @@
+//! Peng-Robinson Z at (T, P) over the yardstick's two 1000 x 1000 workloads
+//! (shared/bench/yardstick_pr.py), one core, a(T) recomputed for every state.
+//! The checksums are verified before timing. Run: `cargo bench -p eos --bench z_batch`.
+
+#[path = "../tests/support/yardstick.rs"]
+mod yardstick;
+
+use divan::counter::ItemsCount;
+use divan::Bencher;
+use eos::batch::{BatchRoot, ZBatch};
+use yardstick as y;
+
+const N: usize = 1000;
+
+fn main() {
+    divan::main();
+}
+
+fn run(model: &eos::cubic::Cubic, x: &[f64], root: BatchRoot, want: f64, bencher: Bencher) {
+    let (t, p) = y::grid(N, N);
+    let batch = ZBatch::new(model, x).unwrap();
+    let mut z = vec![0.0; t.len()];
+    batch.z_tp(&t, &p, root, &mut z).unwrap();
+    let sum = y::fsum(&z);
+    assert!(
+        ((sum - want) / want).abs() < 1e-9,
+        "checksum {sum} vs yardstick {want}"
+    );
+    bencher
+        .counter(ItemsCount::new(t.len()))
+        .bench_local(|| batch.z_tp(&t, &p, root, &mut z).unwrap());
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn pure_largest(bencher: Bencher) {
+    let (m, x) = y::pure();
+    run(&m, &x, BatchRoot::Largest, y::SUM_PURE, bencher);
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn pure_gibbs(bencher: Bencher) {
+    let (m, x) = y::pure();
+    run(&m, &x, BatchRoot::LowestGibbs, y::SUM_PURE, bencher);
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn mix10_largest(bencher: Bencher) {
+    let (m, x) = y::mix();
+    run(&m, &x, BatchRoot::Largest, y::SUM_MIX_LARGEST, bencher);
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn mix10_gibbs(bencher: Bencher) {
+    let (m, x) = y::mix();
+    run(&m, &x, BatchRoot::LowestGibbs, y::SUM_MIX_GIBBS, bencher);
+}
