@@ -9,6 +9,7 @@
 //! - g_res/(RT) = alpha + Z - 1 - ln Z (= ln phi of a pure fluid)
 //! - cv = cv0 - R (a_tt + 2 a_t), cp = cv + T (dP/dT)^2 / (rho^2 dP/drho)
 //! - w^2 = (cp/cv)(dP/drho)/M, mu_JT = (T (dP/dT)/(rho^2 dP/drho) - 1/rho)/cp
+//!   = (a_dt - a_d - a_dd) / ((1 + 2 a_d + a_dd) rho cp)
 //! - isentropic exponent k = -(v/P)(dP/dv)_s = (rho/P)(cp/cv)(dP/drho)_T
 //!
 //! Ideal-gas enthalpy and entropy are relative to [`crate::constants::T_REF`] and
@@ -101,7 +102,11 @@ pub fn evaluate(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> Properties {
         let w2 = cp / cv * dp_drho / molar_mass;
         (w2 > 0.0).then(|| w2.sqrt())
     });
-    let jt = cp.map(|cp| (t * dp_dt / (rho * rho * dp_drho) - 1.0 / rho) / cp);
+    // T (dP/dT)/(rho dP/drho) - 1 written in residual terms, so that it is exactly zero for
+    // the ideal gas instead of a difference of two rounded equal numbers.
+    let jt = cp.map(|cp| {
+        (r.a_dt - r.a_d - r.a_dd) / r.dp_drho_rt() / (rho * cp)
+    });
     let isentropic_exponent = cp.map(|cp| rho / p * cp / cv * dp_drho);
     let mut ln_phi = vec![0.0; x.len()];
     model.ln_phi(t, rho, x, &mut ln_phi);

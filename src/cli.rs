@@ -1,0 +1,131 @@
+//! Command-line definitions (clap derive). Raw strings only: units and compositions are
+//! read by [`crate::units`] and [`crate::feed`], so their messages can quote the input.
+
+use clap::{Args, Parser, Subcommand, ValueEnum};
+
+/// Real-gas Z, density and energy properties, with every model side by side.
+#[derive(Debug, Parser)]
+#[command(name = "zfactor", version, about, long_about = None)]
+pub struct Cli {
+    #[command(subcommand)]
+    pub command: Command,
+}
+
+/// The commands.
+#[derive(Debug, Subcommand)]
+pub enum Command {
+    /// Properties of one state of a fluid or mixture, for one model or several side by side.
+    State(StateArgs),
+    /// List, search or show component data with their sources.
+    Fluids(FluidsArgs),
+    /// Run the built-in demonstration (a fuel-gas skid of a fictional compressor station).
+    Demo(DemoArgs),
+}
+
+/// Output formats.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, ValueEnum)]
+pub enum Format {
+    /// A table for the terminal.
+    Table,
+    /// Comma-separated values, one row per result, SI units.
+    Csv,
+    /// One JSON object, SI units.
+    Json,
+}
+
+/// Basis of the entered fractions.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, ValueEnum)]
+pub enum Basis {
+    /// Mole (molar, volume for ideal gases) fractions.
+    Mole,
+    /// Mass fractions.
+    Mass,
+}
+
+/// Which density root to report when a model has several at (T, P).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, ValueEnum)]
+pub enum RootArg {
+    /// The stable root (lowest Gibbs energy).
+    Stable,
+    /// The liquid-like (densest) root.
+    Liquid,
+    /// The vapour-like (least dense) root.
+    Vapor,
+}
+
+/// A fluid or a mixture.
+#[derive(Debug, Args)]
+pub struct FluidArgs {
+    /// A pure fluid by name, alias, formula or CAS number (e.g. methane, CO2, 124-38-9).
+    #[arg(long, conflicts_with = "mix", required_unless_present = "mix")]
+    pub fluid: Option<String>,
+    /// A mixture as name=fraction pairs, e.g. "methane=0.9,ethane=0.1" or "CH4=90%,C2H6=10%".
+    #[arg(long)]
+    pub mix: Option<String>,
+    /// Basis of the fractions in --mix.
+    #[arg(long, value_enum, default_value = "mole")]
+    pub basis: Basis,
+    /// Scale fractions that do not sum to one (or percentages to 100) instead of refusing them.
+    #[arg(long)]
+    pub normalize: bool,
+}
+
+/// Arguments of `zfactor state`.
+#[derive(Debug, Args)]
+pub struct StateArgs {
+    #[command(flatten)]
+    pub fluid: FluidArgs,
+    /// Temperature with its unit: "300 K", "25 degC", "77 degF", "540 R".
+    #[arg(long, short = 't', allow_hyphen_values = true)]
+    pub temperature: Option<String>,
+    /// Pressure with its unit, absolute or gauge: "5 MPa", "70 barg", "1000 psig", "1 atm".
+    #[arg(long, short = 'p', allow_hyphen_values = true)]
+    pub pressure: Option<String>,
+    /// Mass or molar density with its unit: "50 kg/m3", "2.5 mol/L".
+    #[arg(long, short = 'd', allow_hyphen_values = true)]
+    pub density: Option<String>,
+    /// Ambient pressure that gauge readings are referred to.
+    #[arg(long, default_value = "101.325 kPa")]
+    pub ambient: String,
+    /// Model id, a comma-separated list, or "all": ideal, vdw, rk, srk, pr, pr78.
+    #[arg(long, short = 'm', default_value = "all")]
+    pub model: String,
+    /// Which density root to report when a model has several.
+    #[arg(long, value_enum, default_value = "stable")]
+    pub root: RootArg,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+/// Arguments of `zfactor fluids`.
+#[derive(Debug, Args)]
+pub struct FluidsArgs {
+    /// A component to show (name, alias, formula or CAS); all are listed when omitted.
+    pub name: Option<String>,
+    /// List the components whose name, alias, formula or CAS contains this text.
+    #[arg(long, conflicts_with = "name")]
+    pub search: Option<String>,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+/// Arguments of `zfactor demo`.
+#[derive(Debug, Args)]
+pub struct DemoArgs {
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use clap::CommandFactory;
+
+    #[test]
+    fn the_command_line_definition_is_consistent() {
+        Cli::command().debug_assert();
+    }
+}

@@ -1,0 +1,255 @@
+//! `zfactor state`: one state of a fluid or mixture, for each requested model.
+
+use crate::cli::{RootArg, StateArgs};
+use crate::error::{from_eos, CliError};
+use crate::feed::{self, Feed};
+use crate::models::{self, BuiltModel};
+use crate::report::state::{CompositionRow, FugacityRow, ModelResult, StateInput, StateReport};
+use crate::units::{self, Density};
+use eos::state::{RootChoice, State};
+
+/// The two properties that fix the state, in SI.
+#[derive(Debug, Clone, Copy)]
+pub enum Given {
+    /// T (K) and P (Pa).
+    Tp(f64, f64),
+    /// T (K) and molar density (mol/m3).
+    TRho(f64, f64),
+    /// P (Pa) and molar density (mol/m3).
+    PRho(f64, f64),
+}
+
+impl Given {
+    fn name(self) -> &'static str {
+        match self {
+            Given::Tp(..) => "T,P",
+            Given::TRho(..) => "T,density",
+            Given::PRho(..) => "P,density",
+        }
+    }
+}
+
+/// Computes the state with every requested model.
+pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
+    let feed = feed::read(&args.fluid)?;
+    let ambient = units::pressure(&args.ambient)
+        .and_then(|p| units::absolute_pressure(&args.ambient, p, 0.0))?;
+    let t = args.temperature.as_deref().map(units::temperature).transpose()?;
+    let p = match args.pressure.as_deref() {
+        Some(text) => {
+            let reading = units::pressure(text)?;
+            Some((units::absolute_pressure(text, reading, ambient)?, reading.is_gauge()))
+        }
+        None => None,
+    };
+    let rho = args
+        .density
+        .as_deref()
+        .map(units::density)
+        .transpose()?
+        .map(|d: Density| d.molar(feed.molar_mass()));
+    let given = match (t, p, rho) {
+        (Some(t), Some((p, _)), None) => Given::Tp(t, p),
+        (Some(t), None, Some(r)) => Given::TRho(t, r),
+        (None, Some((p, _)), Some(r)) => Given::PRho(p, r),
+        _ => {
+            return Err(CliError::BadInput(
+                "give exactly two of --temperature, --pressure and --density".to_string(),
+            ))
+        }
+    };
+    let ids = models::resolve_ids(&args.model)?;
+    let all = args.model.trim().eq_ignore_ascii_case("all");
+    let root = match args.root {
+        RootArg::Stable => RootChoice::LowestGibbs,
+        RootArg::Liquid => RootChoice::Liquid,
+        RootArg::Vapor => RootChoice::Vapor,
+    };
+    let mut results = Vec::new();
+    let mut warnings = Vec::new();
+    for id in &ids {
+        let built = models::build(id, &feed)?;
+        match compute(&built, &feed, given, root) {
+            Ok(r) => results.push(r),
+            Err(e) if all => warnings.push(format!("{id} left out: {e}")),
+            Err(e) => return Err(e),
+        }
+    }
+    if results.is_empty() {
+        return Err(CliError::Computation(format!(
+            "no model could compute this state: {}",
+            warnings.join("; ")
+        )));
+    }
+    warnings.extend(extrapolation_warnings(&feed, &results));
+    Ok(StateReport {
+        tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
+        fluid: feed.label(),
+        input: StateInput {
+            given: given.name(),
+            temperature: args.temperature.clone(),
+            pressure: args.pressure.clone(),
+            density: args.density.clone(),
+            temperature_k: t,
+            pressure_pa: p.map(|p| p.0),
+            pressure_is_gauge: p.is_some_and(|p| p.1),
+            ambient_pressure_pa: ambient,
+            basis: feed::basis_name(feed.basis),
+            normalized_from: feed.normalized_from,
+            root: match args.root {
+                RootArg::Stable => "stable",
+                RootArg::Liquid => "liquid",
+                RootArg::Vapor => "vapor",
+            },
+        },
+        composition: composition_rows(&feed),
+        results,
+        warnings,
+        caution: crate::CAUTION,
+    })
+}
+
+/// The composition table of a feed.
+pub fn composition_rows(feed: &Feed) -> Vec<CompositionRow> {
+    feed.records
+        .iter()
+        .enumerate()
+        .map(|(i, r)| CompositionRow {
+            id: r.id.clone(),
+            name: r.name.clone(),
+            as_entered: feed.as_entered[i],
+            mole_fraction: feed.mole[i],
+            mass_fraction: feed.mass[i],
+        })
+        .collect()
+}
+
+/// One model's result.
+fn compute(
+    built: &BuiltModel,
+    feed: &Feed,
+    given: Given,
+    root: RootChoice,
+) -> Result<ModelResult, CliError> {
+    let m = built.model.as_ref();
+    let x = &feed.mole;
+    let ctx = format!("model {}", built.id);
+    let state = match given {
+        Given::Tp(t, p) => State::at_tp(m, t, p, x, root),
+        Given::TRho(t, r) => State::at_trho(m, t, r, x),
+        Given::PRho(p, r) => State::at_prho(m, p, r, x),
+    }
+    .map_err(|e| from_eos(&ctx, e))?;
+    let pr = &state.props;
+    let (dev, of) = match given {
+        Given::Tp(..) => (pr.z - 1.0, "density"),
+        Given::TRho(..) => (1.0 / pr.z - 1.0, "pressure"),
+        Given::PRho(..) => (pr.z - 1.0, "temperature"),
+    };
+    let mut notes = built.notes.clone();
+    if pr.cp.is_none() {
+        notes.push(
+            "cp, speed of sound, Joule-Thomson coefficient and isentropic exponent are undefined: \
+             the state is mechanically unstable (dP/drho <= 0)"
+                .to_string(),
+        );
+    }
+    let mm = pr.molar_mass;
+    let result = ModelResult {
+        model: built.id.clone(),
+        model_name: built.name.clone(),
+        citation: built.citation.clone(),
+        phase: state.phase.to_string(),
+        roots: state.roots,
+        temperature_k: pr.t,
+        pressure_pa: pr.p,
+        z: pr.z,
+        molar_density_mol_m3: pr.rho,
+        mass_density_kg_m3: pr.mass_density(),
+        molar_volume_m3_mol: pr.molar_volume(),
+        specific_volume_m3_kg: pr.molar_volume() / mm,
+        ideal_gas_deviation_pct: 100.0 * dev,
+        ideal_gas_deviation_of: of,
+        enthalpy_j_mol: pr.h,
+        entropy_j_mol_k: pr.s,
+        internal_energy_j_mol: pr.u,
+        enthalpy_j_kg: pr.h / mm,
+        entropy_j_kg_k: pr.s / mm,
+        cv_j_mol_k: pr.cv,
+        cp_j_mol_k: pr.cp,
+        speed_of_sound_m_s: pr.w,
+        joule_thomson_k_pa: pr.jt,
+        isentropic_exponent: pr.isentropic_exponent,
+        residual_enthalpy_j_mol: pr.h_res,
+        residual_entropy_j_mol_k: pr.s_res,
+        residual_gibbs_j_mol: pr.g_res,
+        fugacity: feed
+            .records
+            .iter()
+            .zip(&pr.ln_phi)
+            .zip(x)
+            .map(|((r, lp), xi)| FugacityRow {
+                component: r.id.clone(),
+                phi: lp.exp(),
+                fugacity_pa: xi * lp.exp() * pr.p,
+            })
+            .collect(),
+        notes,
+    };
+    check_finite(&result)?;
+    Ok(result)
+}
+
+/// Refuses a result carrying NaN or infinity: no such number reaches the output silently.
+fn check_finite(r: &ModelResult) -> Result<(), CliError> {
+    let values = [
+        r.z,
+        r.molar_density_mol_m3,
+        r.mass_density_kg_m3,
+        r.enthalpy_j_mol,
+        r.entropy_j_mol_k,
+        r.cv_j_mol_k,
+        r.residual_gibbs_j_mol,
+        r.temperature_k,
+        r.pressure_pa,
+    ];
+    let optional = [
+        r.cp_j_mol_k,
+        r.speed_of_sound_m_s,
+        r.joule_thomson_k_pa,
+        r.isentropic_exponent,
+    ];
+    let fug = r.fugacity.iter().map(|f| f.phi);
+    if values
+        .into_iter()
+        .chain(optional.into_iter().flatten())
+        .chain(fug)
+        .all(f64::is_finite)
+    {
+        Ok(())
+    } else {
+        Err(CliError::Computation(format!(
+            "model {} gave a non-finite property at this state",
+            r.model
+        )))
+    }
+}
+
+/// Warnings for heat capacities used outside their fitted range.
+fn extrapolation_warnings(feed: &Feed, results: &[ModelResult]) -> Vec<String> {
+    let mut out = Vec::new();
+    let Some(t) = results.first().map(|r| r.temperature_k) else {
+        return out;
+    };
+    for r in &feed.records {
+        let (lo, hi) = r.cp_range_k;
+        if t < lo || t > hi {
+            out.push(format!(
+                "the ideal-gas heat capacity of {} is fitted from {lo} K to {hi} K; at {t:.2} K it is \
+                 extrapolated, so h, s, cp, cv and w are less certain (Z and density are not affected)",
+                r.name
+            ));
+        }
+    }
+    out
+}

@@ -1,0 +1,51 @@
+//! # zfactor (the command-line tool)
+//!
+//! Parses the command line into typed requests, runs the computation in the `eos` library
+//! with data from `fluids`, and renders plain report structs as a terminal table, CSV or
+//! JSON. Nothing here does physics.
+//!
+//! - [`cli`]: the clap definitions of every command and option.
+//! - [`units`], [`feed`]: quantities with units and compositions, read once into SI.
+//! - [`models`]: model ids to models.
+//! - [`commands`]: one function per command, returning a report.
+//! - [`report`]: the report structs; [`render`]: one file per output format.
+
+pub mod cli;
+pub mod commands;
+pub mod error;
+pub mod exit;
+pub mod feed;
+pub mod models;
+pub mod render;
+pub mod report;
+pub mod units;
+
+use clap::Parser;
+use error::CliError;
+use exit::Exit;
+use std::ffi::OsString;
+
+/// The caution printed with every result that may be used for pressure equipment.
+pub const CAUTION: &str = "zfactor is a screening and design-support tool. Pressure equipment, \
+cylinders and relief systems must be designed to the applicable local codes and checked by a \
+licensed engineer.";
+
+/// Runs the program with command-line arguments `args` (the first is the program name),
+/// printing results to stdout. Returns the exit status to report.
+pub fn run<I>(args: I) -> Result<Exit, CliError>
+where
+    I: IntoIterator<Item = OsString>,
+{
+    let cli = match cli::Cli::try_parse_from(args) {
+        Ok(c) => c,
+        Err(e) => {
+            use clap::error::ErrorKind;
+            if matches!(e.kind(), ErrorKind::DisplayHelp | ErrorKind::DisplayVersion) {
+                print!("{e}");
+                return Ok(Exit::Success);
+            }
+            return Err(CliError::BadInput(e.to_string().trim_end().to_string()));
+        }
+    };
+    commands::dispatch(&cli)
+}

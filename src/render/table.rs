@@ -1,0 +1,221 @@
+//! Terminal tables. State results put the models side by side, one column each, so the
+//! ideal-gas answer and every real-gas model can be read across one row.
+
+use crate::render::number::{opt, sig};
+use crate::report::fluids::FluidsReport;
+use crate::report::state::StateReport;
+use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
+use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
+
+/// Rules above and below the table and under the header; no vertical lines, no rules between
+/// rows, so long property lists stay compact.
+const STYLE: TableStyle = TableStyle::new()
+    .top_border(LineStyle::none().fill('-').junction('-'))
+    .header_separator(LineStyle::none().fill('-').junction('-'))
+    .bottom_border(LineStyle::none().fill('-').junction('-'));
+
+fn new_table() -> Table {
+    let mut t = Table::new();
+    t.load_style(STYLE)
+        .set_content_arrangement(ContentArrangement::Disabled);
+    t
+}
+
+/// The state report as text.
+pub fn state(r: &StateReport) -> String {
+    let mut out = String::new();
+    out.push_str(&format!("{}\n", r.fluid));
+    let inp = &r.input;
+    let mut given = Vec::new();
+    if let Some(t) = inp.temperature_k {
+        given.push(format!(
+            "T = {} K ({} degC)",
+            sig(t, 6),
+            sig(t - KELVIN_AT_0_DEGC, 5)
+        ));
+    }
+    if let Some(p) = inp.pressure_pa {
+        let mut s = format!("P = {} bar abs", sig(p / PA_PER_BAR, 6));
+        if inp.pressure_is_gauge {
+            s.push_str(&format!(
+                " (entered as {}, ambient {} bar)",
+                inp.pressure.as_deref().unwrap_or(""),
+                sig(inp.ambient_pressure_pa / PA_PER_BAR, 6)
+            ));
+        }
+        given.push(s);
+    }
+    if let Some(d) = &inp.density {
+        given.push(format!("density = {d}"));
+    }
+    out.push_str(&format!("state: {}\n", given.join(", ")));
+    if r.composition.len() > 1 {
+        let mut c = new_table();
+        c.set_header(vec!["component", "entered", "mole fraction", "mass fraction"]);
+        for row in &r.composition {
+            c.add_row(vec![
+                row.name.clone(),
+                sig(row.as_entered, 6),
+                sig(row.mole_fraction, 6),
+                sig(row.mass_fraction, 6),
+            ]);
+        }
+        right_align(&mut c, 1);
+        out.push_str(&format!("{c}\n"));
+        if let Some(s) = inp.normalized_from {
+            out.push_str(&format!("(entered fractions summed to {s}; normalised)\n"));
+        }
+    }
+
+    let mut t = new_table();
+    let mut header = vec!["property".to_string(), "unit".to_string()];
+    header.extend(r.results.iter().map(|m| m.model.clone()));
+    t.set_header(header);
+    let row = |t: &mut Table, name: &str, unit: &str, f: &dyn Fn(usize) -> String| {
+        let mut cells = vec![name.to_string(), unit.to_string()];
+        cells.extend((0..r.results.len()).map(f));
+        t.add_row(cells);
+    };
+    let res = &r.results;
+    row(&mut t, "phase", "", &|i| res[i].phase.clone());
+    if inp.temperature_k.is_none() {
+        row(&mut t, "temperature", "K", &|i| sig(res[i].temperature_k, 6));
+    }
+    if inp.pressure_pa.is_none() {
+        row(&mut t, "pressure", "bar abs", &|i| {
+            sig(res[i].pressure_pa / PA_PER_BAR, 6)
+        });
+    }
+    row(&mut t, "Z", "-", &|i| sig(res[i].z, 6));
+    row(&mut t, "density", "kg/m3", &|i| sig(res[i].mass_density_kg_m3, 6));
+    row(&mut t, "molar density", "mol/m3", &|i| {
+        sig(res[i].molar_density_mol_m3, 6)
+    });
+    row(&mut t, "specific volume", "m3/kg", &|i| {
+        sig(res[i].specific_volume_m3_kg, 6)
+    });
+    let of = res[0].ideal_gas_deviation_of;
+    row(&mut t, &format!("ideal-gas error in {of}"), "%", &|i| {
+        sig(res[i].ideal_gas_deviation_pct, 4)
+    });
+    row(&mut t, "enthalpy", "kJ/kg", &|i| sig(res[i].enthalpy_j_kg / 1e3, 6));
+    row(&mut t, "entropy", "kJ/(kg K)", &|i| {
+        sig(res[i].entropy_j_kg_k / 1e3, 6)
+    });
+    let mm = |i: usize| res[i].mass_density_kg_m3 / res[i].molar_density_mol_m3;
+    row(&mut t, "cp", "kJ/(kg K)", &|i| {
+        opt(res[i].cp_j_mol_k.map(|c| c / mm(i) / 1e3), 5)
+    });
+    row(&mut t, "cv", "kJ/(kg K)", &|i| sig(res[i].cv_j_mol_k / mm(i) / 1e3, 5));
+    row(&mut t, "speed of sound", "m/s", &|i| opt(res[i].speed_of_sound_m_s, 5));
+    row(&mut t, "Joule-Thomson coeff.", "K/bar", &|i| {
+        opt(res[i].joule_thomson_k_pa.map(|j| j * PA_PER_BAR), 4)
+    });
+    row(&mut t, "isentropic exponent", "-", &|i| opt(res[i].isentropic_exponent, 5));
+    for (k, c) in r.composition.iter().enumerate() {
+        let name = if r.composition.len() == 1 {
+            "fugacity coeff.".to_string()
+        } else {
+            format!("fugacity coeff. {}", c.id)
+        };
+        row(&mut t, &name, "-", &|i| sig(res[i].fugacity[k].phi, 6));
+    }
+    right_align(&mut t, 2);
+    out.push_str(&format!("{t}\n"));
+    let mut notes: Vec<String> = Vec::new();
+    for m in res {
+        for n in &m.notes {
+            notes.push(format!("{}: {n}", m.model));
+        }
+    }
+    if !notes.is_empty() {
+        out.push_str("notes:\n");
+        for n in notes {
+            out.push_str(&format!("  {n}\n"));
+        }
+    }
+    out.push_str("h and s: zero for each ideal gas at 298.15 K and 101.325 kPa.\n");
+    out.push_str(&format!("caution: {}\n", r.caution));
+    out
+}
+
+/// The component list or one component's record, as text.
+pub fn fluids(r: &FluidsReport) -> String {
+    if r.components.len() == 1 && r.query.is_some() {
+        return one_fluid(r.components[0]);
+    }
+    let mut t = new_table();
+    t.set_header(vec![
+        "id", "name", "formula", "M g/mol", "Tc K", "Pc bar", "omega", "Tb K",
+    ]);
+    for c in &r.components {
+        t.add_row(vec![
+            c.id.clone(),
+            c.name.clone(),
+            c.formula.clone().unwrap_or_default(),
+            sig(c.molar_mass_kg_mol * 1e3, 6),
+            sig(c.tc_k, 5),
+            sig(c.pc_pa / PA_PER_BAR, 5),
+            sig(c.omega, 3),
+            c.tb_k.map_or_else(|| "-".to_string(), |t| sig(t, 5)),
+        ]);
+    }
+    right_align(&mut t, 3);
+    format!(
+        "{t}\n{} components; `zfactor fluids NAME` shows one with its sources.\n",
+        r.components.len()
+    )
+}
+
+fn one_fluid(c: &fluids::ComponentRecord) -> String {
+    let mut t = new_table();
+    t.set_header(vec!["field", "value"]);
+    let rows: Vec<(&str, String)> = vec![
+        ("id", c.id.clone()),
+        ("name", c.name.clone()),
+        ("aliases", c.aliases.join(", ")),
+        ("formula", c.formula.clone().unwrap_or_else(|| "-".into())),
+        ("CAS", c.cas.clone()),
+        ("molar mass", format!("{} g/mol", sig(c.molar_mass_kg_mol * 1e3, 7))),
+        ("critical temperature", format!("{} K", sig(c.tc_k, 6))),
+        ("critical pressure", format!("{} bar", sig(c.pc_pa / PA_PER_BAR, 6))),
+        ("acentric factor", sig(c.omega, 4)),
+        (
+            "critical volume",
+            c.vc_m3_mol
+                .map_or_else(|| "-".into(), |v| format!("{} cm3/mol", sig(v * 1e6, 5))),
+        ),
+        ("critical Z", opt(c.zc, 4)),
+        (
+            "normal boiling point",
+            c.tb_k.map_or_else(|| "-".into(), |t| format!("{} K", sig(t, 6))),
+        ),
+        ("confidence", format!("{:?}", c.confidence).to_lowercase()),
+        ("source", c.source.clone()),
+        ("source detail", c.source_detail.clone()),
+        ("notes", c.notes.clone()),
+        (
+            "ideal-gas cp",
+            format!(
+                "{} K to {} K, {}",
+                sig(c.cp_range_k.0, 5),
+                sig(c.cp_range_k.1, 5),
+                c.cp_source
+            ),
+        ),
+    ];
+    for (k, v) in rows {
+        t.add_row(vec![k.to_string(), v]);
+    }
+    t.set_content_arrangement(ContentArrangement::Dynamic);
+    t.set_width(110);
+    format!("{t}\n")
+}
+
+fn right_align(t: &mut Table, from: usize) {
+    for (i, col) in t.column_iter_mut().enumerate() {
+        if i >= from {
+            col.set_cell_alignment(CellAlignment::Right);
+        }
+    }
+}

@@ -1,0 +1,5 @@
+//! Report structs: plain data, SI units, serialisable. Renderers in [`crate::render`] turn
+//! them into tables, CSV or JSON; nothing here formats numbers for display.
+
+pub mod fluids;
+pub mod state;

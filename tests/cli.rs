@@ -1,0 +1,187 @@
+//! End-to-end tests of the `zfactor` binary: the scriptable interface (JSON field names,
+//! exit codes, stderr/stdout split), every model and input pair, and bad input.
+//!
+//! Physics is checked in the library tests; here the numbers are checked against the library
+//! called directly and against exact relations (ideal-gas density P/RT with the CODATA R).
+
+use assert_cmd::Command;
+use predicates::prelude::*;
+use serde_json::Value;
+
+fn zf() -> Command {
+    Command::cargo_bin("zfactor").unwrap()
+}
+
+fn json(args: &[&str]) -> Value {
+    let out = zf().args(args).args(["--format", "json"]).output().unwrap();
+    assert!(
+        out.status.success(),
+        "{:?} failed: {}",
+        args,
+        String::from_utf8_lossy(&out.stderr)
+    );
+    serde_json::from_slice(&out.stdout).unwrap()
+}
+
+const MODELS: [&str; 6] = ["ideal", "vdw", "rk", "srk", "pr", "pr78"];
+
+#[test]
+fn state_json_has_the_fixed_fields_for_every_model() {
+    let v = json(&[
+        "state", "--fluid", "methane", "--temperature", "300 K", "--pressure", "70 barg",
+        "--model", "all",
+    ]);
+    let results = v["results"].as_array().unwrap();
+    assert_eq!(results.len(), MODELS.len());
+    for (r, id) in results.iter().zip(MODELS) {
+        assert_eq!(r["model"], id);
+        for key in ["phase", "z", "molar_density_mol_m3", "mass_density_kg_m3"] {
+            assert!(!r[key].is_null(), "{id} lacks {key}");
+        }
+    }
+    // 70 barg with the default ambient of 101.325 kPa.
+    assert_eq!(v["input"]["pressure_pa"].as_f64().unwrap(), 7_101_325.0);
+    // Ideal gas: rho = P/(R T) with R = 8.314462618 J/(mol K) (CODATA 2018, exact).
+    let rho = results[0]["molar_density_mol_m3"].as_f64().unwrap();
+    let want = 7_101_325.0 / (8.314_462_618 * 300.0);
+    assert!((rho / want - 1.0).abs() < 1e-14);
+}
+
+#[test]
+fn the_cli_reports_what_the_library_computes() {
+    use eos::cubic::{Cubic, CubicKind};
+    use eos::state::{RootChoice, State};
+    let rec = fluids::find("ethane").unwrap();
+    let m = Cubic::new(CubicKind::Srk, &[rec.to_component()], None).unwrap();
+    let s = State::at_tp(&m, 350.0, 4e6, &[1.0], RootChoice::LowestGibbs).unwrap();
+    let v = json(&[
+        "state", "--fluid", "ethane", "-t", "350 K", "-p", "4 MPa", "-m", "srk",
+    ]);
+    let z = v["results"][0]["z"].as_f64().unwrap();
+    assert!((z - s.props.z).abs() < 1e-15);
+}
+
+#[test]
+fn every_input_pair_for_pure_fluids_and_mixtures() {
+    let mix = "methane=0.9,ethane=0.07,propane=0.03";
+    for fluid in [["--fluid", "nitrogen"], ["--mix", mix]] {
+        for model in MODELS {
+            let tp = json(&[
+                "state", fluid[0], fluid[1], "-t", "280 K", "-p", "50 bar", "-m", model,
+            ]);
+            let rho = tp["results"][0]["molar_density_mol_m3"].as_f64().unwrap();
+            let dens = format!("{rho} mol/m3");
+            let td = json(&["state", fluid[0], fluid[1], "-t", "280 K", "-d", &dens, "-m", model]);
+            let p = td["results"][0]["pressure_pa"].as_f64().unwrap();
+            assert!((p / 50e5 - 1.0).abs() < 1e-9, "{model}: {p}");
+            let pd = json(&["state", fluid[0], fluid[1], "-p", "50 bar", "-d", &dens, "-m", model]);
+            let t = pd["results"][0]["temperature_k"].as_f64().unwrap();
+            assert!((t / 280.0 - 1.0).abs() < 1e-9, "{model}: {t}");
+        }
+    }
+}
+
+#[test]
+fn mass_basis_and_percent_give_the_same_mixture() {
+    let a = json(&[
+        "state", "--mix", "methane=90%,ethane=10%", "-t", "300 K", "-p", "1 MPa", "-m", "pr",
+    ]);
+    let x: Vec<f64> = a["composition"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .map(|c| c["mass_fraction"].as_f64().unwrap())
+        .collect();
+    let mass = format!("methane={},ethane={}", x[0], x[1]);
+    let b = json(&[
+        "state", "--mix", &mass, "--basis", "mass", "-t", "300 K", "-p", "1 MPa", "-m", "pr",
+    ]);
+    let xm = b["composition"][0]["mole_fraction"].as_f64().unwrap();
+    assert!((xm - 0.9).abs() < 1e-12, "{xm}");
+    let za = a["results"][0]["z"].as_f64().unwrap();
+    let zb = b["results"][0]["z"].as_f64().unwrap();
+    assert!((za - zb).abs() < 1e-12);
+}
+
+#[test]
+fn gauge_pressure_uses_the_stated_ambient() {
+    let v = json(&[
+        "state", "--fluid", "air", "-t", "20 degC", "-p", "10 barg", "--ambient", "0.95 bar",
+        "-m", "ideal",
+    ]);
+    assert_eq!(v["input"]["ambient_pressure_pa"].as_f64().unwrap(), 95_000.0);
+    assert_eq!(v["input"]["pressure_pa"].as_f64().unwrap(), 1_095_000.0);
+    assert_eq!(v["input"]["pressure_is_gauge"], true);
+}
+
+#[test]
+fn fluids_json_has_the_fixed_fields() {
+    let v = json(&["fluids", "CO2"]);
+    for key in ["name", "tc_k", "pc_pa", "omega", "molar_mass_kg_mol", "source"] {
+        assert!(!v[key].is_null(), "missing {key}");
+    }
+    assert!((v["tc_k"].as_f64().unwrap() - 304.1).abs() < 0.2);
+}
+
+#[test]
+fn table_output_and_demo_run() {
+    zf().args(["demo"])
+        .assert()
+        .success()
+        .stdout(predicate::str::contains("pr78").and(predicate::str::contains("caution")));
+    zf().args(["state", "--fluid", "methane", "-t", "300 K", "-p", "70 bar"])
+        .assert()
+        .success()
+        .stdout(predicate::str::contains("Z"));
+    zf().args(["fluids"]).assert().success();
+    zf().args(["fluids", "--search", "butane"])
+        .assert()
+        .success()
+        .stdout(predicate::str::contains("isobutane"));
+}
+
+/// Runs a bad command and checks: exit code 2, nothing on stdout, one message on stderr
+/// that contains `quote`.
+fn refused(args: &[&str], quote: &str) {
+    let out = zf().args(args).output().unwrap();
+    assert_eq!(out.status.code(), Some(2), "{args:?}");
+    assert!(out.stdout.is_empty(), "{args:?} printed partial output");
+    let err = String::from_utf8_lossy(&out.stderr);
+    assert!(err.contains(quote), "{args:?}: {err}");
+}
+
+#[test]
+fn bad_input_is_refused_with_a_message_that_quotes_it() {
+    let s = ["state", "-m", "pr"];
+    let run = |extra: &[&str], quote: &str| {
+        let mut a: Vec<&str> = s.to_vec();
+        a.extend_from_slice(extra);
+        refused(&a, quote);
+    };
+    run(&["--fluid", "unobtainium", "-t", "300 K", "-p", "1 bar"], "unobtainium");
+    run(&["--fluid", "methan", "-t", "300 K", "-p", "1 bar"], "methane");
+    run(&["--fluid", "methane", "-t", "300", "-p", "1 bar"], "\"300\"");
+    run(&["--fluid", "methane", "-t", "300 K", "-p", "1 bra"], "bra");
+    run(&["--fluid", "methane", "-t", "300 K", "-p", "0 bar"], "0 bar");
+    run(&["--fluid", "methane", "-t", "300 K", "-p", "-2 barg"], "-2 barg");
+    run(&["--fluid", "methane", "-t", "-300 degC", "-p", "1 bar"], "-300 degC");
+    run(&["--fluid", "methane", "-t", "NaN K", "-p", "1 bar"], "NaN K");
+    run(&["--fluid", "methane", "-t", "300 K", "-p", "inf bar"], "inf bar");
+    run(&["--mix", "methane=0.9,ethane=0.05", "-t", "300 K", "-p", "1 bar"], "0.95");
+    run(&["--mix", "methane=1.1,ethane=-0.1", "-t", "300 K", "-p", "1 bar"], "-0.1");
+    run(&["--mix", "methane=90,ethane=10", "-t", "300 K", "-p", "1 bar"], "percent");
+    run(&["--fluid", "methane", "-t", "300 K"], "two of");
+    run(&["--fluid", "methane", "-t", "300 K", "-d", "30000 mol/m3"], "co-volume");
+    run(&["--fluid", "methane", "-t", "300 K", "-p", "1 bar", "-m", "xyz"], "xyz");
+}
+
+#[test]
+fn normalisation_only_when_asked() {
+    let v = json(&[
+        "state", "--mix", "methane=0.9,ethane=0.05", "--normalize", "-t", "300 K", "-p",
+        "1 bar", "-m", "pr",
+    ]);
+    assert!((v["input"]["normalized_from"].as_f64().unwrap() - 0.95).abs() < 1e-15);
+    let x = v["composition"][0]["mole_fraction"].as_f64().unwrap();
+    assert!((x - 0.9 / 0.95).abs() < 1e-15);
+}
