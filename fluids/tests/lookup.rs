@@ -137,3 +137,29 @@ fn search_finds_substrings() {
     assert!(ids("zzzz").is_empty());
     assert_eq!(search("").len(), fluids::all().len());
 }
+
+#[test]
+fn a_formula_never_resolves_to_another_component() {
+    // A formula must name its own row, or be ambiguous among rows that include it; it must not
+    // collide with another component's id, name or alias.
+    for c in fluids::all() {
+        let Some(f) = &c.formula else { continue };
+        match find(f) {
+            Ok(r) => assert_eq!(r.id, c.id, "formula {f}"),
+            Err(LookupError::Ambiguous { candidates, .. }) => assert!(candidates.contains(&c.id)),
+            Err(e) => panic!("formula {f}: {e}"),
+        }
+    }
+}
+
+#[test]
+fn records_serialize_with_units_in_field_names() {
+    let v = serde_json::to_value(find("methane").unwrap()).unwrap();
+    assert_eq!(v["id"], "methane");
+    assert_eq!(v["confidence"], "high");
+    assert!((v["tc_k"].as_f64().unwrap() - 190.56).abs() < 1e-9);
+    assert!((v["pc_pa"].as_f64().unwrap() - 4.599e6).abs() < 1e-3);
+    assert_eq!(v["cp_segments"].as_array().unwrap().len(), 2);
+    assert_eq!(v["cp_range_k"][1].as_f64(), Some(3500.0));
+    assert!(v["source"].as_str().unwrap().contains("Poling"));
+}
