@@ -28,7 +28,7 @@ pub enum LookupError {
 
 fn suggestion_text(s: &[String]) -> String {
     if s.is_empty() {
-        " (no close match; search() lists components by part of a name)".to_string()
+        " (no close match)".to_string()
     } else {
         format!("; did you mean: {}?", s.join(", "))
     }

@@ -44,13 +44,13 @@
 //! assert_eq!(k.missing.len(), 2);
 //! ```
 //!
-//! [`search`] returns every component whose names contain a text (e.g. `"butane"`), and
+//! [`search()`] returns every component whose names contain a text (e.g. `"butane"`), and
 //! [`all`] the whole table.
 //!
 //! ## Data and sources
 //! The tables are CSV files in `data/`, compiled in and parsed once on first use;
 //! [`data_status`] reports a fault instead of panicking. Every row names its source keys,
-//! resolved by [`source`] to full citations. The main source of the constants is Poling,
+//! resolved by [`source()`] to full citations. The main source of the constants is Poling,
 //! Prausnitz & O'Connell, *The Properties of Gases and Liquids*, 5th ed. (2001), App. A; water,
 //! carbon dioxide, air and the refrigerants take their critical points from their reference
 //! equations of state. Most values were recalled from memory of those sources and are marked
@@ -68,7 +68,7 @@
 //!
 //! ## Modules
 //! One concept per file: [`data`] (loading), [`lookup`] (find), [`suggest`] (suggestions),
-//! [`search`](mod@search) (substring search), [`kij`] (interaction parameters), [`source`]
+//! [`search`](mod@search) (substring search), [`kij`](mod@kij) (interaction parameters), [`source`](mod@source)
 //! (citations), [`record`] (the record type), [`error`] (typed errors).
 
 pub mod data;
