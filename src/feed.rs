@@ -105,7 +105,9 @@ pub fn parse_mix(text: &str, basis: Basis, normalize: bool) -> Result<Feed, CliE
         .filter(|s| !s.is_empty())
         .collect();
     if pairs.is_empty() {
-        return Err(bad("no components given; write name=fraction pairs".to_string()));
+        return Err(bad(
+            "no components given; write name=fraction pairs".to_string()
+        ));
     }
     for pair in &pairs {
         let (name, value) = pair

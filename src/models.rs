@@ -83,18 +83,20 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
             let used = (ids.len() * (ids.len() - 1)) / 2 - m.missing.len();
             notes.push(format!("k_ij from the fluids data for {used} pair(s)"));
             if !m.missing.is_empty() {
-                let pairs: Vec<String> = m
-                    .missing
-                    .iter()
-                    .map(|(a, b)| format!("{a}-{b}"))
-                    .collect();
-                notes.push(format!("k_ij = 0 (no value known) for {}", pairs.join(", ")));
+                let pairs: Vec<String> =
+                    m.missing.iter().map(|(a, b)| format!("{a}-{b}")).collect();
+                notes.push(format!(
+                    "k_ij = 0 (no value known) for {}",
+                    pairs.join(", ")
+                ));
             }
             Some(m.values)
         }
         _ => {
             if !feed.is_pure() {
-                notes.push(format!("k_ij = 0 for every pair ({id} is used without k_ij)"));
+                notes.push(format!(
+                    "k_ij = 0 for every pair ({id} is used without k_ij)"
+                ));
             }
             None
         }

@@ -62,7 +62,11 @@ kmol/m3, lbmol/ft3 (molar), for example \"50 kg/m3\"";
 const VOLUME_UNITS: &str = "a number with m3, L, cm3, ft3 or USgal, for example \"1 m3\"";
 
 /// Splits "12.5 kPa" into (12.5, "kPa"). The number must be finite.
-fn split(input: &str, quantity: &'static str, accepted: &'static str) -> Result<(f64, String), UnitError> {
+fn split(
+    input: &str,
+    quantity: &'static str,
+    accepted: &'static str,
+) -> Result<(f64, String), UnitError> {
     let err = |problem: String| UnitError {
         input: input.to_string(),
         quantity,
@@ -321,15 +325,31 @@ mod tests {
         assert_relative_eq!(temperature("300 K").unwrap(), 300.0);
         assert_relative_eq!(temperature("25 degC").unwrap(), 298.15);
         assert_relative_eq!(temperature("25°C").unwrap(), 298.15);
-        assert_relative_eq!(temperature("32 degF").unwrap(), 273.15, max_relative = 1e-14);
+        assert_relative_eq!(
+            temperature("32 degF").unwrap(),
+            273.15,
+            max_relative = 1e-14
+        );
         assert_relative_eq!(temperature("-40 F").unwrap(), 233.15, max_relative = 1e-14);
-        assert_relative_eq!(temperature("491.67 R").unwrap(), 273.15, max_relative = 1e-14);
+        assert_relative_eq!(
+            temperature("491.67 R").unwrap(),
+            273.15,
+            max_relative = 1e-14
+        );
         assert_relative_eq!(temperature("1e3 K").unwrap(), 1000.0);
     }
 
     #[test]
     fn bad_temperatures_quote_the_input() {
-        for bad in ["300", "300 Q", "-300 degC", "0 K", "abc K", "nan K", "inf K"] {
+        for bad in [
+            "300",
+            "300 Q",
+            "-300 degC",
+            "0 K",
+            "abc K",
+            "nan K",
+            "inf K",
+        ] {
             let e = temperature(bad).unwrap_err();
             assert!(e.to_string().contains(bad.trim()), "{e}");
         }

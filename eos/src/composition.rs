@@ -55,7 +55,13 @@ mod tests {
     #[test]
     fn mass_and_mole_bases_round_trip() {
         // Definitions of mole and mass fraction; the round trip returns the input to rounding.
-        let m = [0.016_042_46, 0.030_069_04, 0.044_095_62, 0.028_013_4, 0.044_009_5];
+        let m = [
+            0.016_042_46,
+            0.030_069_04,
+            0.044_095_62,
+            0.028_013_4,
+            0.044_009_5,
+        ];
         let x = [0.85, 0.07, 0.03, 0.02, 0.03];
         let w = mole_to_mass(&x, &m);
         let back = mass_to_mole(&w, &m);

@@ -104,9 +104,7 @@ pub fn evaluate(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> Properties {
     });
     // T (dP/dT)/(rho dP/drho) - 1 written in residual terms, so that it is exactly zero for
     // the ideal gas instead of a difference of two rounded equal numbers.
-    let jt = cp.map(|cp| {
-        (r.a_dt - r.a_d - r.a_dd) / r.dp_drho_rt() / (rho * cp)
-    });
+    let jt = cp.map(|cp| (r.a_dt - r.a_d - r.a_dd) / r.dp_drho_rt() / (rho * cp));
     let isentropic_exponent = cp.map(|cp| rho / p * cp / cv * dp_drho);
     let mut ln_phi = vec![0.0; x.len()];
     model.ln_phi(t, rho, x, &mut ln_phi);

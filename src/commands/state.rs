@@ -34,11 +34,18 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
     let feed = feed::read(&args.fluid)?;
     let ambient = units::pressure(&args.ambient)
         .and_then(|p| units::absolute_pressure(&args.ambient, p, 0.0))?;
-    let t = args.temperature.as_deref().map(units::temperature).transpose()?;
+    let t = args
+        .temperature
+        .as_deref()
+        .map(units::temperature)
+        .transpose()?;
     let p = match args.pressure.as_deref() {
         Some(text) => {
             let reading = units::pressure(text)?;
-            Some((units::absolute_pressure(text, reading, ambient)?, reading.is_gauge()))
+            Some((
+                units::absolute_pressure(text, reading, ambient)?,
+                reading.is_gauge(),
+            ))
         }
         None => None,
     };
@@ -81,7 +88,11 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
             warnings.join("; ")
         )));
     }
-    warnings.extend(extrapolation_warnings(&feed, &results));
+    let (notes, more) = extrapolation_warnings(&feed, &results);
+    warnings.extend(more);
+    for r in &mut results {
+        r.notes.extend(notes.iter().cloned());
+    }
     Ok(StateReport {
         tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
         fluid: feed.label(),
@@ -235,21 +246,34 @@ fn check_finite(r: &ModelResult) -> Result<(), CliError> {
     }
 }
 
-/// Warnings for heat capacities used outside their fitted range.
-fn extrapolation_warnings(feed: &Feed, results: &[ModelResult]) -> Vec<String> {
-    let mut out = Vec::new();
+/// How far outside its fitted range (as a fraction of the range end) a heat-capacity
+/// polynomial is extrapolated before the result carries a warning rather than a note; a
+/// polynomial in T stays close to its end values just beyond its range (common practice).
+const CP_EXTRAPOLATION_NOTE: f64 = 0.1;
+
+/// Notes and warnings for heat capacities used outside their fitted range: (notes, warnings).
+fn extrapolation_warnings(feed: &Feed, results: &[ModelResult]) -> (Vec<String>, Vec<String>) {
+    let (mut notes, mut warnings) = (Vec::new(), Vec::new());
     let Some(t) = results.first().map(|r| r.temperature_k) else {
-        return out;
+        return (notes, warnings);
     };
     for r in &feed.records {
         let (lo, hi) = r.cp_range_k;
         if t < lo || t > hi {
-            out.push(format!(
-                "the ideal-gas heat capacity of {} is fitted from {lo} K to {hi} K; at {t:.2} K it is \
-                 extrapolated, so h, s, cp, cv and w are less certain (Z and density are not affected)",
+            let text = format!(
+                "the ideal-gas heat capacity of {} is fitted from {lo} K to {hi} K and is \
+                 extrapolated to {t:.2} K: h, s, cp, cv and w are less certain (Z and density \
+                 are not affected)",
                 r.name
-            ));
+            );
+            let near =
+                t >= lo * (1.0 - CP_EXTRAPOLATION_NOTE) && t <= hi * (1.0 + CP_EXTRAPOLATION_NOTE);
+            if near {
+                notes.push(text);
+            } else {
+                warnings.push(text);
+            }
         }
     }
-    out
+    (notes, warnings)
 }

@@ -5,7 +5,8 @@ use serde::Serialize;
 
 /// Serialises a report.
 pub fn to_string<T: Serialize + ?Sized>(report: &T) -> Result<String, CliError> {
-    let mut s = serde_json::to_string_pretty(report).map_err(|e| CliError::Output(e.to_string()))?;
+    let mut s =
+        serde_json::to_string_pretty(report).map_err(|e| CliError::Output(e.to_string()))?;
     s.push('\n');
     Ok(s)
 }

@@ -51,7 +51,12 @@ pub fn state(r: &StateReport) -> String {
     out.push_str(&format!("state: {}\n", given.join(", ")));
     if r.composition.len() > 1 {
         let mut c = new_table();
-        c.set_header(vec!["component", "entered", "mole fraction", "mass fraction"]);
+        c.set_header(vec![
+            "component",
+            "entered",
+            "mole fraction",
+            "mass fraction",
+        ]);
         for row in &r.composition {
             c.add_row(vec![
                 row.name.clone(),
@@ -79,7 +84,9 @@ pub fn state(r: &StateReport) -> String {
     let res = &r.results;
     row(&mut t, "phase", "", &|i| res[i].phase.clone());
     if inp.temperature_k.is_none() {
-        row(&mut t, "temperature", "K", &|i| sig(res[i].temperature_k, 6));
+        row(&mut t, "temperature", "K", &|i| {
+            sig(res[i].temperature_k, 6)
+        });
     }
     if inp.pressure_pa.is_none() {
         row(&mut t, "pressure", "bar abs", &|i| {
@@ -87,7 +94,9 @@ pub fn state(r: &StateReport) -> String {
         });
     }
     row(&mut t, "Z", "-", &|i| sig(res[i].z, 6));
-    row(&mut t, "density", "kg/m3", &|i| sig(res[i].mass_density_kg_m3, 6));
+    row(&mut t, "density", "kg/m3", &|i| {
+        sig(res[i].mass_density_kg_m3, 6)
+    });
     row(&mut t, "molar density", "mol/m3", &|i| {
         sig(res[i].molar_density_mol_m3, 6)
     });
@@ -98,7 +107,9 @@ pub fn state(r: &StateReport) -> String {
     row(&mut t, &format!("ideal-gas error in {of}"), "%", &|i| {
         sig(res[i].ideal_gas_deviation_pct, 4)
     });
-    row(&mut t, "enthalpy", "kJ/kg", &|i| sig(res[i].enthalpy_j_kg / 1e3, 6));
+    row(&mut t, "enthalpy", "kJ/kg", &|i| {
+        sig(res[i].enthalpy_j_kg / 1e3, 6)
+    });
     row(&mut t, "entropy", "kJ/(kg K)", &|i| {
         sig(res[i].entropy_j_kg_k / 1e3, 6)
     });
@@ -106,12 +117,18 @@ pub fn state(r: &StateReport) -> String {
     row(&mut t, "cp", "kJ/(kg K)", &|i| {
         opt(res[i].cp_j_mol_k.map(|c| c / mm(i) / 1e3), 5)
     });
-    row(&mut t, "cv", "kJ/(kg K)", &|i| sig(res[i].cv_j_mol_k / mm(i) / 1e3, 5));
-    row(&mut t, "speed of sound", "m/s", &|i| opt(res[i].speed_of_sound_m_s, 5));
+    row(&mut t, "cv", "kJ/(kg K)", &|i| {
+        sig(res[i].cv_j_mol_k / mm(i) / 1e3, 5)
+    });
+    row(&mut t, "speed of sound", "m/s", &|i| {
+        opt(res[i].speed_of_sound_m_s, 5)
+    });
     row(&mut t, "Joule-Thomson coeff.", "K/bar", &|i| {
         opt(res[i].joule_thomson_k_pa.map(|j| j * PA_PER_BAR), 4)
     });
-    row(&mut t, "isentropic exponent", "-", &|i| opt(res[i].isentropic_exponent, 5));
+    row(&mut t, "isentropic exponent", "-", &|i| {
+        opt(res[i].isentropic_exponent, 5)
+    });
     for (k, c) in r.composition.iter().enumerate() {
         let name = if r.composition.len() == 1 {
             "fugacity coeff.".to_string()
@@ -176,9 +193,15 @@ fn one_fluid(c: &fluids::ComponentRecord) -> String {
         ("aliases", c.aliases.join(", ")),
         ("formula", c.formula.clone().unwrap_or_else(|| "-".into())),
         ("CAS", c.cas.clone()),
-        ("molar mass", format!("{} g/mol", sig(c.molar_mass_kg_mol * 1e3, 7))),
+        (
+            "molar mass",
+            format!("{} g/mol", sig(c.molar_mass_kg_mol * 1e3, 7)),
+        ),
         ("critical temperature", format!("{} K", sig(c.tc_k, 6))),
-        ("critical pressure", format!("{} bar", sig(c.pc_pa / PA_PER_BAR, 6))),
+        (
+            "critical pressure",
+            format!("{} bar", sig(c.pc_pa / PA_PER_BAR, 6)),
+        ),
         ("acentric factor", sig(c.omega, 4)),
         (
             "critical volume",
@@ -188,7 +211,8 @@ fn one_fluid(c: &fluids::ComponentRecord) -> String {
         ("critical Z", opt(c.zc, 4)),
         (
             "normal boiling point",
-            c.tb_k.map_or_else(|| "-".into(), |t| format!("{} K", sig(t, 6))),
+            c.tb_k
+                .map_or_else(|| "-".into(), |t| format!("{} K", sig(t, 6))),
         ),
         ("confidence", format!("{:?}", c.confidence).to_lowercase()),
         ("source", c.source.clone()),
