@@ -81,7 +81,15 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
             let ids = feed.ids();
             let m = fluids::kij_matrix(&ids, f);
             let used = (ids.len() * (ids.len() - 1)) / 2 - m.missing.len();
-            notes.push(format!("k_ij from the fluids data for {used} pair(s)"));
+            if used > 0 {
+                notes.push(format!("k_ij from the fluids data for {used} pair(s)"));
+                if f == fluids::KijFamily::Soave {
+                    notes.push(
+                        "no SRK-specific k_ij at hand: the Peng-Robinson values are used"
+                            .to_string(),
+                    );
+                }
+            }
             if !m.missing.is_empty() {
                 let pairs: Vec<String> =
                     m.missing.iter().map(|(a, b)| format!("{a}-{b}")).collect();
