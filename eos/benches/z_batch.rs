@@ -17,6 +17,17 @@ fn main() {
 }
 
 fn run(model: &eos::cubic::Cubic, x: &[f64], root: BatchRoot, want: f64, bencher: Bencher) {
+    run_with(model, x, root, want, bencher, false)
+}
+
+fn run_with(
+    model: &eos::cubic::Cubic,
+    x: &[f64],
+    root: BatchRoot,
+    want: f64,
+    bencher: Bencher,
+    parallel: bool,
+) {
     let (t, p) = y::grid(N, N);
     let batch = ZBatch::new(model, x).unwrap();
     let mut z = vec![0.0; t.len()];
@@ -26,9 +37,13 @@ fn run(model: &eos::cubic::Cubic, x: &[f64], root: BatchRoot, want: f64, bencher
         ((sum - want) / want).abs() < 1e-9,
         "checksum {sum} vs yardstick {want}"
     );
-    bencher
-        .counter(ItemsCount::new(t.len()))
-        .bench_local(|| batch.z_tp(&t, &p, root, &mut z).unwrap());
+    bencher.counter(ItemsCount::new(t.len())).bench_local(|| {
+        if parallel {
+            batch.z_tp_par(&t, &p, root, &mut z).unwrap()
+        } else {
+            batch.z_tp(&t, &p, root, &mut z).unwrap()
+        }
+    });
 }
 
 #[divan::bench(sample_count = 10, sample_size = 1)]
@@ -53,4 +68,24 @@ fn mix10_largest(bencher: Bencher) {
 fn mix10_gibbs(bencher: Bencher) {
     let (m, x) = y::mix();
     run(&m, &x, BatchRoot::LowestGibbs, y::SUM_MIX_GIBBS, bencher);
+}
+
+/// Both workloads on every core (rayon): the target is 1.8x the one-core figure on 2 cores.
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn pure_largest_all_cores(bencher: Bencher) {
+    let (m, x) = y::pure();
+    run_with(&m, &x, BatchRoot::Largest, y::SUM_PURE, bencher, true);
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn mix10_largest_all_cores(bencher: Bencher) {
+    let (m, x) = y::mix();
+    run_with(
+        &m,
+        &x,
+        BatchRoot::Largest,
+        y::SUM_MIX_LARGEST,
+        bencher,
+        true,
+    );
 }

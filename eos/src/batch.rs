@@ -252,6 +252,20 @@ impl ZBatch {
         Ok(())
     }
 
+    /// Like [`ZBatch::z_tp`], split across all cores (rayon) in chunks of whole lane blocks.
+    /// Every state is computed exactly as in the single-threaded call, so the results are
+    /// identical, in the same order.
+    pub fn z_tp_par(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        use rayon::prelude::*;
+        if t.len() != p.len() || t.len() != out.len() {
+            return self.z_tp(t, p, root, out);
+        }
+        const CHUNK: usize = LANES * 2048;
+        out.par_chunks_mut(CHUNK)
+            .zip(t.par_chunks(CHUNK).zip(p.par_chunks(CHUNK)))
+            .try_for_each(|(o, (tc, pc))| self.z_tp(tc, pc, root, o))
+    }
+
     /// Z of LANES states at once: every loop runs across the lanes, so the compiler can keep
     /// the lanes in vector registers. Lanes whose Newton descent is not certified fall back
     /// to the scalar path.

@@ -78,3 +78,15 @@ fn bad_states_in_a_batch_are_refused() {
         .z_tp(&[300.0], &[1e5, 1e5], BatchRoot::Largest, &mut out)
         .is_err());
 }
+
+#[test]
+fn parallel_batch_is_identical_to_the_serial_one() {
+    // Same states, same order, bit for bit (states are independent).
+    let (m, x) = y::mix();
+    let (t, p) = y::grid(211, 97);
+    let b = ZBatch::new(&m, &x).unwrap();
+    let (mut a, mut c) = (vec![0.0; t.len()], vec![0.0; t.len()]);
+    b.z_tp(&t, &p, BatchRoot::LowestGibbs, &mut a).unwrap();
+    b.z_tp_par(&t, &p, BatchRoot::LowestGibbs, &mut c).unwrap();
+    assert!(a.iter().zip(&c).all(|(u, v)| u.to_bits() == v.to_bits()));
+}
