@@ -24,6 +24,10 @@ pub const K_PER_R: f64 = 5.0 / 9.0;
 pub const KG_PER_LB: f64 = 0.453_592_37;
 /// Cubic metres per cubic foot.
 pub const M3_PER_FT3: f64 = 0.3048 * 0.3048 * 0.3048;
+/// Densities above these are refused at once: the densest liquids are near 2e4 kg/m3 and
+/// 1.5e5 mol/m3 (common practice), and larger inputs would overflow unit conversions.
+pub const MAX_MASS_DENSITY: f64 = 1e5;
+pub const MAX_MOLAR_DENSITY: f64 = 1e7;
 /// Default ambient pressure for gauge readings: one standard atmosphere.
 pub const DEFAULT_AMBIENT_PA: f64 = PA_PER_ATM;
 
@@ -105,6 +109,16 @@ fn split(
     Ok((value, unit.to_string()))
 }
 
+/// The error for a number that overflows once converted to SI.
+fn too_large(input: &str, quantity: &'static str, accepted: &'static str) -> UnitError {
+    UnitError {
+        input: input.to_string(),
+        quantity,
+        problem: "the value overflows once converted to SI units".to_string(),
+        accepted,
+    }
+}
+
 /// Reads a temperature and returns it in kelvin (must be above absolute zero).
 pub fn temperature(input: &str) -> Result<f64, UnitError> {
     let (v, unit) = split(input, "temperature", TEMPERATURE_UNITS)?;
@@ -123,6 +137,9 @@ pub fn temperature(input: &str) -> Result<f64, UnitError> {
             })
         }
     };
+    if !k.is_finite() {
+        return Err(too_large(input, "temperature", TEMPERATURE_UNITS));
+    }
     if k <= 0.0 {
         return Err(UnitError {
             input: input.to_string(),
@@ -193,6 +210,9 @@ pub fn pressure(input: &str) -> Result<Pressure, UnitError> {
         }
     };
     let pa = v * factor;
+    if !pa.is_finite() {
+        return Err(too_large(input, "pressure", PRESSURE_UNITS));
+    }
     if gauge {
         Ok(Pressure::Gauge(pa))
     } else if pa <= 0.0 {
@@ -273,6 +293,20 @@ pub fn density(input: &str) -> Result<Density, UnitError> {
     let raw = match d {
         Density::Mass(x) | Density::Molar(x) => x,
     };
+    let beyond = match d {
+        Density::Mass(x) => x > MAX_MASS_DENSITY,
+        Density::Molar(x) => x > MAX_MOLAR_DENSITY,
+    };
+    if !raw.is_finite() || beyond {
+        return Err(UnitError {
+            input: input.to_string(),
+            quantity: "density",
+            problem: format!(
+                "no fluid is that dense (limits: {MAX_MASS_DENSITY:e} kg/m3, {MAX_MOLAR_DENSITY:e} mol/m3)"
+            ),
+            accepted: DENSITY_UNITS,
+        });
+    }
     if raw <= 0.0 {
         return Err(UnitError {
             input: input.to_string(),
@@ -303,6 +337,9 @@ pub fn volume(input: &str) -> Result<f64, UnitError> {
             })
         }
     };
+    if !m3.is_finite() {
+        return Err(too_large(input, "volume", VOLUME_UNITS));
+    }
     if m3 <= 0.0 {
         return Err(UnitError {
             input: input.to_string(),
@@ -400,5 +437,9 @@ mod tests {
         assert!(density("5 kg").is_err());
         assert_relative_eq!(volume("50 L").unwrap(), 0.05);
         assert!(volume("-1 m3").is_err());
+        // Regression (found by tests/fuzz_parsers.rs): values that overflow after conversion.
+        assert!(pressure("1e308 MPa").is_err());
+        assert!(density("0.91E308g/cm3").is_err());
+        assert!(density("1e308kg/m3").is_err());
     }
 }
