@@ -32,6 +32,7 @@ pub mod cubic;
 pub mod error;
 pub mod ideal;
 pub mod ideal_cp;
+pub mod if97;
 pub mod model;
 pub mod phase;
 pub mod properties;
