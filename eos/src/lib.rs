@@ -33,6 +33,7 @@ pub mod error;
 pub mod ideal;
 pub mod ideal_cp;
 pub mod if97;
+pub mod lee_kesler;
 pub mod model;
 pub mod phase;
 pub mod properties;
