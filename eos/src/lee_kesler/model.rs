@@ -221,7 +221,7 @@ impl LeeKesler {
         }
         const H: f64 = 1e-5;
         let mut xp = [0.0; MAX_COMPONENTS];
-        for i in 0..n {
+        for (i, o) in out.iter_mut().enumerate() {
             // n ln phi at mole numbers x + h e_i, normalised: x' = (x + h e_i)/(1 + h).
             let mut g = [0.0; 2];
             for (k, h) in [H, -H].into_iter().enumerate() {
@@ -230,7 +230,7 @@ impl LeeKesler {
                 }
                 g[k] = (1.0 + h) * self.unchecked(t, p, &xp[..n], root)?.ln_phi;
             }
-            out[i] = (g[0] - g[1]) / (2.0 * H);
+            *o = (g[0] - g[1]) / (2.0 * H);
         }
         Ok(state)
     }
