@@ -39,6 +39,7 @@ pub mod phase;
 pub mod properties;
 pub mod residual;
 pub mod state;
+pub mod translated;
 pub mod virial;
 
 pub use component::Component;
