@@ -25,6 +25,7 @@
 //! assert!(s.props.z > 0.85 && s.props.z < 0.95);
 //! ```
 
+pub mod catalogue;
 pub mod component;
 pub mod composition;
 pub mod constants;
