@@ -196,7 +196,7 @@ pub const ALL: &[ModelInfo] = &[
         validity: "technical accuracy over wide ranges for non-polar and polar fluids",
         range: NONE,
         good_at: &[
-            "technical accuracy (about 0.2 % in density) at a fraction of the reference \
+            "technical accuracy over the fluid surface at a fraction of the reference \
                     equations' cost (Span & Wagner 2003)",
         ],
         poor_at: &["the immediate critical region (Span & Wagner 2003)"],
