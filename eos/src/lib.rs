@@ -26,18 +26,24 @@
 //! ```
 
 pub mod batch;
+pub mod catalogue;
 pub mod component;
 pub mod composition;
 pub mod constants;
 pub mod cubic;
 pub mod error;
+pub mod gas_gravity;
 pub mod ideal;
 pub mod ideal_cp;
+pub mod if97;
+pub mod lee_kesler;
 pub mod model;
 pub mod phase;
 pub mod properties;
 pub mod residual;
 pub mod state;
+pub mod translated;
+pub mod virial;
 
 pub use component::Component;
 pub use error::{Error, Result};
