@@ -159,7 +159,11 @@ mod tests {
 
     #[test]
     fn piecewise_integrals_match_numerical_quadrature() {
-        let seg = |lo, hi, a| CpSegment { t_lo: lo, t_hi: hi, a };
+        let seg = |lo, hi, a| CpSegment {
+            t_lo: lo,
+            t_hi: hi,
+            a,
+        };
         let cp = IdealGasCp::piecewise(vec![
             seg(200.0, 1000.0, [3.5, 1e-3, -1e-6, 2e-10, 0.0]),
             seg(1000.0, 3000.0, [3.45, 3e-4, -5e-8, 0.0, 0.0]),

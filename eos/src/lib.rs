@@ -30,6 +30,7 @@ pub mod composition;
 pub mod constants;
 pub mod cubic;
 pub mod error;
+pub mod helmholtz;
 pub mod ideal;
 pub mod ideal_cp;
 pub mod model;

@@ -86,7 +86,9 @@ pub trait Model: Send + Sync {
         self.components()
             .iter()
             .zip(x)
-            .fold((0.0, 0.0), |(t, p), (c, &xi)| (t + xi * c.tc, p + xi * c.pc))
+            .fold((0.0, 0.0), |(t, p), (c, &xi)| {
+                (t + xi * c.tc, p + xi * c.pc)
+            })
     }
 
     /// Critical compressibility factor used with [`Model::pseudo_critical`] to estimate a

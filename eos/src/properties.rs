@@ -84,7 +84,11 @@ pub fn evaluate(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> Properties {
     let h_res_rt = r.a_d - r.a_t;
     let s_res_r = -r.a - r.a_t + ln_z;
     let g_res_rt = r.a + z - 1.0 - ln_z;
-    let mixing: f64 = x.iter().filter(|&&xi| xi > 0.0).map(|&xi| xi * xi.ln()).sum();
+    let mixing: f64 = x
+        .iter()
+        .filter(|&&xi| xi > 0.0)
+        .map(|&xi| xi * xi.ln())
+        .sum();
     let h = R * ig.h_r + R * t * h_res_rt;
     let s = R * (ig.s_r - (p / P_REF).ln() - mixing) + R * s_res_r;
     let cv = R * (ig.cp_r - 1.0 - r.a_tt - 2.0 * r.a_t);

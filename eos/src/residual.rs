@@ -35,6 +35,6 @@ impl Residual {
 
     /// (dP/dT)_rho / (rho R).
     pub fn dp_dt_rho_r(&self) -> f64 {
-        1.0 + self.a_d - self.a_dt
+        1.0 + self.a_d + self.a_dt
     }
 }

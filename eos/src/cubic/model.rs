@@ -62,7 +62,11 @@ impl Cubic {
                 crate::error::positive(what, v)?;
             }
             if !c.omega.is_finite() {
-                return Err(Error::invalid("acentric factor", c.omega, "a finite number"));
+                return Err(Error::invalid(
+                    "acentric factor",
+                    c.omega,
+                    "a finite number",
+                ));
             }
         }
         let one_minus_k = match kij {
@@ -78,8 +82,7 @@ impl Cubic {
                 for i in 0..n {
                     for j in 0..n {
                         let (kij, kji) = (k[i * n + j], k[j * n + i]);
-                        if !kij.is_finite() || (kij - kji).abs() > 1e-12 || (i == j && kij != 0.0)
-                        {
+                        if !kij.is_finite() || (kij - kji).abs() > 1e-12 || (i == j && kij != 0.0) {
                             return Err(Error::invalid(
                                 "k_ij",
                                 kij,
@@ -101,8 +104,14 @@ impl Cubic {
                 .iter()
                 .map(|c| (crit.omega_a * (R * c.tc).powi(2) / c.pc).sqrt())
                 .collect(),
-            b: comps.iter().map(|c| crit.omega_b * R * c.tc / c.pc).collect(),
-            m: comps.iter().map(|c| spec.alpha.parameter(c.omega)).collect(),
+            b: comps
+                .iter()
+                .map(|c| crit.omega_b * R * c.tc / c.pc)
+                .collect(),
+            m: comps
+                .iter()
+                .map(|c| spec.alpha.parameter(c.omega))
+                .collect(),
             one_minus_k,
             comps: comps.to_vec(),
         })
