@@ -58,6 +58,7 @@ fn spinodal(f: &Formulation, t: f64, mut stable: f64, mut unstable: f64) -> (f64
 }
 
 /// The root of p(rho) = `target` on `branch` at T, or `None` when that branch has none.
+/// Below Tc the vapour branch is searched below rhoc and the liquid branch above it.
 pub fn solve_branch(
     f: &Formulation,
     t: f64,
@@ -65,11 +66,25 @@ pub fn solve_branch(
     branch: Branch,
     start: f64,
 ) -> Option<f64> {
+    solve_branch_split(f, t, target, branch, start, f.rhoc)
+}
+
+/// [`solve_branch`] with the density `split` that separates the branches below Tc (rhoc, or
+/// the density of the least stable point of the isotherm).
+pub fn solve_branch_split(
+    f: &Formulation,
+    t: f64,
+    target: f64,
+    branch: Branch,
+    start: f64,
+    split: f64,
+) -> Option<f64> {
     let subcritical = t < f.tc;
     let (mut lo, mut hi) = match branch {
-        Branch::Vapour => (0.0, if subcritical { f.rhoc } else { f64::INFINITY }),
-        Branch::Liquid => (f.rhoc, f64::INFINITY),
+        Branch::Vapour => (0.0, if subcritical { split } else { f64::INFINITY }),
+        Branch::Liquid => (split, f64::INFINITY),
     };
+    let limit = hi;
     // Whether lo / hi are known stable points with p below / above the target.
     let mut lo_ok = branch == Branch::Vapour;
     let mut hi_ok = false;
@@ -116,6 +131,16 @@ pub fn solve_branch(
             rho = 0.5 * (lo + hi);
             continue;
         }
+        // Pinned against the split without reaching the target: no root on this branch.
+        match branch {
+            Branch::Vapour if p < target && rho > (1.0 - 1e-9) * limit => return None,
+            Branch::Liquid if p > target && rho < (1.0 + 1e-9) * split => return None,
+            _ => {}
+        }
+        // Converged to rounding in pressure.
+        if (p - target).abs() <= 8.0 * f64::EPSILON * target {
+            return Some(rho);
+        }
         if p < target {
             lo = rho;
             lo_ok = true;
@@ -136,7 +161,7 @@ pub fn solve_branch(
                 (false, false) => 0.5 * (lo + hi),
             };
         }
-        if (next - rho).abs() <= 1e-13 * rho {
+        if (next - rho).abs() <= 1e-13 * rho || (lo_ok && hi_ok && hi - lo <= 1e-14 * hi) {
             return Some(next);
         }
         rho = next;

@@ -19,7 +19,7 @@
 //!
 //! ```text
 //! cp0/R = 1 - k tau^2 phi0_tt
-//! h0/R  = T (1 + k tau phi0_t) - [same at T_REF]
+//! h0/R  = T (1 + k tau phi0_t) - k T_REF (1 + tau phi0_t)|T_REF
 //! s0/R  = k (tau phi0_t - phi0^) + ln(rhoc R T / P_REF) + c,  phi0^ = phi0 - ln delta,
 //!         c = -k (tau phi0_t - phi0)  at (T_REF, delta_ref = P_REF / (R_f T_REF rhoc))
 //! ```
@@ -60,7 +60,8 @@ impl HelmholtzFluid {
         let k = form.r / R;
         let tau_ref = form.tc / T_REF;
         let i_ref = form.ideal(tau_ref, 1.0);
-        let h_ref = T_REF * (1.0 + k * tau_ref * i_ref.t);
+        // h of the formulation's ideal gas at T_REF over R: the trait's zero of enthalpy.
+        let h_ref = k * T_REF * (1.0 + tau_ref * i_ref.t);
         let delta_ref = P_REF / (form.r * T_REF * form.rhoc);
         let i_ref_d = form.ideal(tau_ref, delta_ref);
         let s_const = -k * (tau_ref * i_ref_d.t - i_ref_d.a);

@@ -25,7 +25,7 @@
 //! The saturation temperature at p is found by Newton's method on T with the Clapeyron slope
 //! dp/dT = (h'' - h') / (T (v'' - v')), inside a bracket kept from the signs.
 
-use super::density::{p_dp, solve_branch, Branch};
+use super::density::{p_dp, solve_branch, solve_branch_split, Branch};
 use super::formulation::Formulation;
 use crate::error::{Error, Result};
 
@@ -116,6 +116,11 @@ fn newton(f: &Formulation, t: f64, rl: f64, rv: f64) -> Option<(f64, f64, usize)
             return None;
         }
         let (f1, f2) = (pl - pv, gl - gv);
+        // Converged when both residuals are at rounding level (near the critical point the
+        // Jacobian is nearly singular and the steps stay noisy at that level).
+        if f1.abs() <= 1e-14 * pv && f2.abs() <= 1e-14 && it > 1 {
+            return ((dl - dv) > 1e-6 * dl).then_some((dl * f.rhoc, dv * f.rhoc, it));
+        }
         let den = dl - dv;
         let mut x = (dv * f2 - f1) / (den * kl);
         let mut y = (dl * f2 - f1) / (den * kv);
@@ -134,18 +139,48 @@ fn newton(f: &Formulation, t: f64, rl: f64, rv: f64) -> Option<(f64, f64, usize)
     None
 }
 
+/// Why the pressure bisection stopped without a result.
+enum BisectionFailure {
+    /// The isotherm has no unstable region: T is at or above the equation's own critical
+    /// temperature.
+    NoLoop,
+    /// A density solve failed.
+    Solve,
+}
+
 /// Maxwell construction by bisection in pressure (near-critical fallback).
-fn bisection(f: &Formulation, t: f64) -> Option<(f64, f64, usize)> {
+fn bisection(f: &Formulation, t: f64) -> std::result::Result<(f64, f64, usize), BisectionFailure> {
     let tau = f.tc / t;
-    // Spinodal pressures: vapour maximum and liquid minimum of the isotherm.
-    let unstable = f.rhoc;
-    if p_dp(f, t, unstable).1 > 0.0 {
-        return None;
+    let k = |rho: f64| p_dp(f, t, rho).1;
+    // Least stable density of the isotherm by golden-section search on dp/drho.
+    let (mut a, mut b) = (0.5 * f.rhoc, 2.0 * f.rhoc);
+    let g = 0.5 * (5f64.sqrt() - 1.0);
+    let (mut c, mut d) = (b - g * (b - a), a + g * (b - a));
+    let (mut kc, mut kd) = (k(c), k(d));
+    for _ in 0..80 {
+        if kc < kd {
+            b = d;
+            (d, kd) = (c, kc);
+            c = b - g * (b - a);
+            kc = k(c);
+        } else {
+            a = c;
+            (c, kc) = (d, kd);
+            d = a + g * (b - a);
+            kd = k(d);
+        }
+    }
+    let split = 0.5 * (a + b);
+    if k(split) > 0.0 {
+        return Err(BisectionFailure::NoLoop);
     }
     let bis = |mut s: f64, mut u: f64| {
         for _ in 0..200 {
             let m = 0.5 * (s + u);
-            if p_dp(f, t, m).1 > 0.0 {
+            if (u - s).abs() <= 1e-15 * m {
+                break;
+            }
+            if k(m) > 0.0 {
                 s = m
             } else {
                 u = m
@@ -153,24 +188,29 @@ fn bisection(f: &Formulation, t: f64) -> Option<(f64, f64, usize)> {
         }
         s
     };
-    let rv_s = bis(1e-9 * f.rhoc, unstable);
-    let mut rl_hi = 1.5 * f.rhoc;
-    while p_dp(f, t, rl_hi).1 <= 0.0 && rl_hi < 20.0 * f.rhoc {
+    let rv_s = bis(1e-9 * f.rhoc, split);
+    let mut rl_hi = 1.2 * split;
+    for _ in 0..40 {
+        if k(rl_hi) > 0.0 {
+            break;
+        }
         rl_hi *= 1.2;
     }
-    let rl_s = bis(rl_hi, unstable);
+    let rl_s = bis(rl_hi, split);
     let p_hi = p_dp(f, t, rv_s).0;
     let p_lo = p_dp(f, t, rl_s).0.max(1e-12 * p_hi);
     let bracket = p_hi > p_lo;
     if !bracket {
-        return None;
+        return Err(BisectionFailure::Solve);
     }
     let (mut lo, mut hi) = (p_lo, p_hi);
     let (mut rl, mut rv) = (rl_s, rv_s);
     for it in 1..=200 {
         let p = 0.5 * (lo + hi);
-        let v = solve_branch(f, t, p, Branch::Vapour, p / (f.r * t))?;
-        let l = solve_branch(f, t, p, Branch::Liquid, rl.max(rl_s))?;
+        let v = solve_branch_split(f, t, p, Branch::Vapour, rv.min(rv_s), split)
+            .ok_or(BisectionFailure::Solve)?;
+        let l = solve_branch_split(f, t, p, Branch::Liquid, rl.max(rl_s), split)
+            .ok_or(BisectionFailure::Solve)?;
         let gv = reduced(f, tau, v / f.rhoc).1;
         let gl = reduced(f, tau, l / f.rhoc).1;
         (rl, rv) = (l, v);
@@ -180,10 +220,10 @@ fn bisection(f: &Formulation, t: f64) -> Option<(f64, f64, usize)> {
             lo = p;
         }
         if hi - lo <= 1e-15 * hi {
-            return Some((rl, rv, it));
+            return Ok((rl, rv, it));
         }
     }
-    Some((rl, rv, 200))
+    Ok((rl, rv, 200))
 }
 
 /// Saturation at temperature `t` (K), from the triple point to below the critical point.
@@ -194,11 +234,25 @@ pub fn at_t(f: &Formulation, t: f64) -> Result<Saturation> {
 }
 
 fn at_t_from(f: &Formulation, t: f64, rl0: f64, rv0: f64) -> Result<Saturation> {
-    let (rl, rv, iterations, method) = match newton(f, t, rl0, rv0) {
+    let newton_result = newton(f, t, rl0, rv0).or_else(|| {
+        // Second start: both densities solved at the ancillary vapour pressure.
+        let ps = f.ps_anc.as_ref()?.reduced(t, f.tc) * f.pc;
+        let l = solve_branch(f, t, ps, Branch::Liquid, rl0.max(1.01 * f.rhoc))?;
+        let v = solve_branch(f, t, ps, Branch::Vapour, rv0.min(f.rhoc))?;
+        newton(f, t, l, v)
+    });
+    let (rl, rv, iterations, method) = match newton_result {
         Some((l, v, n)) => (l, v, n, SaturationMethod::Newton),
         None => match bisection(f, t) {
-            Some((l, v, n)) => (l, v, n, SaturationMethod::PressureBisection),
-            None => {
+            Ok((l, v, n)) => (l, v, n, SaturationMethod::PressureBisection),
+            Err(BisectionFailure::NoLoop) => {
+                return Err(Error::NoSolution(format!(
+                    "{}: the isotherm at {t} K has no two-phase loop (at or above the \
+                     equation's own critical temperature)",
+                    f.title
+                )))
+            }
+            Err(BisectionFailure::Solve) => {
                 return Err(Error::NotConverged {
                     solver: "saturation at T (Newton, then pressure bisection)",
                     iterations: MAX_NEWTON,
@@ -238,8 +292,18 @@ fn clapeyron(f: &Formulation, s: &Saturation) -> f64 {
 /// the critical pressure.
 pub fn at_p(f: &Formulation, p: f64) -> Result<Saturation> {
     let bottom = at_t(f, f.t_triple)?;
-    let top_t = f.tc * (1.0 - 1e-6);
-    let top = at_t(f, top_t)?;
+    // Highest temperature with a saturation state: just below Tc, or below the equation's own
+    // critical temperature where that is lower.
+    let mut top = None;
+    for gap in [1e-6, 1e-5, 1e-4, 1e-3] {
+        if let Ok(s) = at_t(f, f.tc * (1.0 - gap)) {
+            top = Some(s);
+            break;
+        }
+    }
+    let top =
+        top.ok_or_else(|| Error::NoSolution(format!("{}: no saturation state near Tc", f.title)))?;
+    let top_t = top.t;
     if !p.is_finite() || p < bottom.p || p > top.p {
         return Err(Error::OutOfRange {
             model: f.title.to_string(),
