@@ -41,20 +41,35 @@ pub fn p_dp(f: &Formulation, t: f64, rho: f64) -> (f64, f64) {
 }
 
 /// Bisection on the sign of dp/drho between `stable` (dp/drho > 0) and `unstable` (<= 0):
-/// the spinodal density and its pressure.
-fn spinodal(f: &Formulation, t: f64, mut stable: f64, mut unstable: f64) -> (f64, f64) {
-    for _ in 0..100 {
+/// a density next to the spinodal and its pressure. Stops early at a stable point whose
+/// pressure passes `target` in the direction `above` (a root lies before it), or when the
+/// bracket is 1e-8 wide (p is flat at the spinodal, so its pressure is then known to ~1e-16).
+fn spinodal(
+    f: &Formulation,
+    t: f64,
+    target: f64,
+    above: bool,
+    mut stable: f64,
+    mut unstable: f64,
+) -> (f64, f64) {
+    let mut p_stable = p_dp(f, t, stable).0;
+    for _ in 0..60 {
         let mid = 0.5 * (stable + unstable);
-        if (unstable - stable).abs() <= 1e-14 * mid {
+        if (unstable - stable).abs() <= 1e-8 * mid {
             break;
         }
-        if p_dp(f, t, mid).1 > 0.0 {
+        let (p, dp) = p_dp(f, t, mid);
+        if dp > 0.0 {
             stable = mid;
+            p_stable = p;
+            if (above && p >= target) || (!above && p <= target) {
+                break;
+            }
         } else {
             unstable = mid;
         }
     }
-    (stable, p_dp(f, t, stable).0)
+    (stable, p_stable)
 }
 
 /// The root of p(rho) = `target` on `branch` at T, or `None` when that branch has none.
@@ -106,7 +121,7 @@ pub fn solve_branch_split(
         if dp <= 0.0 {
             match branch {
                 Branch::Vapour => {
-                    let (rs, ps) = spinodal(f, t, lo, rho);
+                    let (rs, ps) = spinodal(f, t, target, true, lo, rho);
                     if ps < target {
                         return None;
                     }
@@ -120,7 +135,7 @@ pub fn solve_branch_split(
                         rho *= 1.1;
                         continue;
                     }
-                    let (rs, ps) = spinodal(f, t, hi, rho);
+                    let (rs, ps) = spinodal(f, t, target, false, hi, rho);
                     if ps > target {
                         return None;
                     }
