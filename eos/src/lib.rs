@@ -33,6 +33,7 @@ pub mod constants;
 pub mod cubic;
 pub mod error;
 pub mod gas_gravity;
+pub mod helmholtz;
 pub mod ideal;
 pub mod ideal_cp;
 pub mod if97;

@@ -1,0 +1,209 @@
+//! Density from (T, p) for a formulation: a safeguarded Newton iteration on each branch of the
+//! isotherm.
+//!
+//! p(rho) = rho R T (1 + delta phir_d), dp/drho = R T (1 + 2 delta phir_d + delta^2 phir_dd).
+//!
+//! - Vapour-like branch: Newton from the ideal-gas density p/(RT), with a bracket [lo, hi] kept
+//!   from the signs of p - p_target (bisection when a step leaves it). Below Tc the iterates
+//!   stay below rhoc; meeting dp/drho <= 0 means the vapour spinodal lies between the last
+//!   stable point and the iterate, found by bisection on the sign of dp/drho; if p there is below
+//!   the target there is no vapour root.
+//! - Liquid-like branch (below Tc): the same from the saturated-liquid ancillary density,
+//!   staying above rhoc, with the liquid spinodal as the lower bound.
+//!
+//! Every root found is returned (up to two: stable and metastable), so that the caller can pick
+//! the one of lowest Gibbs energy. Iterations are capped.
+
+use super::formulation::Formulation;
+
+/// Cap of Newton/bisection iterations per branch.
+pub const MAX_ITER: usize = 200;
+
+/// Which branch of an isotherm.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Branch {
+    /// Low density (vapour or supercritical gas).
+    Vapour,
+    /// High density (liquid).
+    Liquid,
+}
+
+/// p (Pa) and dp/drho (Pa m3/mol) at (T, rho).
+#[inline]
+pub fn p_dp(f: &Formulation, t: f64, rho: f64) -> (f64, f64) {
+    let (tau, delta) = f.reduce(t, rho);
+    let r = f.residual(tau, delta);
+    let rt = f.r * t;
+    (
+        rho * rt * (1.0 + delta * r.d),
+        rt * (1.0 + 2.0 * delta * r.d + delta * delta * r.dd),
+    )
+}
+
+/// Bisection on the sign of dp/drho between `stable` (dp/drho > 0) and `unstable` (<= 0):
+/// a density next to the spinodal and its pressure. Stops early at a stable point whose
+/// pressure passes `target` in the direction `above` (a root lies before it), or when the
+/// bracket is 1e-8 wide (p is flat at the spinodal, so its pressure is then known to ~1e-16).
+fn spinodal(
+    f: &Formulation,
+    t: f64,
+    target: f64,
+    above: bool,
+    mut stable: f64,
+    mut unstable: f64,
+) -> (f64, f64) {
+    let mut p_stable = p_dp(f, t, stable).0;
+    for _ in 0..60 {
+        let mid = 0.5 * (stable + unstable);
+        if (unstable - stable).abs() <= 1e-8 * mid {
+            break;
+        }
+        let (p, dp) = p_dp(f, t, mid);
+        if dp > 0.0 {
+            stable = mid;
+            p_stable = p;
+            if (above && p >= target) || (!above && p <= target) {
+                break;
+            }
+        } else {
+            unstable = mid;
+        }
+    }
+    (stable, p_stable)
+}
+
+/// The root of p(rho) = `target` on `branch` at T, or `None` when that branch has none.
+/// Below Tc the vapour branch is searched below rhoc and the liquid branch above it.
+pub fn solve_branch(
+    f: &Formulation,
+    t: f64,
+    target: f64,
+    branch: Branch,
+    start: f64,
+) -> Option<f64> {
+    solve_branch_split(f, t, target, branch, start, f.rhoc)
+}
+
+/// [`solve_branch`] with the density `split` that separates the branches below Tc (rhoc, or
+/// the density of the least stable point of the isotherm).
+pub fn solve_branch_split(
+    f: &Formulation,
+    t: f64,
+    target: f64,
+    branch: Branch,
+    start: f64,
+    split: f64,
+) -> Option<f64> {
+    let subcritical = t < f.tc;
+    let (mut lo, mut hi) = match branch {
+        Branch::Vapour => (0.0, if subcritical { split } else { f64::INFINITY }),
+        Branch::Liquid => (split, f64::INFINITY),
+    };
+    let limit = hi;
+    // Whether lo / hi are known stable points with p below / above the target.
+    let mut lo_ok = branch == Branch::Vapour;
+    let mut hi_ok = false;
+    let mut rho = start.clamp(lo + 1e-12 * f.rhoc, if hi.is_finite() { hi } else { start });
+    if !(rho > lo && rho.is_finite()) {
+        rho = if branch == Branch::Vapour {
+            0.5 * (lo + hi.min(f.rhoc))
+        } else {
+            2.0 * f.rhoc
+        };
+    }
+    for _ in 0..MAX_ITER {
+        let (p, dp) = p_dp(f, t, rho);
+        if !(p.is_finite() && dp.is_finite()) {
+            hi = rho;
+            rho = 0.5 * (lo + rho);
+            continue;
+        }
+        if dp <= 0.0 {
+            match branch {
+                Branch::Vapour => {
+                    let (rs, ps) = spinodal(f, t, target, true, lo, rho);
+                    if ps < target {
+                        return None;
+                    }
+                    hi = rs;
+                    hi_ok = true;
+                }
+                Branch::Liquid => {
+                    if !hi_ok {
+                        // Started inside the unstable region: move up.
+                        lo = rho;
+                        rho *= 1.1;
+                        continue;
+                    }
+                    let (rs, ps) = spinodal(f, t, target, false, hi, rho);
+                    if ps > target {
+                        return None;
+                    }
+                    lo = rs;
+                    lo_ok = true;
+                }
+            }
+            rho = 0.5 * (lo + hi);
+            continue;
+        }
+        // Pinned against the split without reaching the target: no root on this branch.
+        match branch {
+            Branch::Vapour if p < target && rho > (1.0 - 1e-9) * limit => return None,
+            Branch::Liquid if p > target && rho < (1.0 + 1e-9) * split => return None,
+            _ => {}
+        }
+        // Converged to rounding in pressure.
+        if (p - target).abs() <= 8.0 * f64::EPSILON * target {
+            return Some(rho);
+        }
+        if p < target {
+            lo = rho;
+            lo_ok = true;
+        } else {
+            hi = rho;
+            hi_ok = true;
+        }
+        let mut next = rho - (p - target) / dp;
+        if !(next > lo && next < hi) {
+            next = match (lo_ok, hi_ok && hi.is_finite()) {
+                (true, true) => 0.5 * (lo + hi),
+                (true, false) => (4.0 * rho).min(if hi.is_finite() {
+                    0.5 * (rho + hi)
+                } else {
+                    f64::MAX
+                }),
+                (false, true) => (0.5 * rho).max(0.5 * (lo + rho)),
+                (false, false) => 0.5 * (lo + hi),
+            };
+        }
+        if (next - rho).abs() <= 1e-13 * rho || (lo_ok && hi_ok && hi - lo <= 1e-14 * hi) {
+            return Some(next);
+        }
+        rho = next;
+    }
+    None
+}
+
+/// Every density root (mol/m3) at (T, p): up to two, ascending.
+pub fn roots(f: &Formulation, t: f64, p: f64) -> ([f64; 2], usize) {
+    let mut out = [0.0; 2];
+    let mut n = 0;
+    let ideal = p / (f.r * t);
+    if let Some(v) = solve_branch(f, t, p, Branch::Vapour, ideal) {
+        out[n] = v;
+        n += 1;
+    }
+    if t < f.tc {
+        let start = match &f.rhol_anc {
+            Some(a) => f.rhoc * a.reduced(t, f.tc),
+            None => 2.0 * f.rhoc,
+        };
+        if let Some(l) = solve_branch(f, t, p, Branch::Liquid, start.max(1.01 * f.rhoc)) {
+            if n == 0 || (l - out[0]).abs() > 1e-9 * l {
+                out[n] = l;
+                n += 1;
+            }
+        }
+    }
+    (out, n)
+}
