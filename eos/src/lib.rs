@@ -29,6 +29,7 @@ pub mod component;
 pub mod composition;
 pub mod constants;
 pub mod cubic;
+pub mod equilibrium;
 pub mod error;
 pub mod ideal;
 pub mod ideal_cp;

@@ -114,7 +114,7 @@ impl State {
         composition::check(x, model.components().len())?;
         check_density(model, rho, x)?;
         let props = evaluate(model, t, rho, x);
-        if !(props.p > 0.0) || !props.p.is_finite() {
+        if props.p.is_nan() || props.p <= 0.0 || !props.p.is_finite() {
             return Err(Error::NoSolution(format!(
                 "{} gives a pressure of {:.6e} Pa at T = {t} K, rho = {rho} mol/m3: \
                  the state is inside the two-phase region and has no single-phase answer",
@@ -141,7 +141,7 @@ impl State {
         let t_ideal = p / (rho * R);
         let (mut lo, mut hi) = (t_ideal, t_ideal);
         let mut k = 0;
-        while !(f(hi) > 0.0) {
+        while !matches!(f(hi).partial_cmp(&0.0), Some(std::cmp::Ordering::Greater)) {
             hi *= 2.0;
             k += 1;
             if k > 60 {
@@ -152,7 +152,7 @@ impl State {
             }
         }
         k = 0;
-        while !(f(lo) < 0.0) {
+        while !matches!(f(lo).partial_cmp(&0.0), Some(std::cmp::Ordering::Less)) {
             lo *= 0.5;
             k += 1;
             if k > 60 || lo < 1e-6 {

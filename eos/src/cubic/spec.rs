@@ -35,8 +35,8 @@ pub struct CriticalConstants {
 impl CriticalConstants {
     /// Derives the constants from d1 and d2.
     ///
-    /// At the critical point the cubic in Z, Z^3 + ((u-1)B - 1) Z^2 + (A + (w-u)B^2 - uB) Z
-    /// - (AB + wB^2 + wB^3) = 0 with u = d1 + d2 and w = d1 d2, must equal (Z - Zc)^3. Matching
+    /// At the critical point the cubic in Z, Z^3 + ((u-1)B - 1) Z^2 + (A + (w-u)B^2 - uB) Z -
+    /// (AB + wB^2 + wB^3) = 0 with u = d1 + d2 and w = d1 d2, must equal (Z - Zc)^3. Matching
     /// the Z^2 and Z terms gives Zc and A as functions of B; the constant term leaves one
     /// equation in B, solved here by bisection to machine precision.
     pub fn from_deltas(d1: f64, d2: f64) -> Self {

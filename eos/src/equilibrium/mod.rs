@@ -1,0 +1,27 @@
+//! Phase equilibrium for every [`crate::Model`]: pure-fluid saturation, stability analysis,
+//! flashes, bubble and dew points and phase envelopes.
+//!
+//! Every solver works through the model trait only (residual Helmholtz energy, ln phi at
+//! (T, rho, x), density roots at (T, P, x)), so it applies to each member of the cubic family
+//! and to any future model. Composition derivatives are taken numerically on one density
+//! branch ([`phase_eval`]).
+//!
+//! - [`saturation`]: saturation pressure at T and temperature at P of a pure fluid, with the
+//!   saturated phases and the enthalpy of vaporisation; [`quality`] for two-phase states.
+//! - [`critical_point`], [`spinodal`]: where the model itself puts the critical point and
+//!   the ends of the van der Waals loop.
+//! - [`wilson`]: corresponding-states starting values.
+//!
+//! All results are plain structs; every failure is a typed [`crate::Error`].
+
+pub mod brent;
+pub mod critical_point;
+pub mod phase_eval;
+pub mod quality;
+pub mod saturation;
+pub mod spinodal;
+pub mod wilson;
+
+pub use critical_point::CriticalPoint;
+pub use quality::TwoPhaseState;
+pub use saturation::Saturation;
