@@ -10,18 +10,28 @@
 //!   saturated phases and the enthalpy of vaporisation; [`quality`] for two-phase states.
 //! - [`critical_point`], [`spinodal`]: where the model itself puts the critical point and
 //!   the ends of the van der Waals loop.
-//! - [`wilson`]: corresponding-states starting values.
+//! - [`stability`]: Michelsen's tangent-plane stability test.
+//! - [`flash`]: (T, P), (P, h) and (P, s) flashes; [`rachford_rice`] and [`gdem`] are its
+//!   parts.
+//! - [`wilson`]: corresponding-states starting values; [`dense`], [`brent`]: numerical parts.
 //!
 //! All results are plain structs; every failure is a typed [`crate::Error`].
 
 pub mod brent;
 pub mod critical_point;
+pub mod dense;
+pub mod flash;
+pub mod gdem;
 pub mod phase_eval;
 pub mod quality;
+pub mod rachford_rice;
 pub mod saturation;
 pub mod spinodal;
+pub mod stability;
 pub mod wilson;
 
 pub use critical_point::CriticalPoint;
+pub use flash::{EnergyFlash, FlashResult, SinglePhase, TwoPhase};
 pub use quality::TwoPhaseState;
 pub use saturation::Saturation;
+pub use stability::Stability;

@@ -130,3 +130,64 @@ pub fn component(c: &Data) -> Component {
 pub fn comp(name: &str) -> Component {
     component(data(name))
 }
+
+/// Peng-Robinson k_ij of the natural-gas pairs present in [`demo_gas`], from the project's
+/// reference table kij_pr.csv (from memory of tables derived from Knapp et al. (1982),
+/// DECHEMA Chem. Data Ser. VI; confidence medium; hydrocarbon pairs taken as zero). They
+/// are inputs of the model, not reference results.
+pub const KIJ_PR: &[(&str, &str, f64)] = &[
+    ("methane", "carbon dioxide", 0.0919),
+    ("methane", "nitrogen", 0.0311),
+    ("nitrogen", "carbon dioxide", -0.0170),
+    ("carbon dioxide", "ethane", 0.1322),
+    ("carbon dioxide", "propane", 0.1241),
+    ("carbon dioxide", "n-butane", 0.1333),
+    ("nitrogen", "ethane", 0.0515),
+    ("nitrogen", "propane", 0.0852),
+    ("nitrogen", "n-butane", 0.0800),
+];
+
+/// Row-major k_ij matrix for the named components.
+pub fn kij(names: &[&str]) -> Vec<f64> {
+    let n = names.len();
+    let mut k = vec![0.0; n * n];
+    for i in 0..n {
+        for j in 0..n {
+            for &(a, b, v) in KIJ_PR {
+                if (names[i] == a && names[j] == b) || (names[i] == b && names[j] == a) {
+                    k[i * n + j] = v;
+                }
+            }
+        }
+    }
+    k
+}
+
+/// A demo natural gas with heavy ends: a composition of our own for testing, not a
+/// measured gas. Returns the names and mole fractions.
+pub fn demo_gas() -> (Vec<&'static str>, Vec<f64>) {
+    let rows = [
+        ("nitrogen", 0.01),
+        ("carbon dioxide", 0.02),
+        ("methane", 0.80),
+        ("ethane", 0.08),
+        ("propane", 0.04),
+        ("isobutane", 0.01),
+        ("n-butane", 0.015),
+        ("isopentane", 0.005),
+        ("n-pentane", 0.005),
+        ("n-hexane", 0.005),
+        ("n-heptane", 0.005),
+        ("n-octane", 0.005),
+    ];
+    (
+        rows.iter().map(|r| r.0).collect(),
+        rows.iter().map(|r| r.1).collect(),
+    )
+}
+
+/// A Peng-Robinson (1976) model of the named components with the k_ij above.
+pub fn pr_model(names: &[&str]) -> eos::cubic::Cubic {
+    let comps: Vec<Component> = names.iter().map(|n| comp(n)).collect();
+    eos::cubic::Cubic::new(eos::cubic::CubicKind::Pr76, &comps, Some(&kij(names))).unwrap()
+}
