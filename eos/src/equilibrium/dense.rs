@@ -55,9 +55,9 @@ mod tests {
 
     #[test]
     fn solves_a_system_needing_a_pivot() {
-        // [[0, 2, 1], [1, 1, 1], [2, 1, 3]] x = [5, 6, 13] has x = [1, 2, 3] (by substitution).
+        // [[0, 2, 1], [1, 1, 1], [2, 1, 3]] x = [7, 6, 13] has x = [1, 2, 3] (by substitution).
         let mut a = [0.0, 2.0, 1.0, 1.0, 1.0, 1.0, 2.0, 1.0, 3.0];
-        let mut b = [5.0, 6.0, 13.0];
+        let mut b = [7.0, 6.0, 13.0];
         assert!(solve(&mut a, &mut b, 3));
         for (x, want) in b.iter().zip([1.0, 2.0, 3.0]) {
             assert!((x - want).abs() < 1e-14);
