@@ -13,19 +13,25 @@
 //! - [`stability`]: Michelsen's tangent-plane stability test.
 //! - [`flash`]: (T, P), (P, h) and (P, s) flashes; [`rachford_rice`] and [`gdem`] are its
 //!   parts.
+//! - [`bubble`], [`dew`]: bubble and dew points at T or P ([`saturation_point`] on the
+//!   equations of [`sat_system`]).
 //! - [`wilson`]: corresponding-states starting values; [`dense`], [`brent`]: numerical parts.
 //!
 //! All results are plain structs; every failure is a typed [`crate::Error`].
 
 pub mod brent;
+pub mod bubble;
 pub mod critical_point;
 pub mod dense;
+pub mod dew;
 pub mod flash;
 pub mod gdem;
 pub mod phase_eval;
 pub mod quality;
 pub mod rachford_rice;
+pub mod sat_system;
 pub mod saturation;
+pub mod saturation_point;
 pub mod spinodal;
 pub mod stability;
 pub mod wilson;
@@ -33,5 +39,7 @@ pub mod wilson;
 pub use critical_point::CriticalPoint;
 pub use flash::{EnergyFlash, FlashResult, SinglePhase, TwoPhase};
 pub use quality::TwoPhaseState;
+pub use sat_system::Side;
 pub use saturation::Saturation;
+pub use saturation_point::SaturationPoint;
 pub use stability::Stability;
