@@ -11,8 +11,8 @@ use eos::{Error, Model};
 fn check_point(m: &dyn Model, r: &SaturationPoint) {
     let n = r.x.len();
     let (mut ll, mut lv) = (vec![0.0; n], vec![0.0; n]);
-    m.ln_phi(r.t, r.rho_l, &r.x, &mut ll);
-    m.ln_phi(r.t, r.rho_v, &r.y, &mut lv);
+    common::ln_phi_at(m, r.t, r.p, r.rho_l, &r.x, &mut ll);
+    common::ln_phi_at(m, r.t, r.p, r.rho_v, &r.y, &mut lv);
     for i in 0..n {
         if r.x[i] > 0.0 && r.y[i] > 0.0 {
             let d = r.x[i].ln() + ll[i] - r.y[i].ln() - lv[i];

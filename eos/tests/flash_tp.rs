@@ -13,8 +13,8 @@ use eos::{Error, Model};
 fn check_equilibrium(model: &dyn Model, z: &[f64], r: &flash::TwoPhase) {
     let n = z.len();
     let (mut ll, mut lv) = (vec![0.0; n], vec![0.0; n]);
-    model.ln_phi(r.t, r.rho_l, &r.x, &mut ll);
-    model.ln_phi(r.t, r.rho_v, &r.y, &mut lv);
+    common::ln_phi_at(model, r.t, r.p, r.rho_l, &r.x, &mut ll);
+    common::ln_phi_at(model, r.t, r.p, r.rho_v, &r.y, &mut lv);
     let pl = r.rho_l * eos::constants::R * r.t * model.residual(r.t, r.rho_l, &r.x).z();
     let pv = r.rho_v * eos::constants::R * r.t * model.residual(r.t, r.rho_v, &r.y).z();
     assert!((pl / r.p - 1.0).abs() < 1e-9, "liquid pressure {pl}");

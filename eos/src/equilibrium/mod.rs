@@ -15,6 +15,8 @@
 //!   parts.
 //! - [`bubble`], [`dew`]: bubble and dew points at T or P ([`saturation_point`] on the
 //!   equations of [`sat_system`]).
+//! - [`envelope`]: phase envelopes by continuation, with critical point, cricondenbar and
+//!   cricondentherm.
 //! - [`wilson`]: corresponding-states starting values; [`dense`], [`brent`]: numerical parts.
 //!
 //! All results are plain structs; every failure is a typed [`crate::Error`].
@@ -24,6 +26,7 @@ pub mod bubble;
 pub mod critical_point;
 pub mod dense;
 pub mod dew;
+pub mod envelope;
 pub mod flash;
 pub mod gdem;
 pub mod phase_eval;
@@ -37,6 +40,7 @@ pub mod stability;
 pub mod wilson;
 
 pub use critical_point::CriticalPoint;
+pub use envelope::{Envelope, EnvelopeOptions, EnvelopePoint, EnvelopeStop};
 pub use flash::{EnergyFlash, FlashResult, SinglePhase, TwoPhase};
 pub use quality::TwoPhaseState;
 pub use sat_system::Side;

@@ -191,3 +191,16 @@ pub fn pr_model(names: &[&str]) -> eos::cubic::Cubic {
     let comps: Vec<Component> = names.iter().map(|n| comp(n)).collect();
     eos::cubic::Cubic::new(eos::cubic::CubicKind::Pr76, &comps, Some(&kij(names))).unwrap()
 }
+
+/// ln phi of each component at (T, rho, x) from the model, with ln Z taken as ln(P/(rho R T))
+/// at the state's pressure: ln phi_i = mu_res_i/RT - ln Z, and for a dense liquid at low
+/// pressure the model's own Z is a small difference of large terms whose rounding (~1e-10
+/// in ln Z) would otherwise swamp a 1e-10 check of equal fugacities.
+pub fn ln_phi_at(m: &dyn eos::Model, t: f64, p: f64, rho: f64, x: &[f64], out: &mut [f64]) {
+    m.ln_phi(t, rho, x, out);
+    let z_model = m.residual(t, rho, x).z();
+    let z = p / (rho * eos::constants::R * t);
+    for o in out.iter_mut() {
+        *o += (z_model / z).ln();
+    }
+}
