@@ -72,4 +72,5 @@ fn flash_grid_around_the_demo_gas_envelope() {
     );
     assert_eq!(two + one + failed, nt * np);
     assert!(two > 1000 && one > 1000);
+    assert_eq!(failed, 0, "every flash of the grid converges");
 }

@@ -10,8 +10,9 @@
 //!    (K_i - 1)), y_i = K_i x_i, then ln K_i <- ln phi_i(L, x) - ln phi_i(V, y); every fifth
 //!    substitution is accelerated ([`crate::equilibrium::gdem`]) when that lowers the
 //!    fugacity residual.
-//! 3. Newton's method on the vapour mole numbers v_i (l_i = z_i - v_i; the liquid's are the
-//!    unknowns instead when beta > 1/2, so that the smaller phase carries no cancellation) solves
+//! 3. Newton's method on the vapour mole numbers v_i (l_i = z_i - v_i; for each component
+//!    the smaller of v_i and l_i is updated and the other follows, so that small amounts
+//!    carry no cancellation) solves
 //!    g_i = ln f_i(V) - ln f_i(L) = 0, with the symmetric Jacobian (the Hessian of the Gibbs
 //!    energy of the split)
 //!    dg_i/dv_j = delta_ij / v_i - 1/V + d ln phi_i^V / d n_j + delta_ij / l_i - 1/L +
@@ -283,16 +284,15 @@ fn newton(
     let n = z.len();
     let mut idx = [0usize; MAX_COMPONENTS];
     let mut m = 0;
-    // The smaller phase's mole numbers are the unknowns, the larger phase's follow by
-    // difference: the small amounts then carry no cancellation error.
-    let vapor_primary = e.beta <= 0.5;
+    // For each component the smaller of v_i and l_i is updated and the larger follows by
+    // difference, so that small amounts carry no cancellation error.
     let mut v = [0.0; MAX_COMPONENTS];
     let mut l = [0.0; MAX_COMPONENTS];
     for i in 0..n {
         if z[i] > 0.0 {
             idx[m] = i;
             m += 1;
-            if vapor_primary {
+            if e.beta * e.y[i] <= (1.0 - e.beta) * e.x[i] {
                 v[i] = (e.beta * e.y[i]).clamp(1e-300 * z[i], z[i] * (1.0 - 1e-15));
                 l[i] = z[i] - v[i];
             } else {
@@ -365,7 +365,7 @@ fn newton(
             lt[..n].copy_from_slice(&l[..n]);
             for ra in 0..m {
                 let i = idx[ra];
-                if vapor_primary {
+                if v[i] <= l[i] {
                     vt[i] = v[i] + step * b[ra];
                     lt[i] = z[i] - vt[i];
                 } else {
