@@ -31,6 +31,7 @@ pub mod component;
 pub mod composition;
 pub mod constants;
 pub mod cubic;
+pub mod equilibrium;
 pub mod error;
 pub mod gas_gravity;
 pub mod helmholtz;

@@ -44,7 +44,7 @@ fn g_res_rt(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> f64 {
 }
 
 /// Names the phase of a single-phase state at (T, P, rho).
-fn phase_of(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -> (Phase, usize) {
+pub(crate) fn phase_of(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -> (Phase, usize) {
     let roots = model.densities(t, p, x);
     let n = roots.as_slice().len();
     let (tc, pc) = model.pseudo_critical(x);

@@ -95,11 +95,25 @@ pub fn solve_cubic(c2: f64, c1: f64, c0: f64) -> CubicRoots {
     if d.abs() <= dd && p < 0.0 {
         // Double root: t = 3q/p once and -3q/(2p) twice.
         let t1 = 3.0 * q / p;
-        let t2 = -1.5 * q / p;
-        let (a, b) = (t1 - sh, t2 - sh);
-        let a = polish(c2, c1, c0, a);
+        let a = polish(c2, c1, c0, t1 - sh);
+        // Deflate by the simple root a and solve the remaining quadratic Z^2 + e1 Z + e0:
+        // a pair that only looks double beside a much larger root (two small, distinct
+        // roots, as for a dense liquid at low pressure) is resolved; a true double root
+        // gives a non-positive discriminant and stays double.
+        let e1 = c2 + a;
+        let e0 = if a.abs() > 0.0 { -c0 / a } else { c1 + a * e1 };
+        let disc = e1 * e1 - 4.0 * e0;
+        let (b1, b2) = if disc > 0.0 {
+            let qq = -0.5 * (e1 + disc.sqrt().copysign(e1));
+            let (r1, r2) = (qq, if qq == 0.0 { 0.0 } else { e0 / qq });
+            (polish(c2, c1, c0, r1), polish(c2, c1, c0, r2))
+        } else {
+            (-0.5 * e1, -0.5 * e1)
+        };
+        let mut z = [a, b1, b2];
+        z.sort_by(f64::total_cmp);
         out.len = 3;
-        out.z = if a < b { [a, b, b] } else { [b, b, a] };
+        out.z = z;
         return out;
     }
     if d > 0.0 {
@@ -204,6 +218,22 @@ mod tests {
             for (x, y) in ours.as_slice().iter().zip(&t) {
                 assert!((x - y).abs() < 1e-9, "{x} vs {y}");
             }
+        }
+    }
+
+    #[test]
+    fn two_small_distinct_roots_beside_a_large_one() {
+        // Redlich-Kwong methane at Tr = 0.3 and 0.044 Pa: Z of the dense liquid and the middle
+        // root are tiny and distinct beside the vapour root near 1, and the discriminant is
+        // within rounding of zero. Their mean is not a root.
+        let (c2, c1, c0) = (-1.0, 8.055149390705166e-8, -2.31234528160521e-16);
+        let r = solve_cubic(c2, c1, c0);
+        let z = r.as_slice();
+        assert_eq!(z.len(), 3);
+        assert!(z[1] > 10.0 * z[0], "{z:?}");
+        for zi in z {
+            let scale = (c1 * zi).abs() + c0.abs() + zi.powi(3);
+            assert!(poly(c2, c1, c0, *zi).abs() < 1e-10 * scale, "{zi}");
         }
     }
 

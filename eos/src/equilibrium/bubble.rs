@@ -1,0 +1,17 @@
+//! Bubble points: the feed is a saturated liquid with an incipient vapour. See
+//! [`super::saturation_point`] for the method.
+
+use super::sat_system::Side;
+use super::saturation_point::{point, Given, SaturationPoint};
+use crate::error::Result;
+use crate::model::Model;
+
+/// Bubble-point pressure of feed `z` at temperature `t` (K).
+pub fn pressure(model: &dyn Model, t: f64, z: &[f64]) -> Result<SaturationPoint> {
+    point(model, z, Side::Bubble, Given::T(t))
+}
+
+/// Bubble-point temperature of feed `z` at pressure `p` (Pa).
+pub fn temperature(model: &dyn Model, p: f64, z: &[f64]) -> Result<SaturationPoint> {
+    point(model, z, Side::Bubble, Given::P(p))
+}

@@ -1,0 +1,19 @@
+//! Dew points: the feed is a saturated vapour with an incipient liquid. See
+//! [`super::saturation_point`] for the method. Where the dew curve is retrograde there are
+//! two dew pressures at one temperature; the solver returns the one reached from the Wilson
+//! estimate (usually the lower); [`super::envelope`] gives the whole curve.
+
+use super::sat_system::Side;
+use super::saturation_point::{point, Given, SaturationPoint};
+use crate::error::Result;
+use crate::model::Model;
+
+/// Dew-point pressure of feed `z` at temperature `t` (K).
+pub fn pressure(model: &dyn Model, t: f64, z: &[f64]) -> Result<SaturationPoint> {
+    point(model, z, Side::Dew, Given::T(t))
+}
+
+/// Dew-point temperature of feed `z` at pressure `p` (Pa).
+pub fn temperature(model: &dyn Model, p: f64, z: &[f64]) -> Result<SaturationPoint> {
+    point(model, z, Side::Dew, Given::P(p))
+}
