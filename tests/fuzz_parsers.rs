@@ -27,15 +27,19 @@ impl Rng {
 const ALPHABET: &[&str] = &[
     "0", "1", "5", "9", ".", "-", "+", "e", "E", " ", "K", "C", "F", "R", "deg", "°", "bar", "g",
     "a", "Pa", "k", "M", "psi", "atm", "(", ")", "/", "m3", "kg", "mol", "L", "%", "=", ",", ";",
-    ":", "methane", "ethane", "co2", "nan", "inf", "1e308", "1e-320", "µ", "³", "\u{0}", "\t",
-    "ÿ", "🔥", "0.5", "100",
+    ":", "methane", "ethane", "co2", "nan", "inf", "1e308", "1e-320", "µ", "³", "\u{0}", "\t", "ÿ",
+    "🔥", "0.5", "100",
 ];
 
 fn mutate(rng: &mut Rng, seed: &str) -> String {
     let mut s: Vec<char> = seed.chars().collect();
     for _ in 0..=rng.below(4) {
         let piece: Vec<char> = ALPHABET[rng.below(ALPHABET.len())].chars().collect();
-        let at = if s.is_empty() { 0 } else { rng.below(s.len() + 1) };
+        let at = if s.is_empty() {
+            0
+        } else {
+            rng.below(s.len() + 1)
+        };
         match rng.below(4) {
             0 => {
                 s.splice(at..at, piece);
@@ -95,7 +99,10 @@ fn temperatures() {
             true
         }
         Err(e) => {
-            assert!(e.to_string().contains(s.trim()) || s.trim().is_empty(), "{e}");
+            assert!(
+                e.to_string().contains(s.trim()) || s.trim().is_empty(),
+                "{e}"
+            );
             false
         }
     });
@@ -105,7 +112,15 @@ fn temperatures() {
 
 #[test]
 fn pressures() {
-    let seeds = ["70 barg", "5 MPa", "14.7 psia", "100 psig", "1 atm", "3 bar(g)", "250 kPa"];
+    let seeds = [
+        "70 barg",
+        "5 MPa",
+        "14.7 psia",
+        "100 psig",
+        "1 atm",
+        "3 bar(g)",
+        "250 kPa",
+    ];
     let (ok, bad) = drive(&seeds, N, |s| match units::pressure(s) {
         Ok(p) => {
             match units::absolute_pressure(s, p, units::DEFAULT_AMBIENT_PA) {
@@ -115,7 +130,10 @@ fn pressures() {
             true
         }
         Err(e) => {
-            assert!(e.to_string().contains(s.trim()) || s.trim().is_empty(), "{e}");
+            assert!(
+                e.to_string().contains(s.trim()) || s.trim().is_empty(),
+                "{e}"
+            );
             false
         }
     });
@@ -124,7 +142,14 @@ fn pressures() {
 
 #[test]
 fn densities_and_volumes() {
-    let seeds = ["50 kg/m3", "0.9 g/cm3", "2 mol/L", "1 lb/ft3", "1 m3", "50 L"];
+    let seeds = [
+        "50 kg/m3",
+        "0.9 g/cm3",
+        "2 mol/L",
+        "1 lb/ft3",
+        "1 m3",
+        "50 L",
+    ];
     let (ok, bad) = drive(&seeds, N, |s| {
         let d = units::density(s);
         let v = units::volume(s);
@@ -154,7 +179,11 @@ fn compositions() {
                 Ok(f) => {
                     let sum: f64 = f.mole.iter().sum();
                     assert!((sum - 1.0).abs() < 1e-9, "{s:?}: {sum}");
-                    assert!(f.mole.iter().chain(&f.mass).all(|x| x.is_finite() && *x > 0.0));
+                    assert!(f
+                        .mole
+                        .iter()
+                        .chain(&f.mass)
+                        .all(|x| x.is_finite() && *x > 0.0));
                 }
                 Err(e) => {
                     assert!(!e.to_string().is_empty());

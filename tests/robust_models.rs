@@ -25,21 +25,46 @@ fn all_models(ids: &[&str]) -> Vec<Box<dyn Model>> {
 
 fn check(s: &State) {
     let p = &s.props;
-    for v in [p.t, p.p, p.rho, p.z, p.h, p.s, p.u, p.cv, p.h_res, p.s_res, p.g_res] {
+    for v in [
+        p.t, p.p, p.rho, p.z, p.h, p.s, p.u, p.cv, p.h_res, p.s_res, p.g_res,
+    ] {
         assert!(v.is_finite(), "non-finite property in {s:?}");
     }
-    for v in [p.cp, p.w, p.jt, p.isentropic_exponent].into_iter().flatten() {
+    for v in [p.cp, p.w, p.jt, p.isentropic_exponent]
+        .into_iter()
+        .flatten()
+    {
         assert!(v.is_finite(), "non-finite optional property in {s:?}");
     }
-    assert!(p.ln_phi.iter().all(|v| v.is_finite()), "non-finite ln phi in {s:?}");
+    assert!(
+        p.ln_phi.iter().all(|v| v.is_finite()),
+        "non-finite ln phi in {s:?}"
+    );
     assert!(p.z > 0.0 && p.rho > 0.0);
 }
 
 /// Ids with no missing heat-capacity data and a spread of sizes and polarities.
 const POOL: [&str; 20] = [
-    "methane", "ethane", "propane", "n-butane", "isobutane", "n-pentane", "n-hexane",
-    "n-heptane", "n-octane", "n-decane", "nitrogen", "co2", "h2s", "water", "hydrogen",
-    "helium-4", "oxygen", "argon", "ammonia", "methanol",
+    "methane",
+    "ethane",
+    "propane",
+    "n-butane",
+    "isobutane",
+    "n-pentane",
+    "n-hexane",
+    "n-heptane",
+    "n-octane",
+    "n-decane",
+    "nitrogen",
+    "co2",
+    "h2s",
+    "water",
+    "hydrogen",
+    "helium-4",
+    "oxygen",
+    "argon",
+    "ammonia",
+    "methanol",
 ];
 
 fn fractions(n: usize, raw: &[f64]) -> Vec<f64> {

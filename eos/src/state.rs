@@ -8,7 +8,7 @@
 use crate::composition;
 use crate::constants::R;
 use crate::error::{positive, Error, Result};
-use crate::model::Model;
+use crate::model::{DensityRoots, Model};
 use crate::phase::Phase;
 use crate::properties::{evaluate, Properties};
 
@@ -45,7 +45,7 @@ fn g_res_rt(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> f64 {
 
 /// Names the phase of a single-phase state at (T, P, rho).
 pub(crate) fn phase_of(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -> (Phase, usize) {
-    let roots = model.densities(t, p, x);
+    let roots = refined_densities(model, t, p, x);
     let n = roots.as_slice().len();
     let (tc, pc) = model.pseudo_critical(x);
     if t >= tc {
@@ -81,7 +81,7 @@ impl State {
         positive("temperature (K)", t)?;
         positive("pressure (Pa)", p)?;
         composition::check(x, model.components().len())?;
-        let roots = model.densities(t, p, x);
+        let roots = refined_densities(model, t, p, x);
         let r = roots.as_slice();
         if r.is_empty() {
             return Err(Error::NoSolution(format!(
@@ -169,12 +169,61 @@ impl State {
         let t = roots::find_root_brent(lo, hi, f, &mut conv).map_err(|_| Error::NotConverged {
             solver: "temperature from (P, rho)",
             iterations: 200,
-            residual: f64::NAN,
+            residual: f(0.5 * (lo + hi)).abs(),
         })?;
         let mut s = Self::at_trho(model, t, rho, x)?;
         s.props.p = p;
         Ok(s)
     }
+}
+
+/// The model's density roots at (T, P), each confirmed by Newton steps on P(rho) = p with the
+/// model's own dP/drho. A closed-form cubic loses relative precision for a dense liquid at very
+/// low pressure (Z of order 1e-9 or less, where P(rho) is extremely steep); the steps restore
+/// it. A root whose slope is not positive, or whose pressure cannot be brought to p within
+/// rounding, is dropped; roots that meet are kept once.
+pub fn refined_densities(model: &dyn Model, t: f64, p: f64, x: &[f64]) -> DensityRoots {
+    let raw = model.densities(t, p, x);
+    let mut kept = [0.0; 3];
+    let mut n = 0;
+    for &rho in raw.as_slice() {
+        if let Some(r) = refine(model, t, p, x, rho) {
+            if kept[..n].iter().all(|k| (k - r).abs() > 1e-9 * r) {
+                kept[n] = r;
+                n += 1;
+            }
+        }
+    }
+    DensityRoots::from_slice(&kept[..n])
+}
+
+/// Newton on P(rho) = p from `rho0`; `None` when the root cannot be confirmed.
+fn refine(model: &dyn Model, t: f64, p: f64, x: &[f64], rho0: f64) -> Option<f64> {
+    let rt = R * t;
+    let max = model.max_density(x);
+    let mut rho = rho0;
+    for _ in 0..20 {
+        let r = model.residual(t, rho, x);
+        let pc = rho * rt * r.z();
+        let slope = rt * r.dp_drho_rt();
+        if !(slope > 0.0 && pc.is_finite()) {
+            return None;
+        }
+        let step = (pc - p) / slope;
+        let next = rho - step;
+        if !(next > 0.0 && next < max) {
+            return None;
+        }
+        rho = next;
+        if step.abs() <= 1e-13 * rho {
+            break;
+        }
+    }
+    let r = model.residual(t, rho, x);
+    let pc = rho * rt * r.z();
+    // Rounding noise of P: the repulsive and attractive terms are each of order rho R T |a_d|.
+    let noise = 1e-12 * rho * rt * (1.0 + r.a_d.abs());
+    (pc > 0.0 && (pc - p).abs() <= 1e-9 * p + noise).then_some(rho)
 }
 
 fn check_density(model: &dyn Model, rho: f64, x: &[f64]) -> Result<()> {
