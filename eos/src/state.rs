@@ -197,9 +197,22 @@ pub fn refined_densities(model: &dyn Model, t: f64, p: f64, x: &[f64]) -> Densit
     DensityRoots::from_slice(&kept[..n])
 }
 
-/// Newton on P(rho) = p from `rho0`; `None` when the root cannot be confirmed.
+/// Newton on P(rho) = p from `rho0`; `None` when the root cannot be confirmed. A root that
+/// already satisfies P(rho) = p to rounding is kept as it is (at a critical point dP/drho = 0
+/// and Newton has no slope to work with).
 fn refine(model: &dyn Model, t: f64, p: f64, x: &[f64], rho0: f64) -> Option<f64> {
     let rt = R * t;
+    let confirmed = |rho: f64| {
+        let r = model.residual(t, rho, x);
+        let pc = rho * rt * r.z();
+        // Rounding noise of P: the repulsive and attractive terms are each of order
+        // rho R T |a_d|.
+        let noise = 1e-12 * rho * rt * (1.0 + r.a_d.abs());
+        pc > 0.0 && (pc - p).abs() <= 1e-9 * p + noise
+    };
+    if confirmed(rho0) {
+        return Some(rho0);
+    }
     let max = model.max_density(x);
     let mut rho = rho0;
     for _ in 0..20 {
@@ -219,11 +232,7 @@ fn refine(model: &dyn Model, t: f64, p: f64, x: &[f64], rho0: f64) -> Option<f64
             break;
         }
     }
-    let r = model.residual(t, rho, x);
-    let pc = rho * rt * r.z();
-    // Rounding noise of P: the repulsive and attractive terms are each of order rho R T |a_d|.
-    let noise = 1e-12 * rho * rt * (1.0 + r.a_d.abs());
-    (pc > 0.0 && (pc - p).abs() <= 1e-9 * p + noise).then_some(rho)
+    confirmed(rho).then_some(rho)
 }
 
 fn check_density(model: &dyn Model, rho: f64, x: &[f64]) -> Result<()> {
