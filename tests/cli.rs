@@ -299,3 +299,53 @@ fn normalisation_only_when_asked() {
     let x = v["composition"][0]["mole_fraction"].as_f64().unwrap();
     assert!((x - 0.9 / 0.95).abs() < 1e-15);
 }
+
+#[test]
+fn a_split_mixture_is_reported_as_two_phases() {
+    // Material balance of the reported split (definition of the vapour fraction) and the
+    // fixed JSON names of a two-phase state.
+    let out = zf()
+        .args([
+            "state",
+            "--mix",
+            "methane=0.8,propane=0.15,n-pentane=0.05",
+            "-t",
+            "250 K",
+            "-p",
+            "30 bar",
+            "-m",
+            "pr",
+            "--format",
+            "json",
+        ])
+        .output()
+        .unwrap();
+    assert_eq!(
+        out.status.code(),
+        Some(3),
+        "two-phase states carry a warning"
+    );
+    assert!(String::from_utf8_lossy(&out.stderr).contains("meaningless"));
+    let v: Value = serde_json::from_slice(&out.stdout).unwrap();
+    let r = &v["results"][0];
+    assert_eq!(r["phase"], "two-phase");
+    let beta = r["vapor_fraction"].as_f64().unwrap();
+    assert!(beta > 0.0 && beta < 1.0);
+    let phases = r["phases"].as_array().unwrap();
+    assert_eq!(phases.len(), 2);
+    let feed = [0.8, 0.15, 0.05];
+    for (i, zi) in feed.iter().enumerate() {
+        let y = phases[0]["composition"][i]["mole_fraction"]
+            .as_f64()
+            .unwrap();
+        let x = phases[1]["composition"][i]["mole_fraction"]
+            .as_f64()
+            .unwrap();
+        assert!((beta * y + (1.0 - beta) * x - zi).abs() < 1e-12);
+    }
+    for ph in phases {
+        for key in ["z", "molar_density_mol_m3", "mass_density_kg_m3"] {
+            assert!(ph[key].as_f64().unwrap() > 0.0);
+        }
+    }
+}

@@ -4,7 +4,10 @@ use crate::cli::{RootArg, StateArgs};
 use crate::error::{from_eos, CliError};
 use crate::feed::{self, Feed};
 use crate::models::{self, BuiltModel};
-use crate::report::state::{CompositionRow, FugacityRow, ModelResult, StateInput, StateReport};
+use crate::report::state::{
+    ComponentFraction, CompositionRow, FugacityRow, ModelResult, PhaseResult, StateInput,
+    StateReport,
+};
 use crate::units::{self, Density};
 use eos::state::{RootChoice, State};
 
@@ -88,6 +91,18 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
             warnings.join("; ")
         )));
     }
+    let split: Vec<&str> = results
+        .iter()
+        .filter(|r| r.vapor_fraction.is_some())
+        .map(|r| r.model.as_str())
+        .collect();
+    if !split.is_empty() {
+        warnings.push(format!(
+            "the mixture splits into vapour and liquid at this state ({}): a single-phase Z \
+             would be meaningless; the phases are reported",
+            split.join(", ")
+        ));
+    }
     let (notes, more) = extrapolation_warnings(&feed, &results);
     warnings.extend(more);
     for r in &mut results {
@@ -135,7 +150,8 @@ pub fn composition_rows(feed: &Feed) -> Vec<CompositionRow> {
         .collect()
 }
 
-/// One model's result.
+/// One model's result. A mixture at (T, P) is flashed first: the state is reported as one
+/// phase only when the stability test passes; otherwise as the split, with each phase.
 fn compute(
     built: &BuiltModel,
     feed: &Feed,
@@ -145,6 +161,14 @@ fn compute(
     let m = built.model.as_ref();
     let x = &feed.mole;
     let ctx = format!("model {}", built.id);
+    if let (Given::Tp(t, p), false, RootChoice::LowestGibbs) = (given, feed.is_pure(), root) {
+        if built.id != "ideal" {
+            let flash = eos::equilibrium::flash::tp(m, t, p, x).map_err(|e| from_eos(&ctx, e))?;
+            if let eos::equilibrium::flash::FlashResult::TwoPhase(split) = flash {
+                return two_phase(built, feed, &split);
+            }
+        }
+    }
     let state = match given {
         Given::Tp(t, p) => State::at_tp(m, t, p, x, root),
         Given::TRho(t, r) => State::at_trho(m, t, r, x),
@@ -164,6 +188,18 @@ fn compute(
              the state is mechanically unstable (dP/drho <= 0)"
                 .to_string(),
         );
+    }
+    if !feed.is_pure() && built.id != "ideal" && !matches!(given, Given::Tp(..)) {
+        let st =
+            eos::equilibrium::stability::test(m, pr.t, pr.p, x).map_err(|e| from_eos(&ctx, e))?;
+        if !st.stable {
+            return Err(CliError::Computation(format!(
+                "model {}: the mixture at this state is not stable as one phase (it lies inside \
+                 the two-phase region at T = {:.3} K, P = {:.6e} Pa); a single-phase Z would be \
+                 meaningless. Give temperature and pressure to see the phase split.",
+                built.id, pr.t, pr.p
+            )));
+        }
     }
     let mm = pr.molar_mass;
     let result = ModelResult {
@@ -186,25 +222,109 @@ fn compute(
         internal_energy_j_mol: pr.u,
         enthalpy_j_kg: pr.h / mm,
         entropy_j_kg_k: pr.s / mm,
-        cv_j_mol_k: pr.cv,
+        cv_j_mol_k: Some(pr.cv),
         cp_j_mol_k: pr.cp,
         speed_of_sound_m_s: pr.w,
         joule_thomson_k_pa: pr.jt,
         isentropic_exponent: pr.isentropic_exponent,
-        residual_enthalpy_j_mol: pr.h_res,
-        residual_entropy_j_mol_k: pr.s_res,
-        residual_gibbs_j_mol: pr.g_res,
-        fugacity: feed
+        residual_enthalpy_j_mol: Some(pr.h_res),
+        residual_entropy_j_mol_k: Some(pr.s_res),
+        residual_gibbs_j_mol: Some(pr.g_res),
+        vapor_fraction: None,
+        phases: Vec::new(),
+        fugacity: fugacities(feed, &pr.ln_phi, x, pr.p),
+        notes,
+    };
+    check_finite(&result)?;
+    Ok(result)
+}
+
+fn fugacities(feed: &Feed, ln_phi: &[f64], x: &[f64], p: f64) -> Vec<FugacityRow> {
+    feed.records
+        .iter()
+        .zip(ln_phi)
+        .zip(x)
+        .map(|((r, lp), xi)| FugacityRow {
+            component: r.id.clone(),
+            phi: lp.exp(),
+            fugacity_pa: xi * lp.exp() * p,
+        })
+        .collect()
+}
+
+/// The result for a feed that splits into vapour and liquid: bulk values by the lever rule,
+/// each phase with its amount, Z, densities and composition.
+fn two_phase(
+    built: &BuiltModel,
+    feed: &Feed,
+    split: &eos::equilibrium::flash::TwoPhase,
+) -> Result<ModelResult, CliError> {
+    let m = built.model.as_ref();
+    let (t, p, beta) = (split.t, split.p, split.vapor_fraction);
+    let vap = eos::properties::evaluate(m, t, split.rho_v, &split.y);
+    let liq = eos::properties::evaluate(m, t, split.rho_l, &split.x);
+    let bulk = |v: f64, l: f64| beta * v + (1.0 - beta) * l;
+    let v_molar = bulk(1.0 / vap.rho, 1.0 / liq.rho);
+    let rho = 1.0 / v_molar;
+    let mm = feed.molar_mass();
+    let z = p * v_molar / (eos::constants::R * t);
+    let phase = |name, amount: f64, pr: &eos::properties::Properties, comp: &[f64]| PhaseResult {
+        phase: name,
+        amount,
+        z: pr.z,
+        molar_density_mol_m3: pr.rho,
+        mass_density_kg_m3: pr.mass_density(),
+        composition: feed
             .records
             .iter()
-            .zip(&pr.ln_phi)
-            .zip(x)
-            .map(|((r, lp), xi)| FugacityRow {
+            .zip(comp)
+            .map(|(r, &f)| ComponentFraction {
                 component: r.id.clone(),
-                phi: lp.exp(),
-                fugacity_pa: xi * lp.exp() * pr.p,
+                mole_fraction: f,
             })
             .collect(),
+    };
+    let mut notes = built.notes.clone();
+    notes.push(format!(
+        "the feed splits into vapour ({:.4} mol/mol) and liquid ({:.4} mol/mol): Z and density \
+         are bulk values of both phases together, and a single-phase Z would be meaningless here",
+        beta,
+        1.0 - beta
+    ));
+    let result = ModelResult {
+        model: built.id.clone(),
+        model_name: built.name.clone(),
+        citation: built.citation.clone(),
+        phase: eos::phase::Phase::TwoPhase.to_string(),
+        roots: 0,
+        temperature_k: t,
+        pressure_pa: p,
+        z,
+        molar_density_mol_m3: rho,
+        mass_density_kg_m3: rho * mm,
+        molar_volume_m3_mol: v_molar,
+        specific_volume_m3_kg: v_molar / mm,
+        ideal_gas_deviation_pct: 100.0 * (z - 1.0),
+        ideal_gas_deviation_of: "density",
+        enthalpy_j_mol: bulk(vap.h, liq.h),
+        entropy_j_mol_k: bulk(vap.s, liq.s),
+        internal_energy_j_mol: bulk(vap.u, liq.u),
+        enthalpy_j_kg: bulk(vap.h, liq.h) / mm,
+        entropy_j_kg_k: bulk(vap.s, liq.s) / mm,
+        cv_j_mol_k: None,
+        cp_j_mol_k: None,
+        speed_of_sound_m_s: None,
+        joule_thomson_k_pa: None,
+        isentropic_exponent: None,
+        residual_enthalpy_j_mol: None,
+        residual_entropy_j_mol_k: None,
+        residual_gibbs_j_mol: None,
+        vapor_fraction: Some(beta),
+        phases: vec![
+            phase("vapor", beta, &vap, &split.y),
+            phase("liquid", 1.0 - beta, &liq, &split.x),
+        ],
+        fugacity: fugacities(feed, &vap.ln_phi, &split.y, p),
         notes,
     };
     check_finite(&result)?;
@@ -219,16 +339,19 @@ fn check_finite(r: &ModelResult) -> Result<(), CliError> {
         r.mass_density_kg_m3,
         r.enthalpy_j_mol,
         r.entropy_j_mol_k,
-        r.cv_j_mol_k,
-        r.residual_gibbs_j_mol,
         r.temperature_k,
         r.pressure_pa,
     ];
     let optional = [
+        r.cv_j_mol_k,
         r.cp_j_mol_k,
         r.speed_of_sound_m_s,
         r.joule_thomson_k_pa,
         r.isentropic_exponent,
+        r.residual_enthalpy_j_mol,
+        r.residual_entropy_j_mol_k,
+        r.residual_gibbs_j_mol,
+        r.vapor_fraction,
     ];
     let fug = r.fugacity.iter().map(|f| f.phi);
     if values

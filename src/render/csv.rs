@@ -43,6 +43,7 @@ pub fn state(r: &StateReport) -> Result<String, CliError> {
         "residual_enthalpy_j_mol",
         "residual_entropy_j_mol_k",
         "residual_gibbs_j_mol",
+        "vapor_fraction",
     ]
     .iter()
     .map(|s| s.to_string())
@@ -64,13 +65,14 @@ pub fn state(r: &StateReport) -> Result<String, CliError> {
             full(m.enthalpy_j_mol),
             full(m.entropy_j_mol_k),
             opt(m.cp_j_mol_k),
-            full(m.cv_j_mol_k),
+            opt(m.cv_j_mol_k),
             opt(m.speed_of_sound_m_s),
             opt(m.joule_thomson_k_pa),
             opt(m.isentropic_exponent),
-            full(m.residual_enthalpy_j_mol),
-            full(m.residual_entropy_j_mol_k),
-            full(m.residual_gibbs_j_mol),
+            opt(m.residual_enthalpy_j_mol),
+            opt(m.residual_entropy_j_mol_k),
+            opt(m.residual_gibbs_j_mol),
+            opt(m.vapor_fraction),
         ];
         row.extend(m.fugacity.iter().map(|f| full(f.phi)));
         w.write_record(&row).map_err(err)?;

@@ -83,6 +83,17 @@ pub fn state(r: &StateReport) -> String {
     };
     let res = &r.results;
     row(&mut t, "phase", "", &|i| res[i].phase.clone());
+    if res.iter().any(|m| m.vapor_fraction.is_some()) {
+        row(&mut t, "vapour fraction", "mol/mol", &|i| {
+            opt(res[i].vapor_fraction, 5)
+        });
+        row(&mut t, "vapour density", "kg/m3", &|i| {
+            opt(res[i].phases.first().map(|p| p.mass_density_kg_m3), 6)
+        });
+        row(&mut t, "liquid density", "kg/m3", &|i| {
+            opt(res[i].phases.get(1).map(|p| p.mass_density_kg_m3), 6)
+        });
+    }
     if inp.temperature_k.is_none() {
         row(&mut t, "temperature", "K", &|i| {
             sig(res[i].temperature_k, 6)
@@ -118,7 +129,7 @@ pub fn state(r: &StateReport) -> String {
         opt(res[i].cp_j_mol_k.map(|c| c / mm(i) / 1e3), 5)
     });
     row(&mut t, "cv", "kJ/(kg K)", &|i| {
-        sig(res[i].cv_j_mol_k / mm(i) / 1e3, 5)
+        opt(res[i].cv_j_mol_k.map(|c| c / mm(i) / 1e3), 5)
     });
     row(&mut t, "speed of sound", "m/s", &|i| {
         opt(res[i].speed_of_sound_m_s, 5)

@@ -83,13 +83,15 @@ pub struct ModelResult {
     /// `ideal_gas_deviation_of`): positive when the ideal gas law gives too much.
     pub ideal_gas_deviation_pct: f64,
     /// Which variable the ideal-gas deviation is for: "density", "pressure" or "temperature".
+    /// For a two-phase state the bulk density (both phases together) is used.
     pub ideal_gas_deviation_of: &'static str,
     pub enthalpy_j_mol: f64,
     pub entropy_j_mol_k: f64,
     pub internal_energy_j_mol: f64,
     pub enthalpy_j_kg: f64,
     pub entropy_j_kg_k: f64,
-    pub cv_j_mol_k: f64,
+    /// Isochoric heat capacity; null for a two-phase state.
+    pub cv_j_mol_k: Option<f64>,
     /// Isobaric heat capacity; null where the state is mechanically unstable.
     pub cp_j_mol_k: Option<f64>,
     /// Speed of sound; null where the state is mechanically unstable.
@@ -98,13 +100,39 @@ pub struct ModelResult {
     pub joule_thomson_k_pa: Option<f64>,
     /// Real-gas isentropic exponent -(v/P)(dP/dv)_s; null where mechanically unstable.
     pub isentropic_exponent: Option<f64>,
-    pub residual_enthalpy_j_mol: f64,
-    pub residual_entropy_j_mol_k: f64,
-    pub residual_gibbs_j_mol: f64,
+    /// Departure functions at the same T and P; null for a two-phase state.
+    pub residual_enthalpy_j_mol: Option<f64>,
+    pub residual_entropy_j_mol_k: Option<f64>,
+    pub residual_gibbs_j_mol: Option<f64>,
+    /// Molar vapour fraction of a two-phase state; null for one phase.
+    pub vapor_fraction: Option<f64>,
+    /// The phases of a two-phase state (empty for one phase).
+    pub phases: Vec<PhaseResult>,
     /// Fugacity coefficient and fugacity of each component.
     pub fugacity: Vec<FugacityRow>,
     /// Basis notes (k_ij used or missing).
     pub notes: Vec<String>,
+}
+
+/// One phase of a split state.
+#[derive(Debug, Clone, Serialize)]
+pub struct PhaseResult {
+    /// "vapor" or "liquid".
+    pub phase: &'static str,
+    /// Moles of this phase per mole of feed.
+    pub amount: f64,
+    pub z: f64,
+    pub molar_density_mol_m3: f64,
+    pub mass_density_kg_m3: f64,
+    /// Mole fractions of the phase.
+    pub composition: Vec<ComponentFraction>,
+}
+
+/// A component's mole fraction in a phase.
+#[derive(Debug, Clone, Serialize)]
+pub struct ComponentFraction {
+    pub component: String,
+    pub mole_fraction: f64,
 }
 
 /// Fugacity of one component in one result.
