@@ -1,15 +1,69 @@
 //! Model ids of the command line and JSON, and how each model is built for a fluid.
+//!
+//! Two kinds of model sit behind one [`BuiltModel`]: those with a residual Helmholtz energy
+//! ([`eos::Model`]: the ideal gas, the cubic family and its volume-translated forms, the
+//! virial equation, the reference formulations) and those that answer at (T, P) directly
+//! ([`eos::tp_explicit::TpModel`]: Lee-Kesler, the gas-gravity correlations, IAPWS-IF97).
 
 use crate::error::{from_eos, CliError};
 use crate::feed::Feed;
 use eos::cubic::{Cubic, CubicKind};
+use eos::gas_gravity::ZCorrelation;
 use eos::ideal::IdealGas;
+use eos::phase::Phase;
+use eos::properties::Properties;
+use eos::state::{RootChoice, State};
+use eos::tp_explicit::{self, GravityModel, If97Model, LeeKeslerModel, TpModel};
+use eos::translated::Translated;
+use eos::virial::{Correlation, Virial};
 use eos::Model;
+
+/// Every model id the tool knows, simplest first.
+pub const ALL_IDS: [&str; 16] = [
+    "ideal",
+    "vdw",
+    "rk",
+    "srk",
+    "pr",
+    "pr78",
+    "srk-pen",
+    "pr-pen",
+    "pr78-pen",
+    "virial",
+    "lk",
+    "dak",
+    "hy",
+    "if97",
+    "sw12",
+    "reference",
+];
+
+/// The ids "all" stands for: the ideal gas, the cubic family, and the fluid's reference
+/// formulations where it has them.
+const ALL_SET: [&str; 9] = [
+    "ideal",
+    "vdw",
+    "rk",
+    "srk",
+    "pr",
+    "pr78",
+    "if97",
+    "sw12",
+    "reference",
+];
+
+/// How a model computes.
+pub enum Engine {
+    /// A residual Helmholtz energy in (T, rho).
+    Helmholtz(Box<dyn Model>),
+    /// Answers at (T, P).
+    TpExplicit(Box<dyn TpModel>),
+}
 
 /// A model ready for a feed, with the notes that belong to its basis (k_ij used or missing).
 pub struct BuiltModel {
-    /// The model.
-    pub model: Box<dyn Model>,
+    /// How it computes.
+    pub engine: Engine,
     /// Its id.
     pub id: String,
     /// Its display name.
@@ -20,24 +74,106 @@ pub struct BuiltModel {
     pub notes: Vec<String>,
 }
 
-/// Every model id the tool knows, simplest first.
-pub const ALL_IDS: [&str; 6] = ["ideal", "vdw", "rk", "srk", "pr", "pr78"];
+/// A single-phase state from any model.
+pub struct ModelState {
+    pub props: Properties,
+    pub phase: Phase,
+    pub roots: usize,
+    /// Inputs outside the model's published range.
+    pub warnings: Vec<String>,
+}
+
+impl BuiltModel {
+    /// The model as an [`eos::Model`], when it is one (phase equilibrium needs it).
+    pub fn helmholtz(&self) -> Option<&dyn Model> {
+        match &self.engine {
+            Engine::Helmholtz(m) => Some(m.as_ref()),
+            Engine::TpExplicit(_) => None,
+        }
+    }
+
+    /// The state at (T, P).
+    pub fn at_tp(&self, t: f64, p: f64, x: &[f64], root: RootChoice) -> eos::Result<ModelState> {
+        match &self.engine {
+            Engine::Helmholtz(m) => State::at_tp(m.as_ref(), t, p, x, root).map(from_state),
+            Engine::TpExplicit(m) => tp_explicit::state_tp(m.as_ref(), t, p, x, root).map(from_tp),
+        }
+    }
+
+    /// The state at (T, molar density).
+    pub fn at_trho(
+        &self,
+        t: f64,
+        rho: f64,
+        x: &[f64],
+        root: RootChoice,
+    ) -> eos::Result<ModelState> {
+        match &self.engine {
+            Engine::Helmholtz(m) => State::at_trho(m.as_ref(), t, rho, x).map(from_state),
+            Engine::TpExplicit(m) => {
+                tp_explicit::state_trho(m.as_ref(), t, rho, x, root).map(from_tp)
+            }
+        }
+    }
+
+    /// The state at (P, molar density).
+    pub fn at_prho(
+        &self,
+        p: f64,
+        rho: f64,
+        x: &[f64],
+        root: RootChoice,
+    ) -> eos::Result<ModelState> {
+        match &self.engine {
+            Engine::Helmholtz(m) => State::at_prho(m.as_ref(), p, rho, x).map(from_state),
+            Engine::TpExplicit(m) => {
+                tp_explicit::state_prho(m.as_ref(), p, rho, x, root).map(from_tp)
+            }
+        }
+    }
+}
+
+fn from_state(s: State) -> ModelState {
+    ModelState {
+        props: s.props,
+        phase: s.phase,
+        roots: s.roots,
+        warnings: Vec::new(),
+    }
+}
+
+fn from_tp(s: tp_explicit::TpState) -> ModelState {
+    ModelState {
+        props: s.props,
+        phase: s.phase,
+        roots: 1,
+        warnings: s.warnings,
+    }
+}
+
+fn unknown(part: &str) -> CliError {
+    CliError::BadInput(format!(
+        "unknown model \"{part}\"; known models: {}, or all (run `zfactor models` for what each is)",
+        ALL_IDS.join(", ")
+    ))
+}
 
 /// Expands a `--model` value ("all", one id, or a comma-separated list) into ids, refusing
-/// unknown ones with the list of known ids.
-pub fn resolve_ids(spec: &str) -> Result<Vec<String>, CliError> {
+/// unknown ones with the list of known ids. "all" keeps only the models that apply to `feed`.
+pub fn resolve_ids(spec: &str, feed: &Feed) -> Result<Vec<String>, CliError> {
     let spec = spec.trim();
     if spec.eq_ignore_ascii_case("all") {
-        return Ok(ALL_IDS.iter().map(|s| s.to_string()).collect());
+        return Ok(ALL_SET
+            .iter()
+            .filter(|id| applies(id, feed))
+            .map(|s| s.to_string())
+            .collect());
     }
     let mut ids = Vec::new();
     for part in spec.split(',').map(str::trim).filter(|s| !s.is_empty()) {
         let id = part.to_ascii_lowercase();
         if !ALL_IDS.contains(&id.as_str()) {
-            return Err(CliError::BadInput(format!(
-                "unknown model \"{part}\"; known models: {}, or all",
-                ALL_IDS.join(", ")
-            )));
+            return Err(unknown(part));
         }
         if !ids.contains(&id) {
             ids.push(id);
@@ -52,71 +188,156 @@ pub fn resolve_ids(spec: &str) -> Result<Vec<String>, CliError> {
     Ok(ids)
 }
 
+/// True when model `id` can be built for `feed` (reference formulations exist for a few pure
+/// fluids, IF97 only for water).
+pub fn applies(id: &str, feed: &Feed) -> bool {
+    match id {
+        "reference" => {
+            feed.is_pure() && eos::helmholtz::reference_for(&feed.records[0].id).is_some()
+        }
+        "sw12" => feed.is_pure() && eos::helmholtz::technical_for(&feed.records[0].id).is_some(),
+        "if97" => feed.is_pure() && feed.records[0].id == "water",
+        _ => true,
+    }
+}
+
+fn info(id: &str) -> (String, String) {
+    eos::catalogue::find(id).map_or_else(
+        || (id.to_string(), String::new()),
+        |m| (m.name.to_string(), m.citation.to_string()),
+    )
+}
+
 /// Builds model `id` for `feed`.
 pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
     let comps = feed.components();
-    if id == "ideal" {
-        return Ok(BuiltModel {
-            model: Box::new(IdealGas::new(&comps)),
-            id: id.to_string(),
-            name: "ideal gas".to_string(),
-            citation: "P v = R T".to_string(),
-            notes: Vec::new(),
-        });
-    }
-    let kind = CubicKind::from_id(id).ok_or_else(|| {
+    let ctx = format!("building model {id}");
+    let err = |e| from_eos(&ctx, e);
+    let mut notes = Vec::new();
+    let pure_only = |what: &str| {
         CliError::BadInput(format!(
-            "unknown model \"{id}\"; known models: {}",
-            ALL_IDS.join(", ")
+            "model {id} ({what}) is for a single fluid, not a mixture; choose a mixture model \
+             such as pr or srk"
         ))
-    })?;
+    };
+    let engine = match id {
+        "ideal" => Engine::Helmholtz(Box::new(IdealGas::new(&comps))),
+        "vdw" | "rk" | "srk" | "pr" | "pr78" | "srk-pen" | "pr-pen" | "pr78-pen" => {
+            let base = id.trim_end_matches("-pen");
+            let kind = CubicKind::from_id(base).ok_or_else(|| unknown(id))?;
+            let kij = kij_for(kind, feed, &mut notes);
+            if id.ends_with("-pen") {
+                Engine::Helmholtz(Box::new(
+                    Translated::peneloux(kind, &comps, kij.as_deref(), None).map_err(err)?,
+                ))
+            } else {
+                Engine::Helmholtz(Box::new(
+                    Cubic::new(kind, &comps, kij.as_deref()).map_err(err)?,
+                ))
+            }
+        }
+        "virial" => Engine::Helmholtz(Box::new(
+            Virial::new(&comps, Correlation::Tsonopoulos, None).map_err(err)?,
+        )),
+        "lk" => Engine::TpExplicit(Box::new(LeeKeslerModel::new(&comps, None).map_err(err)?)),
+        "dak" => Engine::TpExplicit(Box::new(GravityModel::new(&comps, ZCorrelation::Dak))),
+        "hy" => Engine::TpExplicit(Box::new(GravityModel::new(
+            &comps,
+            ZCorrelation::HallYarborough,
+        ))),
+        "if97" => {
+            if !feed.is_pure() {
+                return Err(pure_only("water and steam"));
+            }
+            if feed.records[0].id != "water" {
+                return Err(CliError::BadInput(format!(
+                    "model if97 is the industrial formulation for water and steam, not for {}",
+                    feed.records[0].name
+                )));
+            }
+            Engine::TpExplicit(Box::new(If97Model::new(comps[0].clone())))
+        }
+        "reference" | "sw12" => {
+            if !feed.is_pure() {
+                return Err(pure_only("a reference formulation"));
+            }
+            let rec = feed.records[0];
+            let found = if id == "reference" {
+                eos::helmholtz::reference_for(&rec.id)
+            } else {
+                eos::helmholtz::technical_for(&rec.id)
+            };
+            let f = found.ok_or_else(|| {
+                CliError::BadInput(format!(
+                    "{} has no {} formulation in zfactor; they exist for {}",
+                    rec.name,
+                    if id == "reference" {
+                        "reference"
+                    } else {
+                        "12-term technical"
+                    },
+                    if id == "reference" {
+                        "water, nitrogen, carbon dioxide, methane, argon and hydrogen"
+                    } else {
+                        "nitrogen, carbon dioxide, methane and argon"
+                    }
+                ))
+            })?;
+            let form = f.formulation();
+            let name = format!("{} ({})", form.title, form.fluid);
+            let citation =
+                eos::catalogue::find(id).map_or_else(String::new, |m| m.citation.to_string());
+            return Ok(BuiltModel {
+                engine: Engine::Helmholtz(Box::new(f)),
+                id: id.to_string(),
+                name,
+                citation,
+                notes,
+            });
+        }
+        _ => return Err(unknown(id)),
+    };
+    let (name, citation) = info(id);
+    Ok(BuiltModel {
+        engine,
+        id: id.to_string(),
+        name,
+        citation,
+        notes,
+    })
+}
+
+/// The k_ij matrix a cubic member uses for `feed`, with notes on where it came from.
+fn kij_for(kind: CubicKind, feed: &Feed, notes: &mut Vec<String>) -> Option<Vec<f64>> {
     let family = match kind {
         CubicKind::Pr76 | CubicKind::Pr78 => Some(fluids::KijFamily::PengRobinson),
         CubicKind::Srk => Some(fluids::KijFamily::Soave),
         CubicKind::Vdw | CubicKind::Rk => None,
     };
-    let mut notes = Vec::new();
-    let kij = match family {
-        Some(f) if !feed.is_pure() => {
-            let ids = feed.ids();
-            let m = fluids::kij_matrix(&ids, f);
-            let used = (ids.len() * (ids.len() - 1)) / 2 - m.missing.len();
-            if used > 0 {
-                notes.push(format!("k_ij from the fluids data for {used} pair(s)"));
-                if f == fluids::KijFamily::Soave {
-                    notes.push(
-                        "no SRK-specific k_ij at hand: the Peng-Robinson values are used"
-                            .to_string(),
-                    );
-                }
-            }
-            if !m.missing.is_empty() {
-                let pairs: Vec<String> =
-                    m.missing.iter().map(|(a, b)| format!("{a}-{b}")).collect();
-                notes.push(format!(
-                    "k_ij = 0 (no value known) for {}",
-                    pairs.join(", ")
-                ));
-            }
-            Some(m.values)
-        }
-        _ => {
-            if !feed.is_pure() {
-                notes.push(format!(
-                    "k_ij = 0 for every pair ({id} is used without k_ij)"
-                ));
-            }
-            None
-        }
+    if feed.is_pure() {
+        return None;
+    }
+    let Some(f) = family else {
+        notes.push("k_ij = 0 for every pair (this member is used without k_ij)".to_string());
+        return None;
     };
-    let cubic = Cubic::new(kind, &comps, kij.as_deref())
-        .map_err(|e| from_eos(&format!("building model {id}"), e))?;
-    let spec = kind.spec();
-    Ok(BuiltModel {
-        model: Box::new(cubic),
-        id: id.to_string(),
-        name: spec.name.to_string(),
-        citation: spec.citation.to_string(),
-        notes,
-    })
+    let ids = feed.ids();
+    let m = fluids::kij_matrix(&ids, f);
+    let used = (ids.len() * (ids.len() - 1)) / 2 - m.missing.len();
+    if used > 0 {
+        notes.push(format!("k_ij from the fluids data for {used} pair(s)"));
+        if f == fluids::KijFamily::Soave {
+            notes.push(
+                "no SRK-specific k_ij at hand: the Peng-Robinson values are used".to_string(),
+            );
+        }
+    }
+    if !m.missing.is_empty() {
+        let pairs: Vec<String> = m.missing.iter().map(|(a, b)| format!("{a}-{b}")).collect();
+        notes.push(format!(
+            "k_ij = 0 (no value known) for {}",
+            pairs.join(", ")
+        ));
+    }
+    Some(m.values)
 }

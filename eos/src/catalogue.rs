@@ -177,8 +177,8 @@ pub const ALL: &[ModelInfo] = &[
     ModelInfo {
         id: "reference",
         name: "Reference multiparameter equations of state",
-        citation: "Setzmann & Wagner (1991) methane; Span & Wagner (1996) CO2; Span et al. \
-                   (2000) N2; Tegeler, Span & Wagner (1999) argon; Leachman et al. (2009) \
+        citation: "IAPWS R6-95(2018) (IAPWS-95) water; Setzmann & Wagner (1991) methane; \
+                   Span & Wagner (1996) CO2; Span et al. (2000) N2; Tegeler, Span & Wagner (1999) argon; Leachman et al. (2009) \
                    hydrogen",
         validity: "each fluid's published range (e.g. CO2 from the triple point to 1100 K and \
                    800 MPa, Span & Wagner 1996)",

@@ -44,6 +44,7 @@ pub mod phase;
 pub mod properties;
 pub mod residual;
 pub mod state;
+pub mod tp_explicit;
 pub mod translated;
 pub mod virial;
 

@@ -9,7 +9,7 @@ use crate::report::state::{
     StateReport,
 };
 use crate::units::{self, Density};
-use eos::state::{RootChoice, State};
+use eos::state::RootChoice;
 
 /// The two properties that fix the state, in SI.
 #[derive(Debug, Clone, Copy)]
@@ -68,7 +68,7 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
             ))
         }
     };
-    let ids = models::resolve_ids(&args.model)?;
+    let ids = models::resolve_ids(&args.model, &feed)?;
     let all = args.model.trim().eq_ignore_ascii_case("all");
     let root = match args.root {
         RootArg::Stable => RootChoice::LowestGibbs,
@@ -158,21 +158,21 @@ fn compute(
     given: Given,
     root: RootChoice,
 ) -> Result<ModelResult, CliError> {
-    let m = built.model.as_ref();
     let x = &feed.mole;
     let ctx = format!("model {}", built.id);
-    if let (Given::Tp(t, p), false, RootChoice::LowestGibbs) = (given, feed.is_pure(), root) {
-        if built.id != "ideal" {
-            let flash = eos::equilibrium::flash::tp(m, t, p, x).map_err(|e| from_eos(&ctx, e))?;
-            if let eos::equilibrium::flash::FlashResult::TwoPhase(split) = flash {
-                return two_phase(built, feed, &split);
-            }
+    let helmholtz = built
+        .helmholtz()
+        .filter(|_| built.id != "ideal" && !feed.is_pure());
+    if let (Given::Tp(t, p), Some(m), RootChoice::LowestGibbs) = (given, helmholtz, root) {
+        let flash = eos::equilibrium::flash::tp(m, t, p, x).map_err(|e| from_eos(&ctx, e))?;
+        if let eos::equilibrium::flash::FlashResult::TwoPhase(split) = flash {
+            return two_phase(built, m, feed, &split);
         }
     }
     let state = match given {
-        Given::Tp(t, p) => State::at_tp(m, t, p, x, root),
-        Given::TRho(t, r) => State::at_trho(m, t, r, x),
-        Given::PRho(p, r) => State::at_prho(m, p, r, x),
+        Given::Tp(t, p) => built.at_tp(t, p, x, root),
+        Given::TRho(t, r) => built.at_trho(t, r, x, root),
+        Given::PRho(p, r) => built.at_prho(p, r, x, root),
     }
     .map_err(|e| from_eos(&ctx, e))?;
     let pr = &state.props;
@@ -189,7 +189,10 @@ fn compute(
                 .to_string(),
         );
     }
-    if !feed.is_pure() && built.id != "ideal" && !matches!(given, Given::Tp(..)) {
+    for w in &state.warnings {
+        notes.push(format!("outside the published range: {w}"));
+    }
+    if let (Some(m), false) = (helmholtz, matches!(given, Given::Tp(..))) {
         let st =
             eos::equilibrium::stability::test(m, pr.t, pr.p, x).map_err(|e| from_eos(&ctx, e))?;
         if !st.stable {
@@ -256,10 +259,10 @@ fn fugacities(feed: &Feed, ln_phi: &[f64], x: &[f64], p: f64) -> Vec<FugacityRow
 /// each phase with its amount, Z, densities and composition.
 fn two_phase(
     built: &BuiltModel,
+    m: &dyn eos::Model,
     feed: &Feed,
     split: &eos::equilibrium::flash::TwoPhase,
 ) -> Result<ModelResult, CliError> {
-    let m = built.model.as_ref();
     let (t, p, beta) = (split.t, split.p, split.vapor_fraction);
     let vap = eos::properties::evaluate(m, t, split.rho_v, &split.y);
     let liq = eos::properties::evaluate(m, t, split.rho_l, &split.x);

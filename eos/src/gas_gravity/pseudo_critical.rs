@@ -11,14 +11,15 @@
 //!   gravity limits apply.
 //!
 //! All coefficients from memory of the cited sources. A gravity below that of methane
-//! (16.043/28.9647 = 0.554) or above 2 is no natural gas and is refused.
+//! (16.043/28.9647 = 0.5539; the limit is that value less rounding, 0.553) or above 2 is no
+//! natural gas and is refused.
 
 use super::units::{K_PER_RANKINE, PA_PER_PSI};
 use super::warning::{check, RangeWarning};
 use crate::error::{Error, Result};
 
 /// Lowest gas gravity accepted: methane's.
-pub const GRAVITY_MIN: f64 = 0.554;
+pub const GRAVITY_MIN: f64 = 0.553;
 /// Highest gas gravity accepted.
 pub const GRAVITY_MAX: f64 = 2.0;
 

@@ -1,0 +1,268 @@
+//! Every property of a (T, P)-explicit model's state, and states from (T, rho) or (P, rho).
+
+use super::{departure, TpModel};
+use crate::composition;
+use crate::constants::{P_REF, R};
+use crate::error::{positive, Error, Result};
+use crate::ideal_cp::IdealGasValues;
+use crate::phase::Phase;
+use crate::properties::Properties;
+use crate::state::RootChoice;
+
+/// A state of a (T, P)-explicit model.
+#[derive(Debug, Clone, PartialEq)]
+pub struct TpState {
+    /// Every property.
+    pub props: Properties,
+    /// Phase name (from the pseudo-critical point and the density).
+    pub phase: Phase,
+    /// Inputs outside the model's published range.
+    pub warnings: Vec<String>,
+}
+
+/// Relative step of the central differences.
+const STEP: f64 = 1e-5;
+
+fn ideal_part(
+    model: &dyn TpModel,
+    t: f64,
+    x: &[f64],
+    own: Option<IdealGasValues>,
+) -> IdealGasValues {
+    own.unwrap_or_else(|| {
+        let mut sum = IdealGasValues {
+            cp_r: 0.0,
+            h_r: 0.0,
+            s_r: 0.0,
+        };
+        for (c, &xi) in model.components().iter().zip(x) {
+            let v = c.cp.values(t);
+            sum.cp_r += xi * v.cp_r;
+            sum.h_r += xi * v.h_r;
+            sum.s_r += xi * v.s_r;
+        }
+        sum
+    })
+}
+
+/// (h_dep, s_dep, ln phi of the mixture) at one state.
+fn departures(
+    model: &dyn TpModel,
+    t: f64,
+    p: f64,
+    x: &[f64],
+    root: RootChoice,
+) -> Result<(f64, f64, f64)> {
+    if model.has_departures() {
+        let pt = model.point(t, p, x, root)?;
+        let (h, s) = (pt.h_dep, pt.s_dep);
+        match (h, s) {
+            (Some(h), Some(s)) => {
+                let rt = R * t;
+                // ln phi of the mixture = g_dep/(RT) = h_dep/(RT) - s_dep/R.
+                Ok((h, s, h / rt - s / R))
+            }
+            _ => departure::integrate(model, t, p, x, root),
+        }
+    } else {
+        departure::integrate(model, t, p, x, root)
+    }
+}
+
+/// Every property at (T, P, x) on branch `root`.
+pub fn evaluate(
+    model: &dyn TpModel,
+    t: f64,
+    p: f64,
+    x: &[f64],
+    root: RootChoice,
+) -> Result<TpState> {
+    positive("temperature (K)", t)?;
+    positive("pressure (Pa)", p)?;
+    composition::check(x, model.components().len())?;
+    let pt = model.point(t, p, x, root)?;
+    let z = pt.z;
+    let rho = p / (z * R * t);
+    let m: f64 = model
+        .components()
+        .iter()
+        .zip(x)
+        .map(|(c, xi)| xi * c.molar_mass)
+        .sum();
+    let (h_dep, s_dep, ln_phi_mix) = departures(model, t, p, x, root)?;
+    let ig = ideal_part(model, t, x, pt.ideal);
+    let mixing: f64 = x.iter().filter(|&&v| v > 0.0).map(|&v| v * v.ln()).sum();
+    let h = R * ig.h_r + h_dep;
+    let s = R * (ig.s_r - (p / P_REF).ln() - mixing) + s_dep;
+
+    let (dt, dp) = (STEP * t, STEP * p);
+    let v = |t: f64, p: f64| -> Result<f64> { Ok(model.point(t, p, x, root)?.z * R * t / p) };
+    let dvdt = (v(t + dt, p)? - v(t - dt, p)?) / (2.0 * dt);
+    let dvdp = (v(t, p + dp)? - v(t, p - dp)?) / (2.0 * dp);
+    let hd = |t: f64| -> Result<f64> {
+        let ig = ideal_part(model, t, x, model.point(t, p, x, root)?.ideal);
+        Ok(R * ig.h_r + departures(model, t, p, x, root)?.0)
+    };
+    let cp_num = (hd(t + dt)? - hd(t - dt)?) / (2.0 * dt);
+    let vol = 1.0 / rho;
+    let stable = dvdp < 0.0;
+    let cp = stable.then_some(cp_num);
+    let cv = cp_num + t * dvdt * dvdt / dvdp;
+    let w = cp.and_then(|cp| {
+        let w2 = -(cp / cv) * vol * vol / (m * dvdp);
+        (w2 > 0.0).then(|| w2.sqrt())
+    });
+    let jt = cp.map(|cp| (t * dvdt - vol) / cp);
+    let k = cp.map(|cp| (cp / cv) * (-vol / (p * dvdp)));
+    let ln_phi = if let Some(l) = model.component_ln_phi(t, p, x, root)? {
+        l
+    } else if x.len() == 1 {
+        vec![ln_phi_mix]
+    } else {
+        Vec::new()
+    };
+    let props = Properties {
+        t,
+        p,
+        rho,
+        z,
+        molar_mass: m,
+        h_res: h_dep,
+        s_res: s_dep,
+        g_res: R * t * ln_phi_mix,
+        h,
+        s,
+        u: h - p * vol,
+        cv,
+        cp,
+        w,
+        jt,
+        isentropic_exponent: k,
+        dp_drho: -1.0 / (rho * rho * dvdp),
+        dp_dt: -dvdt / dvdp,
+        ln_phi,
+    };
+    let finite = [props.h, props.s, props.cv, props.z, props.rho]
+        .iter()
+        .all(|v| v.is_finite());
+    if !finite {
+        return Err(Error::NoSolution(format!(
+            "{} gives no finite properties at T = {t} K, P = {p} Pa",
+            model.id()
+        )));
+    }
+    let phase = name_phase(model, t, p, rho, x);
+    Ok(TpState {
+        props,
+        phase,
+        warnings: pt.warnings,
+    })
+}
+
+/// Phase name from Kay's pseudo-critical point and a critical density estimate (Zc = 0.29).
+fn name_phase(model: &dyn TpModel, t: f64, p: f64, rho: f64, x: &[f64]) -> Phase {
+    let (tc, pc) = model
+        .components()
+        .iter()
+        .zip(x)
+        .fold((0.0, 0.0), |(a, b), (c, &xi)| {
+            (a + xi * c.tc, b + xi * c.pc)
+        });
+    if t >= tc {
+        if p >= pc {
+            Phase::Supercritical
+        } else {
+            Phase::Gas
+        }
+    } else if rho > pc / (0.29 * R * tc) {
+        Phase::Liquid
+    } else {
+        Phase::Vapor
+    }
+}
+
+/// The state at (T, P).
+pub fn state_tp(
+    model: &dyn TpModel,
+    t: f64,
+    p: f64,
+    x: &[f64],
+    root: RootChoice,
+) -> Result<TpState> {
+    evaluate(model, t, p, x, root)
+}
+
+/// Solves f(u) = 0 for u = ln(value) on a bracket grown from `start` by factors of two.
+fn solve_log(
+    start: f64,
+    f: impl Fn(f64) -> Result<f64>,
+    what: &'static str,
+    id: &str,
+) -> Result<f64> {
+    let g = |lu: f64| f(lu.exp());
+    let (mut lo, mut hi) = (start.ln(), start.ln());
+    let f0 = g(lo)?;
+    let (mut flo, mut fhi) = (f0, f0);
+    for _ in 0..60 {
+        if flo < 0.0 && fhi > 0.0 || flo > 0.0 && fhi < 0.0 {
+            break;
+        }
+        lo -= std::f64::consts::LN_2;
+        hi += std::f64::consts::LN_2;
+        flo = g(lo).unwrap_or(f64::NAN);
+        fhi = g(hi).unwrap_or(f64::NAN);
+    }
+    if flo.is_nan() || fhi.is_nan() || flo * fhi >= 0.0 {
+        return Err(Error::NoSolution(format!(
+            "{id} reaches no {what} for this state"
+        )));
+    }
+    for _ in 0..200 {
+        let mid = 0.5 * (lo + hi);
+        let fm = g(mid)?;
+        if (fm < 0.0) == (flo < 0.0) {
+            lo = mid;
+            flo = fm;
+        } else {
+            hi = mid;
+        }
+        if hi - lo < 1e-14 {
+            return Ok((0.5 * (lo + hi)).exp());
+        }
+    }
+    Err(Error::NotConverged {
+        solver: "bisection on ln P or ln T",
+        iterations: 200,
+        residual: hi - lo,
+    })
+}
+
+/// The state at (T, rho): the pressure whose density is rho.
+pub fn state_trho(
+    model: &dyn TpModel,
+    t: f64,
+    rho: f64,
+    x: &[f64],
+    root: RootChoice,
+) -> Result<TpState> {
+    positive("temperature (K)", t)?;
+    positive("molar density (mol/m3)", rho)?;
+    let f = |p: f64| -> Result<f64> { Ok(p / (model.point(t, p, x, root)?.z * R * t) / rho - 1.0) };
+    let p = solve_log(rho * R * t, f, "pressure", model.id())?;
+    evaluate(model, t, p, x, root)
+}
+
+/// The state at (P, rho): the temperature whose density is rho.
+pub fn state_prho(
+    model: &dyn TpModel,
+    p: f64,
+    rho: f64,
+    x: &[f64],
+    root: RootChoice,
+) -> Result<TpState> {
+    positive("pressure (Pa)", p)?;
+    positive("molar density (mol/m3)", rho)?;
+    let f = |t: f64| -> Result<f64> { Ok(1.0 - p / (model.point(t, p, x, root)?.z * R * t) / rho) };
+    let t = solve_log(p / (rho * R), f, "temperature", model.id())?;
+    evaluate(model, t, p, x, root)
+}
