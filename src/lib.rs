@@ -12,6 +12,7 @@
 
 pub mod cli;
 pub mod commands;
+pub mod compare;
 pub mod error;
 pub mod exit;
 pub mod feed;
