@@ -17,9 +17,13 @@ pub mod error;
 pub mod exit;
 pub mod feed;
 pub mod models;
+pub mod output_file;
+pub mod progress;
 pub mod render;
 pub mod report;
+pub mod table_property;
 pub mod units;
+pub mod zgrid;
 
 use clap::Parser;
 use error::CliError;

@@ -56,6 +56,10 @@ pub struct Contents {
     pub rows: Vec<Row>,
     /// Messages of rows skipped (only with `skip_bad_rows`).
     pub skipped: Vec<String>,
+    /// The temperature column's header as written.
+    pub t_column: String,
+    /// The pressure column's header as written.
+    pub p_column: String,
 }
 
 /// A file that could not be read.
@@ -222,7 +226,16 @@ pub fn read(text: &str, origin: &str, opts: Options) -> Result<Contents, FileErr
             return Err(missing("source"));
         }
     }
-    let mut out = Contents::default();
+    let header_of = |k: Kind| {
+        cols.iter()
+            .find(|c| c.kind == k)
+            .map_or_else(String::new, |c| c.header.clone())
+    };
+    let mut out = Contents {
+        t_column: header_of(Kind::T),
+        p_column: header_of(Kind::P),
+        ..Contents::default()
+    };
     for rec in rdr.records() {
         let rec = match rec {
             Ok(r) => r,

@@ -23,6 +23,9 @@ pub struct Boundary {
     /// Lowest pressure at which |Z - 1| exceeds the tolerance, Pa; `None` when it holds over
     /// the whole isotherm.
     pub fails_above_pa: Option<f64>,
+    /// True when it fails already at the lowest pressure of the grid (the boundary lies
+    /// below the grid).
+    pub below_grid: bool,
 }
 
 /// The map for one tolerance.
@@ -45,12 +48,32 @@ pub fn error_pct(z: f64) -> f64 {
     100.0 * (z - 1.0).abs()
 }
 
+/// Lowest pressure at which `err_pct[j]` (at pressure `p[j]`, in any order) exceeds `tol`,
+/// interpolated linearly between the bracketing pressures; `None` when it never does.
+/// Non-finite errors are passed over.
+pub fn boundary_pressure(p: &[f64], err_pct: &[f64], tol: f64) -> Option<f64> {
+    let mut order: Vec<usize> = (0..p.len().min(err_pct.len())).collect();
+    order.sort_by(|&a, &b| p[a].total_cmp(&p[b]));
+    let mut prev: Option<(f64, f64)> = None;
+    for j in order {
+        let e = err_pct[j];
+        if !e.is_finite() {
+            continue;
+        }
+        if e > tol {
+            return Some(match prev {
+                Some((p0, e0)) if e > e0 => p0 + (tol - e0) / (e - e0) * (p[j] - p0),
+                _ => p[j],
+            });
+        }
+        prev = Some((p[j], e));
+    }
+    None
+}
+
 /// Builds the map from `z[i][j]` at temperature `t[i]` and pressure `p[j]` (NaN where no
 /// value), for every tolerance (percent).
 pub fn build(t: &[f64], p: &[f64], z: &[Vec<f64>], tolerances: &[f64]) -> Vec<ToleranceMap> {
-    // Pressures in ascending order for the boundary search.
-    let mut order: Vec<usize> = (0..p.len()).collect();
-    order.sort_by(|&a, &b| p[a].total_cmp(&p[b]));
     tolerances
         .iter()
         .map(|&tol| {
@@ -69,9 +92,18 @@ pub fn build(t: &[f64], p: &[f64], z: &[Vec<f64>], tolerances: &[f64]) -> Vec<To
             let boundary: Vec<Boundary> = t
                 .iter()
                 .zip(z)
-                .map(|(&ti, row)| Boundary {
-                    temperature_k: ti,
-                    fails_above_pa: crossing(&order, p, row, tol),
+                .map(|(&ti, row)| {
+                    let fails = boundary_pressure(
+                        p,
+                        &row.iter().map(|&z| error_pct(z)).collect::<Vec<_>>(),
+                        tol,
+                    );
+                    let lowest = p.iter().copied().fold(f64::INFINITY, f64::min);
+                    Boundary {
+                        temperature_k: ti,
+                        fails_above_pa: fails,
+                        below_grid: fails.is_some_and(|f| f <= lowest),
+                    }
                 })
                 .collect();
             let verdict = verdict(tol, within, outside, &boundary);
@@ -84,25 +116,6 @@ pub fn build(t: &[f64], p: &[f64], z: &[Vec<f64>], tolerances: &[f64]) -> Vec<To
             }
         })
         .collect()
-}
-
-/// Lowest pressure on one isotherm at which |Z - 1| exceeds `tol`.
-fn crossing(order: &[usize], p: &[f64], row: &[f64], tol: f64) -> Option<f64> {
-    let mut prev: Option<(f64, f64)> = None;
-    for &j in order {
-        let e = error_pct(row[j]);
-        if !e.is_finite() {
-            continue;
-        }
-        if e > tol {
-            return Some(match prev {
-                Some((p0, e0)) if e > e0 => p0 + (tol - e0) / (e - e0) * (p[j] - p0),
-                _ => p[j],
-            });
-        }
-        prev = Some((p[j], e));
-    }
-    None
 }
 
 /// One line for the envelope.
@@ -123,10 +136,17 @@ fn verdict(tol: f64, within: usize, outside: usize, boundary: &[Boundary]) -> St
     }
     let lowest = boundary
         .iter()
-        .filter_map(|b| b.fails_above_pa.map(|p| (p, b.temperature_k)))
+        .filter_map(|b| b.fails_above_pa.map(|p| (p, b.temperature_k, b.below_grid)))
         .min_by(|a, b| a.0.total_cmp(&b.0));
     match lowest {
-        Some((p, t)) => format!(
+        Some((p, t, true)) => format!(
+            "within {tol} %: the ideal gas law fails already at the lowest pressure of the \
+             grid ({:.4} bar) at {:.2} K; it fails at {outside} of {} states",
+            p / 1e5,
+            t,
+            within + outside
+        ),
+        Some((p, t, false)) => format!(
             "within {tol} %: the ideal gas law holds below {:.4} bar at every temperature of \
              the envelope (the limit is lowest at {:.2} K); it fails at {outside} of {} states",
             p / 1e5,
@@ -179,6 +199,16 @@ mod tests {
         let z = vec![vec![0.9, 0.95]];
         let m = build(&[250.0], &p, &z, &[1.0]);
         assert_relative_eq!(m[0].boundary[0].fails_above_pa.unwrap(), 1e5);
+        assert!(m[0].boundary[0].below_grid);
         assert!(m[0].verdict.contains("every state"), "{}", m[0].verdict);
+        // Failing at the lowest pressure on one isotherm only.
+        let z = vec![vec![0.98, 0.9], vec![0.999, 0.95]];
+        let m = build(&[250.0, 300.0], &[1e5, 3e5], &z, &[1.0]);
+        assert!(
+            m[0].verdict.contains("lowest pressure of the grid"),
+            "{}",
+            m[0].verdict
+        );
+        assert!(!m[0].boundary[1].below_grid);
     }
 }
