@@ -57,7 +57,9 @@ where
     let out_err = |e: std::io::Error| CliError::Output(format!("{shown}: {e}"));
     let mut tmp = None;
     for k in 0..100u32 {
-        let candidate = dir.join(format!(".{name}.{}-{k}.tmp", std::process::id()));
+        // The temporary name keeps the final extension (some writers choose the file type
+        // by it).
+        let candidate = dir.join(format!(".tmp-{}-{k}-{name}", std::process::id()));
         match fs::OpenOptions::new()
             .write(true)
             .create_new(true)

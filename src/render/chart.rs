@@ -243,7 +243,7 @@ fn isotherms<DB: DrawingBackend>(
                 .map_err(draw_err)?;
             if n == 0 {
                 series.label(name.clone()).legend(move |(x, y)| {
-                    DashedPathElement::new(vec![(x, y), (x + 30, y)], dash, gap, style)
+                    DashedPathElement::new(vec![(x, y), (x + 20, y)], dash, gap, style)
                 });
             }
         }
@@ -268,7 +268,7 @@ fn isotherms<DB: DrawingBackend>(
                 .map_err(draw_err)?;
             if !labelled {
                 s.label(label)
-                    .legend(move |(x, y)| PathElement::new(vec![(x, y), (x + 30, y)], black));
+                    .legend(move |(x, y)| PathElement::new(vec![(x, y), (x + 20, y)], black));
                 labelled = true;
             }
         } else {
@@ -279,7 +279,7 @@ fn isotherms<DB: DrawingBackend>(
                 .map_err(draw_err)?;
             if !labelled {
                 s.label(label).legend(move |(x, y)| {
-                    Circle::new((x + 15, y), 4, ShapeStyle::from(&BLACK).stroke_width(2))
+                    Circle::new((x + 10, y), 4, ShapeStyle::from(&BLACK).stroke_width(2))
                 });
                 labelled = true;
             }
@@ -374,7 +374,6 @@ fn band_map<DB: DrawingBackend>(
         .margin(16)
         .x_label_area_size(50)
         .y_label_area_size(70)
-        .right_y_label_area_size(10)
         .build_cartesian_2d(x0..x1, y0..y1)
         .map_err(draw_err)?;
     let n = tolerances.len();
@@ -427,7 +426,7 @@ fn band_map<DB: DrawingBackend>(
             .draw_series(DashedLineSeries::new(line, dash, gap, style))
             .map_err(draw_err)?;
         s.label(format!("{tol} % boundary")).legend(move |(x, y)| {
-            DashedPathElement::new(vec![(x, y), (x + 30, y)], dash, gap, style)
+            DashedPathElement::new(vec![(x, y), (x + 20, y)], dash, gap, style)
         });
     }
     for b in 0..=n {
@@ -443,8 +442,8 @@ fn band_map<DB: DrawingBackend>(
             .label(label)
             .legend(move |(x, y)| {
                 EmptyElement::at((x, y))
-                    + Rectangle::new([(0, -6), (30, 6)], ShapeStyle::from(&color).filled())
-                    + Rectangle::new([(0, -6), (30, 6)], ShapeStyle::from(&BLACK))
+                    + Rectangle::new([(0, -6), (20, 6)], ShapeStyle::from(&color).filled())
+                    + Rectangle::new([(0, -6), (20, 6)], ShapeStyle::from(&BLACK))
             });
     }
     chart
