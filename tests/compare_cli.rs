@@ -120,6 +120,9 @@ fn statistics_match_an_independent_computation() {
     assert_eq!(regions, 4);
 }
 
+/// (T in K, Z of ISO 6976, Z of PR, Z of SRK).
+type IsoRow = (f64, f64, f64, f64);
+
 #[test]
 fn iso_6976_deviations_of_the_cubic_models() {
     // ISO 6976:1995 Table 2 (from memory; high-confidence rows of the data set) with the
@@ -127,7 +130,7 @@ fn iso_6976_deviations_of_the_cubic_models() {
     // in shared/reference/gases/iso6976_compression_factors.csv (columns Z_PR_check,
     // Z_SRK_check): the density deviation must be 100 (Z_iso/Z_model - 1). The check values
     // are printed to 5 decimals (5e-6), so 1e-3 % allows for two such roundings.
-    let cases: [(&str, [(f64, f64, f64, f64); 3]); 4] = [
+    let cases: [(&str, [IsoRow; 3]); 4] = [
         (
             "methane",
             [
