@@ -3,6 +3,9 @@
 
 use clap::{Args, Parser, Subcommand, ValueEnum};
 
+pub mod grid_args;
+pub use grid_args::{ChartFormat, CompareArgs, TableArgs, TableFormat};
+
 /// Real-gas Z, density and energy properties, with every model side by side.
 #[derive(Debug, Parser)]
 #[command(name = "zfactor", version, about, long_about = None)]
@@ -20,6 +23,11 @@ pub enum Command {
     Fluids(FluidsArgs),
     /// Run the built-in demonstration (a fuel-gas skid of a fictional compressor station).
     Demo(DemoArgs),
+    /// Compare models over a T-P grid or a list of states, against a reference model, the
+    /// ISO 6976 data set or your own reference data; ideal-gas map and model advice.
+    Compare(CompareArgs),
+    /// A design-basis table of one model over a T-P grid, with its basis printed.
+    Table(TableArgs),
 }
 
 /// Output formats.

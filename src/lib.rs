@@ -12,13 +12,18 @@
 
 pub mod cli;
 pub mod commands;
+pub mod compare;
 pub mod error;
 pub mod exit;
 pub mod feed;
 pub mod models;
+pub mod output_file;
+pub mod progress;
 pub mod render;
 pub mod report;
+pub mod table_property;
 pub mod units;
+pub mod zgrid;
 
 use clap::Parser;
 use error::CliError;

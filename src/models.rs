@@ -92,6 +92,28 @@ impl BuiltModel {
         }
     }
 
+    /// The components.
+    pub fn components(&self) -> &[eos::Component] {
+        match &self.engine {
+            Engine::Helmholtz(m) => m.components(),
+            Engine::TpExplicit(m) => m.components(),
+        }
+    }
+
+    /// A pseudo-critical point (T, P) of composition x for naming phases and regions.
+    pub fn pseudo_critical(&self, x: &[f64]) -> (f64, f64) {
+        match &self.engine {
+            Engine::Helmholtz(m) => m.pseudo_critical(x),
+            Engine::TpExplicit(m) => m
+                .components()
+                .iter()
+                .zip(x)
+                .fold((0.0, 0.0), |(t, p), (c, &xi)| {
+                    (t + xi * c.tc, p + xi * c.pc)
+                }),
+        }
+    }
+
     /// The state at (T, P).
     pub fn at_tp(&self, t: f64, p: f64, x: &[f64], root: RootChoice) -> eos::Result<ModelState> {
         match &self.engine {
@@ -308,7 +330,7 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
 }
 
 /// The k_ij matrix a cubic member uses for `feed`, with notes on where it came from.
-fn kij_for(kind: CubicKind, feed: &Feed, notes: &mut Vec<String>) -> Option<Vec<f64>> {
+pub fn kij_for(kind: CubicKind, feed: &Feed, notes: &mut Vec<String>) -> Option<Vec<f64>> {
     let family = match kind {
         CubicKind::Pr76 | CubicKind::Pr78 => Some(fluids::KijFamily::PengRobinson),
         CubicKind::Srk => Some(fluids::KijFamily::Soave),

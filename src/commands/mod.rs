@@ -1,8 +1,10 @@
 //! One function per command: typed request in, report out; then the chosen renderer.
 
+pub mod compare;
 pub mod demo;
 pub mod fluids;
 pub mod state;
+pub mod table;
 
 use crate::cli::{Cli, Command};
 use crate::error::CliError;
@@ -22,6 +24,8 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             Ok(Exit::Success)
         }
         Command::Demo(args) => demo::run(args),
+        Command::Compare(args) => compare::dispatch(args),
+        Command::Table(args) => table::run(args),
     }
 }
 

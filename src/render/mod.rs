@@ -1,7 +1,10 @@
 //! Renderers: one file per output format. Only here are display units and significant
 //! figures chosen; JSON and CSV stay in SI.
 
+pub mod chart;
+pub mod compare;
 pub mod csv;
+pub mod grid_table;
 pub mod json;
 pub mod number;
 pub mod table;

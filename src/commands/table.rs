@@ -1,0 +1,284 @@
+//! `zfactor table`: a design-basis table of one model over the user's temperatures and
+//! pressures, with the basis (tool version, model and citation, k_ij, component sources,
+//! composition as entered and normalised, units, caution).
+//!
+//! When every property asked for follows from Z alone and the model is served by the batch
+//! kernel, the grid takes the fast path ([`crate::zgrid`]); otherwise every state is computed
+//! with `eos::state::State::at_tp` (lowest Gibbs energy root), in parallel and in order.
+
+use crate::cli::{TableArgs, TableFormat};
+use crate::compare::grid;
+use crate::error::{from_eos, CliError};
+use crate::exit::Exit;
+use crate::feed::{self, Feed};
+use crate::models::{self, BuiltModel};
+use crate::report::table::{
+    ComponentSource, TableBasis, TableColumn, TableReport, TableRow, UnitNote,
+};
+use crate::table_property::{self, Selection};
+use crate::units;
+use eos::state::RootChoice;
+use rayon::prelude::*;
+use std::path::Path;
+
+/// Runs the command and writes the table.
+pub fn run(args: &TableArgs) -> Result<Exit, CliError> {
+    if args.format == TableFormat::Xlsx && args.output.is_none() {
+        return Err(CliError::BadInput(
+            "--format xlsx writes a workbook: give --output FILE.xlsx".to_string(),
+        ));
+    }
+    let report = build(args)?;
+    let bytes = crate::render::grid_table::render(&report, args.format)?;
+    match &args.output {
+        Some(path) => {
+            // The table reads no file, so there is no input it could overwrite.
+            crate::output_file::write(Path::new(path), &bytes, args.force, &[])?;
+            eprintln!("wrote {path}");
+        }
+        None => crate::render::emit(&String::from_utf8_lossy(&bytes))?,
+    }
+    for w in &report.warnings {
+        eprintln!("warning: {w}");
+    }
+    if args.format != TableFormat::Table {
+        eprintln!("caution: {}", crate::CAUTION);
+    }
+    Ok(super::exit_for(&report.warnings))
+}
+
+/// Computes the table.
+pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
+    let feed = feed::read(&args.fluid)?;
+    let ambient = units::pressure(&args.ambient)
+        .and_then(|p| units::absolute_pressure(&args.ambient, p, 0.0))?;
+    let sel = table_property::parse(&args.properties)?;
+    let ids = models::resolve_ids(&args.model, &feed)?;
+    if ids.len() != 1 || args.model.trim().eq_ignore_ascii_case("all") {
+        return Err(CliError::BadInput(format!(
+            "--model \"{}\": a table is for one model; give one id ({})",
+            args.model,
+            models::ALL_IDS.join(", ")
+        )));
+    }
+    let built = models::build(&ids[0], &feed)?;
+    let t = grid::parse_axis(&args.temperatures, units::temperature)
+        .map_err(|e| CliError::BadInput(format!("--temperatures: {e}")))?;
+    let p = grid::parse_axis(&args.pressures, |s| {
+        units::pressure(s).and_then(|r| units::absolute_pressure(s, r, ambient))
+    })
+    .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
+    // The Z-only batch kernel has no phase check: it serves pure fluids, whose root of lowest
+    // Gibbs energy is the stable phase; a mixture takes the per-state path with its flash.
+    let fast = feed.is_pure() && !sel.phase && sel.properties.iter().all(|p| p.from_z);
+    let batch = if fast {
+        crate::zgrid::batch_model(&built.id, &feed)
+    } else {
+        None
+    };
+    let total = t.len() * p.len();
+    let bar = crate::progress::bar(total, "computing");
+    let (rows, method) = match &batch {
+        Some(b) => {
+            let z = crate::zgrid::z_grid(b, &t, &p, |n| crate::progress::inc(&bar, n))
+                .map_err(|e| from_eos(&format!("model {}", built.id), e))?;
+            (
+                rows_from_z(&sel, &feed, &t, &p, &z),
+                "Z from the cubic in Z for each state (batch kernel, root of lowest Gibbs \
+                 energy); density from P/(Z R T)"
+                    .to_string(),
+            )
+        }
+        None => (
+            rows_from_states(&sel, &built, &feed, &t, &p, &bar),
+            "each state from (T, P) with the root of lowest Gibbs energy (a mixture is \
+             flashed first and a state that splits into two phases is flagged); every property \
+             from the model"
+                .to_string(),
+        ),
+    };
+    crate::progress::finish(bar);
+    let failed = rows.iter().filter(|r| r.error.is_some()).count();
+    let mut warnings = Vec::new();
+    if failed > 0 {
+        warnings.push(format!(
+            "{failed} of {} states could not be computed (see their error)",
+            rows.len()
+        ));
+    }
+    let columns = sel
+        .properties
+        .iter()
+        .map(|p| TableColumn {
+            key: p.key,
+            name: p.name,
+            unit_si: p.unit_si,
+        })
+        .collect();
+    Ok(TableReport {
+        basis: basis(args, &feed, &built, &sel, ambient, method),
+        columns,
+        rows,
+        warnings,
+    })
+}
+
+fn rows_from_z(sel: &Selection, feed: &Feed, t: &[f64], p: &[f64], z: &[f64]) -> Vec<TableRow> {
+    let mm = feed.molar_mass();
+    let np = p.len();
+    let mut rows = Vec::with_capacity(z.len());
+    for (i, &ti) in t.iter().enumerate() {
+        for (j, &pj) in p.iter().enumerate() {
+            let zv = z[i * np + j];
+            let ok = zv.is_finite() && zv > 0.0;
+            rows.push(TableRow {
+                temperature_k: ti,
+                pressure_pa: pj,
+                phase: None,
+                values: sel
+                    .properties
+                    .iter()
+                    .map(|pr| {
+                        if ok {
+                            table_property::from_z(pr, zv, ti, pj, mm)
+                        } else {
+                            None
+                        }
+                    })
+                    .collect(),
+                error: (!ok).then(|| format!("no physical root (Z = {zv})")),
+            });
+        }
+    }
+    rows
+}
+
+fn rows_from_states(
+    sel: &Selection,
+    built: &BuiltModel,
+    feed: &Feed,
+    t: &[f64],
+    p: &[f64],
+    bar: &Option<indicatif::ProgressBar>,
+) -> Vec<TableRow> {
+    let states: Vec<(f64, f64)> = t
+        .iter()
+        .flat_map(|&ti| p.iter().map(move |&pj| (ti, pj)))
+        .collect();
+    states
+        .par_iter()
+        .map(|&(ti, pj)| {
+            if let Some(beta) = split_fraction(built, feed, ti, pj) {
+                crate::progress::inc(bar, 1);
+                return TableRow {
+                    temperature_k: ti,
+                    pressure_pa: pj,
+                    phase: sel.phase.then(|| "two-phase".to_string()),
+                    values: vec![None; sel.properties.len()],
+                    error: Some(format!(
+                        "model {}: the mixture splits into vapour ({beta:.4} mol/mol) and \
+                         liquid here; single-phase values would be meaningless (see `zfactor \
+                         state` for the phases)",
+                        built.id
+                    )),
+                };
+            }
+            let row = match built.at_tp(ti, pj, &feed.mole, RootChoice::LowestGibbs) {
+                Ok(s) => TableRow {
+                    temperature_k: ti,
+                    pressure_pa: pj,
+                    phase: sel.phase.then(|| s.phase.to_string()),
+                    values: sel
+                        .properties
+                        .iter()
+                        .map(|pr| table_property::from_state(pr, &s.props))
+                        .collect(),
+                    error: None,
+                },
+                Err(e) => TableRow {
+                    temperature_k: ti,
+                    pressure_pa: pj,
+                    phase: None,
+                    values: vec![None; sel.properties.len()],
+                    error: Some(format!("model {}: {e}", built.id)),
+                },
+            };
+            crate::progress::inc(bar, 1);
+            row
+        })
+        .collect()
+}
+
+/// The vapour fraction when a mixture splits at (T, P) with this model (flash with models
+/// that have a Helmholtz energy); `None` for one phase, a pure fluid or a failed flash (the
+/// single-phase path then reports its own error).
+fn split_fraction(built: &BuiltModel, feed: &Feed, t: f64, p: f64) -> Option<f64> {
+    let m = built
+        .helmholtz()
+        .filter(|_| !feed.is_pure() && built.id != "ideal")?;
+    match eos::equilibrium::flash::tp(m, t, p, &feed.mole) {
+        Ok(eos::equilibrium::flash::FlashResult::TwoPhase(s)) => Some(s.vapor_fraction),
+        _ => None,
+    }
+}
+
+fn basis(
+    args: &TableArgs,
+    feed: &Feed,
+    built: &BuiltModel,
+    sel: &Selection,
+    ambient: f64,
+    method: String,
+) -> TableBasis {
+    let display = args.format != TableFormat::Csv && args.format != TableFormat::Json;
+    let mut units_list = vec![
+        UnitNote {
+            quantity: "temperature".to_string(),
+            unit: "K".to_string(),
+        },
+        UnitNote {
+            quantity: "pressure (absolute)".to_string(),
+            unit: if display { "bar" } else { "Pa" }.to_string(),
+        },
+    ];
+    for p in &sel.properties {
+        units_list.push(UnitNote {
+            quantity: p.name.to_string(),
+            unit: if display { p.unit_display } else { p.unit_si }.to_string(),
+        });
+    }
+    TableBasis {
+        tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
+        model: built.id.clone(),
+        model_name: built.name.clone(),
+        citation: built.citation.clone(),
+        kij: if built.notes.is_empty() {
+            vec!["none needed (pure fluid)".to_string()]
+        } else {
+            built.notes.clone()
+        },
+        fluid: feed.label(),
+        entered_basis: feed::basis_name(feed.basis),
+        entered_in_percent: feed.percent,
+        normalized_from: feed.normalized_from,
+        composition: super::state::composition_rows(feed),
+        component_sources: feed
+            .records
+            .iter()
+            .map(|r| ComponentSource {
+                id: r.id.clone(),
+                name: r.name.clone(),
+                constants_source: r.source.clone(),
+                confidence: format!("{:?}", r.confidence).to_ascii_lowercase(),
+                cp_source: r.cp_source.clone(),
+            })
+            .collect(),
+        temperatures_entered: args.temperatures.clone(),
+        pressures_entered: args.pressures.clone(),
+        ambient_pressure_pa: ambient,
+        root: "stable (lowest Gibbs energy)",
+        method,
+        units: units_list,
+        caution: crate::CAUTION,
+    }
+}

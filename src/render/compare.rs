@@ -1,0 +1,289 @@
+//! The comparison report as a terminal text and as CSV (one row per point, SI units).
+
+use crate::error::CliError;
+use crate::render::number::sig;
+use crate::report::compare::{CompareReport, StateAt};
+use crate::units::PA_PER_BAR;
+use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
+
+/// Points printed in the terminal table; more go to CSV or JSON.
+const MAX_TABLE_POINTS: usize = 60;
+
+const STYLE: TableStyle = TableStyle::new()
+    .top_border(LineStyle::none().fill('-').junction('-'))
+    .header_separator(LineStyle::none().fill('-').junction('-'))
+    .bottom_border(LineStyle::none().fill('-').junction('-'));
+
+fn new_table(header: Vec<String>) -> Table {
+    let mut t = Table::new();
+    t.load_style(STYLE)
+        .set_content_arrangement(ContentArrangement::Disabled)
+        .set_header(header);
+    t
+}
+
+fn right_align(t: &mut Table, from: usize) {
+    let n = t.column_count();
+    for i in from..n {
+        if let Some(c) = t.column_mut(i) {
+            c.set_cell_alignment(CellAlignment::Right);
+        }
+    }
+}
+
+fn at(s: &StateAt) -> String {
+    format!(
+        "{} K, {} bar",
+        sig(s.temperature_k, 5),
+        sig(s.pressure_pa / PA_PER_BAR, 5)
+    )
+}
+
+fn opt(v: Option<f64>, n: usize) -> String {
+    v.map_or_else(|| "-".to_string(), |v| sig(v, n))
+}
+
+/// The report for the terminal.
+pub fn text(r: &CompareReport) -> String {
+    let mut out = String::new();
+    out.push_str(&format!("{}\n", r.fluid));
+    let reference = match (&r.reference.id, r.reference.kind) {
+        (Some(id), "model") => format!("model {id}"),
+        (Some(id), _) => format!("data {id}"),
+        _ => "none (the spread between the models is shown)".to_string(),
+    };
+    out.push_str(&format!(
+        "reference: {reference}; states: {} ({} points",
+        r.states_from,
+        r.points.len()
+    ));
+    if r.excluded_two_phase > 0 {
+        out.push_str(&format!(
+            ", {} two-phase excluded from the statistics",
+            r.excluded_two_phase
+        ));
+    }
+    out.push_str(")\n");
+    if let Some(c) = &r.reference.citation {
+        out.push_str(&format!("reference source: {c}\n"));
+    }
+    if r.reference.kind != "none" {
+        out.push_str("\ndensity deviation from the reference, percent\n");
+        let mut t = new_table(
+            [
+                "model",
+                "region",
+                "points",
+                "mean |dev|",
+                "max |dev|",
+                "bias",
+                "max at",
+            ]
+            .map(String::from)
+            .to_vec(),
+        );
+        for m in &r.models {
+            t.add_row(vec![
+                m.model.clone(),
+                "all".to_string(),
+                m.points_used.to_string(),
+                opt(m.mean_abs_dev_pct, 4),
+                opt(m.max_abs_dev_pct, 4),
+                opt(m.bias_pct, 4),
+                m.max_at.as_ref().map_or_else(|| "-".to_string(), at),
+            ]);
+            if m.regions.len() > 1 {
+                for g in &m.regions {
+                    t.add_row(vec![
+                        String::new(),
+                        g.region.to_string(),
+                        g.points.to_string(),
+                        sig(g.mean_abs_dev_pct, 4),
+                        sig(g.max_abs_dev_pct, 4),
+                        sig(g.bias_pct, 4),
+                        at(&g.max_at),
+                    ]);
+                }
+            }
+        }
+        right_align(&mut t, 2);
+        out.push_str(&format!("{t}\n"));
+    }
+    if let Some(b) = &r.band {
+        out.push_str(&format!(
+            "\nspread between {}: mean {} %, max {} % at {}\n",
+            b.models.join(", "),
+            sig(b.mean_spread_pct, 3),
+            sig(b.max_spread_pct, 3),
+            at(&b.max_at)
+        ));
+    }
+    if let Some(m) = &r.ideal_gas_map {
+        out.push_str(&format!(
+            "\nideal-gas map (|Z - 1| from {}):\n",
+            m.basis_model
+        ));
+        for tm in &m.tolerances {
+            out.push_str(&format!("  {}\n", tm.verdict));
+        }
+        let mut header = vec!["T [K]".to_string()];
+        header.extend(
+            m.tolerances
+                .iter()
+                .map(|t| format!("fails above ({} %) [bar]", t.tolerance_pct)),
+        );
+        let mut t = new_table(header);
+        let n = m.tolerances.first().map_or(0, |t| t.boundary.len());
+        for i in 0..n.min(MAX_TABLE_POINTS) {
+            let mut row = vec![sig(m.tolerances[0].boundary[i].temperature_k, 5)];
+            for tm in &m.tolerances {
+                let b = &tm.boundary[i];
+                row.push(match b.fails_above_pa {
+                    None => "holds".to_string(),
+                    Some(p) if b.below_grid => format!("<= {}", sig(p / PA_PER_BAR, 4)),
+                    Some(p) => sig(p / PA_PER_BAR, 4),
+                });
+            }
+            t.add_row(row);
+        }
+        right_align(&mut t, 0);
+        out.push_str(&format!("{t}\n"));
+    }
+    if !r.advice.is_empty() {
+        out.push_str("\nadvice:\n");
+        for a in &r.advice {
+            out.push_str(&format!("  {}\n", a.summary));
+            if !a.rejected.is_empty() {
+                out.push_str(&format!("    simpler models: {}\n", a.rejected.join("; ")));
+            }
+        }
+    }
+    if !r.weaknesses.is_empty() {
+        out.push_str("\nknown weaknesses:\n");
+        for w in &r.weaknesses {
+            out.push_str(&format!("  - {} [{}]\n", w.text, w.basis));
+        }
+    }
+    if r.points.len() <= MAX_TABLE_POINTS {
+        out.push_str("\npoints (density in kg/m3, deviation in %):\n");
+        let mut header = vec![
+            "T [K]".to_string(),
+            "P [bar]".to_string(),
+            "phase".to_string(),
+        ];
+        if r.reference.kind != "none" {
+            header.push("ref Z".to_string());
+            header.push("ref density".to_string());
+        }
+        for v in r.points.first().map_or(&[][..], |p| &p.values[..]) {
+            header.push(format!("{} Z", v.model));
+            if r.reference.kind != "none" {
+                header.push(format!("{} dev", v.model));
+            } else {
+                header.push(format!("{} density", v.model));
+            }
+        }
+        let mut t = new_table(header);
+        for p in &r.points {
+            let mut row = vec![
+                sig(p.temperature_k, 5),
+                sig(p.pressure_pa / PA_PER_BAR, 5),
+                p.phase.to_string(),
+            ];
+            if r.reference.kind != "none" {
+                row.push(opt(p.reference_z, 6));
+                row.push(opt(p.reference_density_kg_m3, 5));
+            }
+            for v in &p.values {
+                row.push(opt(v.z, 5));
+                if r.reference.kind != "none" {
+                    row.push(opt(v.deviation_pct, 3));
+                } else {
+                    row.push(opt(v.mass_density_kg_m3, 5));
+                }
+            }
+            t.add_row(row);
+        }
+        right_align(&mut t, 0);
+        out.push_str(&format!("{t}\n"));
+    } else {
+        out.push_str(&format!(
+            "\n({} points: use --format csv or json for every point)\n",
+            r.points.len()
+        ));
+    }
+    if r.skipped_rows > 0 {
+        out.push_str(&format!("\nskipped rows ({}):\n", r.skipped_rows));
+        for s in &r.skipped {
+            out.push_str(&format!("  {s}\n"));
+        }
+    }
+    if !r.charts.is_empty() {
+        out.push_str(&format!("\ncharts: {}\n", r.charts.join(", ")));
+    }
+    out.push_str(&format!("\ncaution: {}\n", r.caution));
+    out
+}
+
+fn full(v: Option<f64>) -> String {
+    v.map(|v| format!("{v:e}")).unwrap_or_default()
+}
+
+/// One row per point, SI units.
+pub fn csv(r: &CompareReport) -> Result<String, CliError> {
+    let mut w = csv::Writer::from_writer(Vec::new());
+    let mut header: Vec<String> = [
+        "temperature_k",
+        "pressure_pa",
+        "phase",
+        "reference_z",
+        "reference_density_kg_m3",
+        "spread_pct",
+    ]
+    .map(String::from)
+    .to_vec();
+    for v in r.points.first().map_or(&[][..], |p| &p.values[..]) {
+        header.push(format!("{}_z", v.model));
+        header.push(format!("{}_mass_density_kg_m3", v.model));
+        header.push(format!("{}_deviation_pct", v.model));
+    }
+    let e = |e: csv::Error| CliError::Output(e.to_string());
+    w.write_record(&header).map_err(e)?;
+    for p in &r.points {
+        let mut row = vec![
+            format!("{:e}", p.temperature_k),
+            format!("{:e}", p.pressure_pa),
+            p.phase.to_string(),
+            full(p.reference_z),
+            full(p.reference_density_kg_m3),
+            full(p.spread_pct),
+        ];
+        for v in &p.values {
+            row.push(full(v.z));
+            row.push(full(v.mass_density_kg_m3));
+            row.push(full(v.deviation_pct));
+        }
+        w.write_record(&row).map_err(e)?;
+    }
+    let bytes = w
+        .into_inner()
+        .map_err(|e| CliError::Output(e.to_string()))?;
+    String::from_utf8(bytes).map_err(|e| CliError::Output(e.to_string()))
+}
+
+/// Prints the report in `format`: data on stdout, warnings (and, for CSV and JSON, the
+/// caution) on stderr.
+pub fn render(r: &CompareReport, format: crate::cli::Format) -> Result<(), CliError> {
+    use crate::cli::Format;
+    let text = match format {
+        Format::Table => text(r),
+        Format::Csv => csv(r)?,
+        Format::Json => crate::render::json::to_string(r)?,
+    };
+    crate::render::emit(&text)?;
+    match format {
+        Format::Table => crate::render::side_notes(&r.warnings, None),
+        _ => crate::render::side_notes(&r.warnings, Some(r.caution)),
+    }
+    Ok(())
+}
