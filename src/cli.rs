@@ -28,6 +28,18 @@ pub enum Command {
     Compare(CompareArgs),
     /// A design-basis table of one model over a T-P grid, with its basis printed.
     Table(TableArgs),
+    /// The model catalogue: every model with its source, range, strengths and weaknesses.
+    Models(ModelsArgs),
+}
+
+/// Arguments of `zfactor models`.
+#[derive(Debug, Args)]
+pub struct ModelsArgs {
+    /// One model id to show; all are listed when omitted.
+    pub id: Option<String>,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
 }
 
 /// Output formats.

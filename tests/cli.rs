@@ -351,3 +351,78 @@ fn a_split_mixture_is_reported_as_two_phases() {
         }
     }
 }
+
+#[test]
+fn the_model_catalogue_lists_every_model_id() {
+    let v = json(&["models"]);
+    let ids: Vec<&str> = v["models"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .map(|m| m["id"].as_str().unwrap())
+        .collect();
+    for id in zfactor::models::ALL_IDS {
+        assert!(ids.contains(&id), "{id} missing from the catalogue");
+    }
+    refused(&["models", "nonsense"], "nonsense");
+}
+
+#[test]
+fn every_model_answers_in_state_where_it_applies() {
+    // Water at 400 K, 10 bar (compressed liquid): IF97 and IAPWS-95 agree to 1e-5 in density
+    // (IAPWS R7-97(2012) states IF97's consistency with IAPWS-95 to this order in region 1).
+    let v = json(&[
+        "state",
+        "--fluid",
+        "water",
+        "-t",
+        "400 K",
+        "-p",
+        "10 bar",
+        "-m",
+        "if97,reference",
+    ]);
+    let rho: Vec<f64> = v["results"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .map(|r| r["mass_density_kg_m3"].as_f64().unwrap())
+        .collect();
+    assert!((rho[0] / rho[1] - 1.0).abs() < 1e-5, "{rho:?}");
+    // Natural gas with every mixture model, one at a time.
+    for id in ["srk-pen", "pr-pen", "pr78-pen", "virial", "lk", "dak", "hy"] {
+        let v = json(&[
+            "state",
+            "--mix",
+            "methane=0.9,ethane=0.06,propane=0.02,nitrogen=0.02",
+            "-t",
+            "300 K",
+            "-p",
+            "20 bar",
+            "-m",
+            id,
+        ]);
+        let z = v["results"][0]["z"].as_f64().unwrap();
+        assert!(z > 0.9 && z < 1.0, "{id}: Z = {z}");
+    }
+    refused(
+        &[
+            "state",
+            "--mix",
+            "methane=0.5,ethane=0.5",
+            "-t",
+            "300 K",
+            "-p",
+            "1 bar",
+            "-m",
+            "reference",
+        ],
+        "single fluid",
+    );
+    refused(
+        &[
+            "state", "--fluid", "methane", "-t", "300 K", "-p", "1 bar", "-m", "if97",
+        ],
+        "water",
+    );
+}

@@ -3,6 +3,7 @@
 pub mod compare;
 pub mod demo;
 pub mod fluids;
+pub mod models;
 pub mod state;
 pub mod table;
 
@@ -26,6 +27,11 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
         Command::Demo(args) => demo::run(args),
         Command::Compare(args) => compare::dispatch(args),
         Command::Table(args) => table::run(args),
+        Command::Models(args) => {
+            let report = models::run(args)?;
+            crate::render::models(&report, args.format)?;
+            Ok(Exit::Success)
+        }
     }
 }
 

@@ -116,3 +116,23 @@ pub fn fluids(r: &FluidsReport) -> Result<String, CliError> {
     }
     finish(w)
 }
+
+/// The model catalogue as CSV.
+pub fn models(r: &crate::report::models::ModelsReport) -> Result<String, CliError> {
+    let mut w = csv::Writer::from_writer(Vec::new());
+    let err = |e: csv::Error| CliError::Output(e.to_string());
+    w.write_record(["id", "name", "citation", "validity", "good_at", "poor_at"])
+        .map_err(err)?;
+    for m in &r.models {
+        w.write_record([
+            m.id,
+            m.name,
+            m.citation,
+            m.validity,
+            &m.good_at.join(" | "),
+            &m.poor_at.join(" | "),
+        ])
+        .map_err(err)?;
+    }
+    finish(w)
+}

@@ -48,6 +48,19 @@ pub fn state(report: &StateReport, format: Format) -> Result<(), CliError> {
     Ok(())
 }
 
+/// Renders the model catalogue.
+pub fn models(
+    report: &crate::report::models::ModelsReport,
+    format: Format,
+) -> Result<(), CliError> {
+    let text = match format {
+        Format::Table => table::models(report),
+        Format::Csv => csv::models(report)?,
+        Format::Json => json::to_string(report)?,
+    };
+    emit(&text)
+}
+
 /// Renders a fluids report.
 pub fn fluids(report: &FluidsReport, format: Format) -> Result<(), CliError> {
     let text = match format {

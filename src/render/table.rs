@@ -254,3 +254,32 @@ fn right_align(t: &mut Table, from: usize) {
         }
     }
 }
+
+/// The model catalogue as text: a short list, or one model in full.
+pub fn models(r: &crate::report::models::ModelsReport) -> String {
+    let mut t = new_table();
+    if r.models.len() == 1 {
+        let m = &r.models[0];
+        t.set_header(vec!["field", "value"]);
+        t.add_row(vec!["id".to_string(), m.id.to_string()]);
+        t.add_row(vec!["name".to_string(), m.name.to_string()]);
+        t.add_row(vec!["source".to_string(), m.citation.to_string()]);
+        t.add_row(vec!["validity".to_string(), m.validity.to_string()]);
+        for g in &m.good_at {
+            t.add_row(vec!["good at".to_string(), g.to_string()]);
+        }
+        for p in &m.poor_at {
+            t.add_row(vec!["poor at".to_string(), p.to_string()]);
+        }
+        t.set_content_arrangement(ContentArrangement::Dynamic);
+        t.set_width(110);
+        return format!("{t}\n");
+    }
+    t.set_header(vec!["id", "model", "validity"]);
+    for m in &r.models {
+        t.add_row(vec![m.id, m.name, m.validity]);
+    }
+    t.set_content_arrangement(ContentArrangement::Dynamic);
+    t.set_width(120);
+    format!("{t}\n`zfactor models ID` shows one model with its source, strengths and weaknesses.\n")
+}

@@ -3,5 +3,6 @@
 
 pub mod compare;
 pub mod fluids;
+pub mod models;
 pub mod state;
 pub mod table;
