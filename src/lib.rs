@@ -52,5 +52,6 @@ where
             return Err(CliError::BadInput(e.to_string().trim_end().to_string()));
         }
     };
+    output_file::clean_up_on_interrupt();
     commands::dispatch(&cli)
 }

@@ -6,6 +6,33 @@ use crate::error::CliError;
 use std::fs;
 use std::io::Write;
 use std::path::{Path, PathBuf};
+use std::sync::{Mutex, Once};
+
+/// Temporary files being written; an interrupt removes them before the process exits.
+static PENDING: Mutex<Vec<PathBuf>> = Mutex::new(Vec::new());
+
+fn pending() -> std::sync::MutexGuard<'static, Vec<PathBuf>> {
+    PENDING
+        .lock()
+        .unwrap_or_else(|poisoned| poisoned.into_inner())
+}
+
+/// Installs (once) the Ctrl-C handler that removes every temporary output file and exits with
+/// status 130, so an interrupted run leaves no partial file behind.
+pub fn clean_up_on_interrupt() {
+    static ONCE: Once = Once::new();
+    ONCE.call_once(|| {
+        // If a handler cannot be installed (one exists already), the default behaviour
+        // stays: the temporary file, never the output, may remain.
+        let _ = ctrlc::set_handler(|| {
+            for p in pending().drain(..) {
+                let _ = fs::remove_file(p);
+            }
+            eprintln!("zfactor: interrupted; no output file was written");
+            std::process::exit(130);
+        });
+    });
+}
 
 /// True when `a` and `b` name the same existing file.
 fn same_file(a: &Path, b: &Path) -> bool {
@@ -66,6 +93,7 @@ where
             .open(&candidate)
         {
             Ok(f) => {
+                pending().push(candidate.clone());
                 tmp = Some((candidate, f));
                 break;
             }
@@ -79,19 +107,22 @@ where
             dir.display()
         ))
     })?;
+    let done = |ok: bool| {
+        if !ok {
+            let _ = fs::remove_file(&tmp_path);
+        }
+        pending().retain(|p| p != &tmp_path);
+    };
     if let Err(e) = fill(&mut f, &tmp_path) {
-        let _ = fs::remove_file(&tmp_path);
+        done(false);
         return Err(e);
     }
     let result = f.sync_all().and_then(|_| {
         drop(f);
         fs::rename(&tmp_path, path)
     });
-    if let Err(e) = result {
-        let _ = fs::remove_file(&tmp_path);
-        return Err(out_err(e));
-    }
-    Ok(())
+    done(result.is_ok());
+    result.map_err(out_err)
 }
 
 #[cfg(test)]

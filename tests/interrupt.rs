@@ -1,0 +1,55 @@
+//! An interrupted run (Ctrl-C, SIGINT) leaves no partial output file: the output is written
+//! to a temporary file and renamed only when complete, and the interrupt handler removes
+//! any temporary file before the process exits.
+
+#![cfg(unix)]
+
+use std::process::Command;
+use std::time::{Duration, Instant};
+
+#[test]
+fn ctrl_c_leaves_no_file_behind() {
+    let dir = tempfile::tempdir().unwrap();
+    let out = dir.path().join("basis.csv");
+    // A long design table: a mixture is flashed at every one of 250,000 states.
+    let mut child = Command::new(env!("CARGO_BIN_EXE_zfactor"))
+        .args([
+            "table",
+            "--mix",
+            "methane=0.8,ethane=0.1,propane=0.05,n-butane=0.05",
+            "--temperatures",
+            "200..400 K n 500",
+            "--pressures",
+            "1..200 bar n 500",
+            "--model",
+            "pr",
+            "--properties",
+            "z,density,h",
+            "--format",
+            "csv",
+            "--output",
+        ])
+        .arg(&out)
+        .spawn()
+        .unwrap();
+    std::thread::sleep(Duration::from_millis(800));
+    let status = Command::new("kill")
+        .args(["-INT", &child.id().to_string()])
+        .status()
+        .unwrap();
+    assert!(status.success());
+    let start = Instant::now();
+    let code = loop {
+        if let Some(s) = child.try_wait().unwrap() {
+            break s.code();
+        }
+        assert!(
+            start.elapsed() < Duration::from_secs(30),
+            "no exit after SIGINT"
+        );
+        std::thread::sleep(Duration::from_millis(20));
+    };
+    assert_eq!(code, Some(130), "exit status after an interrupt");
+    let left: Vec<_> = std::fs::read_dir(dir.path()).unwrap().collect();
+    assert!(left.is_empty(), "files left behind: {left:?}");
+}
