@@ -9,18 +9,9 @@
 
 use super::error::{positive, PureError, PureResult};
 use super::fluid::{Branch, Critical, FluidRange, PureFluid, PureProps, SatState};
+use crate::helmholtz::branch_hint::ancillary_pressure;
 use crate::helmholtz::density::{self as hd, solve_branch};
-use crate::helmholtz::{FluidProperties, HelmholtzFluid, Saturation, Tier};
-
-/// Relative margin around the ancillary vapour pressure inside which the full saturation solve
-/// decides the phase of a (T, P) request, for a reference formulation (its own ancillaries
-/// agree with it to 1.7e-4 or better from the triple point to 0.99 Tc).
-pub const ANCILLARY_MARGIN_REFERENCE: f64 = 1e-3;
-/// The same for a 12-term technical equation, which uses the reference paper's ancillary and
-/// departs from it by up to 3.5e-3.
-pub const ANCILLARY_MARGIN_TECHNICAL: f64 = 1.5e-2;
-/// Fraction of Tc above which the ancillary is not used.
-pub const ANCILLARY_TOP: f64 = 0.99;
+use crate::helmholtz::{FluidProperties, HelmholtzFluid, Saturation};
 
 fn convert(p: &FluidProperties) -> PureProps {
     PureProps {
@@ -105,20 +96,10 @@ impl PureFluid for HelmholtzFluid {
         sat_state(self, &HelmholtzFluid::saturation_t(self, t)?)
     }
 
-    /// The paper's vapour-pressure ancillary, trusted to [`ANCILLARY_MARGIN_REFERENCE`]
-    /// (or [`ANCILLARY_MARGIN_TECHNICAL`]) below
-    /// [`ANCILLARY_TOP`] Tc (checked against the full solve in `eos/tests/pure_states.rs`).
+    /// The paper's vapour-pressure ancillary with the margin it is trusted to
+    /// ([`crate::helmholtz::branch_hint`]).
     fn saturation_estimate(&self, t: f64) -> Option<(f64, f64)> {
-        let f = self.formulation();
-        if !(t >= f.t_triple && t < ANCILLARY_TOP * f.tc) {
-            return None;
-        }
-        let est = f.pc * f.ps_anc.as_ref()?.reduced(t, f.tc);
-        let margin = match f.tier {
-            Tier::Reference => ANCILLARY_MARGIN_REFERENCE,
-            Tier::Technical => ANCILLARY_MARGIN_TECHNICAL,
-        };
-        (est.is_finite() && est > 0.0).then_some((est, margin))
+        ancillary_pressure(self.formulation(), t)
     }
 
     fn saturation_p(&self, p: f64) -> PureResult<SatState> {
