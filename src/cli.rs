@@ -18,6 +18,8 @@ pub enum Command {
     State(StateArgs),
     /// List, search or show component data with their sources.
     Fluids(FluidsArgs),
+    /// Saturation pressure or temperature of a pure fluid, with both saturated phases.
+    Saturation(crate::commands::saturation::SaturationArgs),
     /// Run the built-in demonstration (a fuel-gas skid of a fictional compressor station).
     Demo(DemoArgs),
 }

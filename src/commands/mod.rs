@@ -2,6 +2,7 @@
 
 pub mod demo;
 pub mod fluids;
+pub mod saturation;
 pub mod state;
 
 use crate::cli::{Cli, Command};
@@ -22,6 +23,7 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             Ok(Exit::Success)
         }
         Command::Demo(args) => demo::run(args),
+        Command::Saturation(args) => saturation::run_and_render(args),
     }
 }
 

@@ -2,4 +2,5 @@
 //! them into tables, CSV or JSON; nothing here formats numbers for display.
 
 pub mod fluids;
+pub mod saturation;
 pub mod state;
