@@ -21,6 +21,8 @@ pub enum Command {
     State(StateArgs),
     /// List, search or show component data with their sources.
     Fluids(FluidsArgs),
+    /// Saturation pressure or temperature of a pure fluid, with both saturated phases.
+    Saturation(crate::commands::saturation::SaturationArgs),
     /// Run the built-in demonstration (a fuel-gas skid of a fictional compressor station).
     Demo(DemoArgs),
     /// Compare models over a T-P grid or a list of states, against a reference model, the

@@ -42,6 +42,7 @@ pub mod lee_kesler;
 pub mod model;
 pub mod phase;
 pub mod properties;
+pub mod pure;
 pub mod residual;
 pub mod state;
 pub mod tp_explicit;

@@ -4,6 +4,7 @@ pub mod compare;
 pub mod demo;
 pub mod fluids;
 pub mod models;
+pub mod saturation;
 pub mod state;
 pub mod table;
 
@@ -32,6 +33,7 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             crate::render::models(&report, args.format)?;
             Ok(Exit::Success)
         }
+        Command::Saturation(args) => saturation::run_and_render(args),
     }
 }
 

@@ -7,6 +7,8 @@ pub mod csv;
 pub mod grid_table;
 pub mod json;
 pub mod number;
+pub mod saturation_csv;
+pub mod saturation_table;
 pub mod table;
 
 use crate::cli::Format;

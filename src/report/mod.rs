@@ -4,5 +4,6 @@
 pub mod compare;
 pub mod fluids;
 pub mod models;
+pub mod saturation;
 pub mod state;
 pub mod table;

@@ -28,7 +28,8 @@
 //! with h and s shifted by constants. The direct (T, rho) functions of [`HelmholtzFluid`]
 //! report the formulation's own convention instead.
 
-use super::density;
+use super::branch_hint;
+use super::density::{self, solve_branch, Branch};
 use super::formulation::{Formulation, Tier, Validity};
 use super::properties::{self, FluidProperties};
 use super::saturation::{self, Saturation};
@@ -141,8 +142,25 @@ impl HelmholtzFluid {
     }
 
     /// The stable density (mol/m3) at T (K) and p (Pa): of several roots, the one of lowest
-    /// Gibbs energy.
+    /// Gibbs energy. Where the vapour-pressure ancillary already tells which root is stable
+    /// ([`super::branch_hint`]), only that branch is solved.
     pub fn density(&self, t: f64, p: f64) -> Result<f64> {
+        positive("temperature (K)", t)?;
+        positive("pressure (Pa)", p)?;
+        if let Some(branch) = branch_hint::stable_branch(self.form, t, p) {
+            let f = self.form;
+            let start = match branch {
+                Branch::Vapour => p / (f.r * t),
+                Branch::Liquid => f
+                    .rhol_anc
+                    .as_ref()
+                    .map_or(2.0 * f.rhoc, |a| f.rhoc * a.reduced(t, f.tc))
+                    .max(1.01 * f.rhoc),
+            };
+            if let Some(rho) = solve_branch(f, t, p, branch, start) {
+                return Ok(rho);
+            }
+        }
         let roots = self.density_roots(t, p)?;
         let tau = self.form.tc / t;
         let g = |rho: f64| {

@@ -30,6 +30,7 @@
 //! ```
 
 pub mod ancillary;
+pub mod branch_hint;
 pub mod data;
 pub mod density;
 pub mod derivs;

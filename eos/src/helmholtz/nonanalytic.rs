@@ -11,12 +11,19 @@
 //! The derivatives are those of IAPWS R6-95(2018), Table 5. At delta = 1 the delta-derivatives
 //! of Delta contain 0/0 whose limits are zero; exactly at the critical point (delta = tau = 1)
 //! Delta = 0 and the second derivatives diverge, so Delta is kept at or above [`DELTA_FLOOR`]
-//! and the result is a very large finite number there instead of an infinity.
+//! and the result is a very large finite number there instead of an infinity. Far from the
+//! critical point (psi < [`PSI_NEGLIGIBLE`]) the term is left out.
 
 use super::derivs::Derivs;
 
 /// Smallest Delta used; keeps Delta^(b-2) finite at the exact critical point.
 pub const DELTA_FLOOR: f64 = 1e-200;
+
+/// psi below which the term is left out. psi < 1e-30 needs |tau - 1| or |delta - 1| large
+/// (D = 700 to 800, C = 28 to 32 in IAPWS-95), where Delta is of order 1e-2 or more, so the
+/// term and its derivatives are below 1e-24 in absolute value, far below the rounding of
+/// phi_r.
+pub const PSI_NEGLIGIBLE: f64 = 1e-30;
 
 /// n Delta^b delta psi.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -48,9 +55,15 @@ impl NonAnalyticTerm {
         let tm = tau - 1.0;
         let dm2 = dm * dm;
         let ex = 0.5 / beta; // 1/(2 beta)
-        let theta = -tm + ca * dm2.powf(ex);
-        let big_delta = (theta * theta + cb * dm2.powf(a)).max(DELTA_FLOOR);
         let psi = (-cc * dm2 - cd * tm * tm).exp();
+        if psi < PSI_NEGLIGIBLE {
+            return Derivs::default();
+        }
+        // (dm2)^ex and (dm2)^a once; the lower powers by division.
+        let dm2_ex = dm2.powf(ex);
+        let dm2_a = dm2.powf(a);
+        let theta = -tm + ca * dm2_ex;
+        let big_delta = (theta * theta + cb * dm2_a).max(DELTA_FLOOR);
         let psi_d = -2.0 * cc * dm * psi;
         let psi_dd = (2.0 * cc * dm2 - 1.0) * 2.0 * cc * psi;
         let psi_t = -2.0 * cd * tm * psi;
@@ -59,13 +72,15 @@ impl NonAnalyticTerm {
 
         // Delta and its delta-derivatives; their limits at delta = 1 are zero.
         let (ddel, dddel, cross) = if dm2 > 0.0 {
-            let p1 = dm2.powf(ex - 1.0);
-            let ddel = dm * (ca * theta * (2.0 / beta) * p1 + 2.0 * cb * a * dm2.powf(a - 1.0));
+            let inv = 1.0 / dm2;
+            let p1 = dm2_ex * inv; // dm2^(ex - 1)
+            let a1 = dm2_a * inv; // dm2^(a - 1)
+            let ddel = dm * (ca * theta * (2.0 / beta) * p1 + 2.0 * cb * a * a1);
             let dddel = ddel / dm
                 + dm2
-                    * (4.0 * cb * a * (a - 1.0) * dm2.powf(a - 2.0)
+                    * (4.0 * cb * a * (a - 1.0) * a1 * inv
                         + 2.0 * ca * ca * (1.0 / beta).powi(2) * p1 * p1
-                        + ca * theta * (4.0 / beta) * (ex - 1.0) * dm2.powf(ex - 2.0));
+                        + ca * theta * (4.0 / beta) * (ex - 1.0) * p1 * inv);
             (ddel, dddel, dm * p1)
         } else {
             (0.0, 0.0, 0.0)

@@ -1,0 +1,277 @@
+//! `zfactor saturation`: the saturation state of a pure fluid at a temperature or a pressure,
+//! for each requested model (the cubics and, where the fluid has one, its reference or 12-term
+//! Helmholtz formulation), through `eos::pure`.
+
+use crate::cli::{FluidArgs, Format};
+use crate::error::CliError;
+use crate::feed::{self, Feed};
+use crate::report::saturation::{
+    SaturatedPhase, SaturationInput, SaturationReport, SaturationResult,
+};
+use crate::units;
+use clap::Args;
+use eos::cubic::{Cubic, CubicKind};
+use eos::helmholtz::{reference_for, technical_for, HelmholtzFluid};
+use eos::pure::{PureError, PureFluid, PureProps, SatState};
+
+/// Arguments of `zfactor saturation`.
+#[derive(Debug, Args)]
+pub struct SaturationArgs {
+    #[command(flatten)]
+    pub fluid: FluidArgs,
+    /// Temperature with its unit ("300 K", "25 degC"): gives the saturation pressure.
+    #[arg(long, short = 't', allow_hyphen_values = true)]
+    pub temperature: Option<String>,
+    /// Pressure with its unit ("1 atm", "5 barg"): gives the saturation temperature.
+    #[arg(long, short = 'p', allow_hyphen_values = true)]
+    pub pressure: Option<String>,
+    /// Ambient pressure that gauge readings are referred to.
+    #[arg(long, default_value = "101.325 kPa")]
+    pub ambient: String,
+    /// Model id, a comma-separated list, or "all": vdw, rk, srk, pr, pr78, and reference or
+    /// sw12 where the fluid has that formulation.
+    #[arg(long, short = 'm', default_value = "all")]
+    pub model: String,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+/// Model ids of this command, cubics first.
+pub const IDS: [&str; 7] = ["vdw", "rk", "srk", "pr", "pr78", "reference", "sw12"];
+
+/// A pure-fluid model with its names.
+struct Built {
+    id: String,
+    name: String,
+    citation: String,
+    reference_state: String,
+    fluid: Box<dyn PureFluid>,
+}
+
+fn helmholtz_for(id: &str, feed: &Feed) -> Option<HelmholtzFluid> {
+    let r = feed.records[0];
+    let find = |name: &str| match id {
+        "reference" => reference_for(name),
+        _ => technical_for(name),
+    };
+    find(&r.id).or_else(|| find(&r.name))
+}
+
+fn build(id: &str, feed: &Feed) -> Result<Option<Built>, CliError> {
+    if let Some(kind) = CubicKind::from_id(id) {
+        let cubic = Cubic::new(kind, &feed.components(), None)
+            .map_err(|e| crate::error::from_eos(&format!("building model {id}"), e))?;
+        let spec = kind.spec();
+        return Ok(Some(Built {
+            id: id.to_string(),
+            name: spec.name.to_string(),
+            citation: spec.citation.to_string(),
+            reference_state: "h = 0 and s = 0 for the ideal gas at 298.15 K and 101.325 kPa"
+                .to_string(),
+            fluid: Box::new(cubic),
+        }));
+    }
+    Ok(helmholtz_for(id, feed).map(|h| {
+        let f = h.formulation();
+        let reference_state = if f.key == "water-iapws95" {
+            "IAPWS-95: u = 0 and s = 0 for the saturated liquid at the triple point".to_string()
+        } else {
+            format!("the reference state of {}", f.title)
+        };
+        Built {
+            id: id.to_string(),
+            name: f.title.to_string(),
+            citation: f.title.to_string(),
+            reference_state,
+            fluid: Box::new(h),
+        }
+    }))
+}
+
+/// The requested ids ("all": every cubic, and the formulations the fluid has).
+fn resolve(spec: &str) -> Result<(Vec<String>, bool), CliError> {
+    let spec = spec.trim();
+    if spec.eq_ignore_ascii_case("all") {
+        return Ok((IDS.iter().map(|s| s.to_string()).collect(), true));
+    }
+    let mut ids = Vec::new();
+    for part in spec.split(',').map(str::trim).filter(|s| !s.is_empty()) {
+        let id = part.to_ascii_lowercase();
+        if !IDS.contains(&id.as_str()) {
+            return Err(CliError::BadInput(format!(
+                "unknown model \"{part}\" for saturation; known models: {}, or all",
+                IDS.join(", ")
+            )));
+        }
+        if !ids.contains(&id) {
+            ids.push(id);
+        }
+    }
+    if ids.is_empty() {
+        return Err(CliError::BadInput(format!(
+            "--model \"{spec}\" names no model; known models: {}, or all",
+            IDS.join(", ")
+        )));
+    }
+    Ok((ids, false))
+}
+
+fn phase(p: &PureProps, m: f64) -> SaturatedPhase {
+    SaturatedPhase {
+        molar_density_mol_m3: p.rho,
+        mass_density_kg_m3: p.rho * m,
+        specific_volume_m3_kg: 1.0 / (p.rho * m),
+        z: p.z,
+        enthalpy_j_mol: p.h,
+        enthalpy_j_kg: p.h / m,
+        entropy_j_mol_k: p.s,
+        entropy_j_kg_k: p.s / m,
+    }
+}
+
+/// Maps a refusal of the pure-fluid layer: input outside what the model covers is bad input
+/// (exit 2), a failed solver a failed computation (exit 1).
+fn from_pure(context: &str, e: PureError) -> CliError {
+    match e {
+        PureError::Model(inner) => crate::error::from_eos(context, inner),
+        other => CliError::BadInput(format!("{context}: {other}")),
+    }
+}
+
+/// Computes the saturation state with every requested model.
+pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
+    let feed = feed::read(&args.fluid)?;
+    if !feed.is_pure() {
+        return Err(CliError::BadInput(format!(
+            "saturation is for a pure fluid, but {} was given; use --fluid NAME",
+            feed.label()
+        )));
+    }
+    let ambient = units::pressure(&args.ambient)
+        .and_then(|p| units::absolute_pressure(&args.ambient, p, 0.0))?;
+    let t = args
+        .temperature
+        .as_deref()
+        .map(units::temperature)
+        .transpose()?;
+    let p = match args.pressure.as_deref() {
+        Some(text) => {
+            let reading = units::pressure(text)?;
+            Some((
+                units::absolute_pressure(text, reading, ambient)?,
+                reading.is_gauge(),
+            ))
+        }
+        None => None,
+    };
+    if t.is_some() == p.is_some() {
+        return Err(CliError::BadInput(
+            "give exactly one of --temperature (for the saturation pressure) and --pressure \
+             (for the saturation temperature)"
+                .to_string(),
+        ));
+    }
+    let (ids, all) = resolve(&args.model)?;
+    let mut results = Vec::new();
+    for id in &ids {
+        let Some(built) = build(id, &feed)? else {
+            if all {
+                continue;
+            }
+            return Err(CliError::BadInput(format!(
+                "{} has no {} formulation here; models for it: {}",
+                feed.label(),
+                if id == "reference" {
+                    "reference"
+                } else {
+                    "12-term (sw12)"
+                },
+                IDS.iter()
+                    .filter(|i| build(i, &feed).ok().flatten().is_some())
+                    .copied()
+                    .collect::<Vec<_>>()
+                    .join(", ")
+            )));
+        };
+        let ctx = format!("model {}", built.id);
+        let f = built.fluid.as_ref();
+        let sat: SatState = match (t, p) {
+            (Some(t), _) => f.saturation_t(t),
+            (_, Some((p, _))) => f.saturation_p(p),
+            _ => unreachable_pair(),
+        }
+        .map_err(|e| from_pure(&ctx, e))?;
+        let finite = [
+            sat.t,
+            sat.p,
+            sat.liquid.rho,
+            sat.vapor.rho,
+            sat.liquid.h,
+            sat.vapor.h,
+            sat.liquid.s,
+            sat.vapor.s,
+        ]
+        .iter()
+        .all(|v| v.is_finite());
+        if !finite {
+            return Err(CliError::Computation(format!(
+                "{ctx} gave a non-finite saturation property"
+            )));
+        }
+        // Molar mass of the model where it carries its own (the formulations).
+        let mm = f.molar_mass();
+        results.push(SaturationResult {
+            model: built.id,
+            model_name: built.name,
+            citation: built.citation,
+            temperature_k: sat.t,
+            pressure_pa: sat.p,
+            liquid: phase(&sat.liquid, mm),
+            vapor: phase(&sat.vapor, mm),
+            latent_heat_j_mol: sat.latent_heat(),
+            latent_heat_j_kg: sat.latent_heat() / mm,
+            reference_state: built.reference_state,
+        });
+    }
+    Ok(SaturationReport {
+        tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
+        fluid: feed.label(),
+        input: SaturationInput {
+            given: if t.is_some() { "T" } else { "P" },
+            temperature: args.temperature.clone(),
+            pressure: args.pressure.clone(),
+            temperature_k: t,
+            pressure_pa: p.map(|p| p.0),
+            pressure_is_gauge: p.is_some_and(|p| p.1),
+            ambient_pressure_pa: ambient,
+        },
+        results,
+        warnings: Vec::new(),
+        caution: crate::CAUTION,
+    })
+}
+
+/// Exactly one of T and P is present after the check above; this arm cannot be reached, and
+/// answers with a bad-input error rather than a panic should it ever be.
+fn unreachable_pair() -> Result<SatState, PureError> {
+    Err(PureError::UnsupportedPair {
+        given: "neither or both of T and P".to_string(),
+    })
+}
+
+/// Computes and prints.
+pub fn run_and_render(args: &SaturationArgs) -> Result<crate::exit::Exit, CliError> {
+    let report = run(args)?;
+    let text = match args.format {
+        Format::Table => crate::render::saturation_table::render(&report),
+        Format::Csv => crate::render::saturation_csv::render(&report)?,
+        Format::Json => crate::render::json::to_string(&report)?,
+    };
+    crate::render::emit(&text)?;
+    match args.format {
+        Format::Table => crate::render::side_notes(&report.warnings, None),
+        _ => crate::render::side_notes(&report.warnings, Some(report.caution)),
+    }
+    Ok(super::exit_for(&report.warnings))
+}
