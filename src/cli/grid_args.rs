@@ -26,6 +26,8 @@ pub struct CompareArgs {
     #[arg(long, short = 'm', default_value = "all")]
     pub model: String,
     /// What to compare against: a model id (e.g. pr) or the built-in data set "iso6976".
+    /// Default: the fluid's reference formulation where it has one (IAPWS-95 for water, the
+    /// reference equations of methane, nitrogen, carbon dioxide, argon and hydrogen).
     #[arg(long, conflicts_with = "reference_file")]
     pub reference: Option<String>,
     /// A CSV file of reference values: "T [unit]", "P [unit]", "Z" or "density [unit]",

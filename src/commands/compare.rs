@@ -292,7 +292,15 @@ fn reference_and_states(
                 from_contents(c, path, "reference data"),
             ))
         }
-        _ => Ok((Reference::Nothing, states_of(args, feed, ambient)?)),
+        _ => {
+            // No reference named: a pure fluid with a reference formulation is compared with
+            // it (IAPWS-95 for water, and the reference equations of the other gases).
+            if models::applies("reference", feed) {
+                let built = models::build("reference", feed)?;
+                return Ok((Reference::Model(built), states_of(args, feed, ambient)?));
+            }
+            Ok((Reference::Nothing, states_of(args, feed, ambient)?))
+        }
     }
 }
 
