@@ -106,6 +106,16 @@ pub struct StateArgs {
     /// Mass or molar density with its unit: "50 kg/m3", "2.5 mol/L".
     #[arg(long, short = 'd', allow_hyphen_values = true)]
     pub density: Option<String>,
+    /// Pure fluids: enthalpy with its unit ("2800 kJ/kg", "-5 kJ/mol"), on each model's own
+    /// zero (steam-table zero for the water reference formulation).
+    #[arg(long, allow_hyphen_values = true)]
+    pub enthalpy: Option<String>,
+    /// Pure fluids: entropy with its unit ("6.5 kJ/(kg K)"), on each model's own zero.
+    #[arg(long, allow_hyphen_values = true)]
+    pub entropy: Option<String>,
+    /// Pure fluids: vapour quality, 0 (saturated liquid) to 1 (saturated vapour), or percent.
+    #[arg(long, short = 'x')]
+    pub quality: Option<String>,
     /// Ambient pressure that gauge readings are referred to.
     #[arg(long, default_value = "101.325 kPa")]
     pub ambient: String,

@@ -12,6 +12,7 @@ use eos::gas_gravity::ZCorrelation;
 use eos::ideal::IdealGas;
 use eos::phase::Phase;
 use eos::properties::Properties;
+use eos::pure::PureFluid;
 use eos::state::{RootChoice, State};
 use eos::tp_explicit::{self, GravityModel, If97Model, LeeKeslerModel, TpModel};
 use eos::translated::Translated;
@@ -72,6 +73,10 @@ pub struct BuiltModel {
     pub citation: String,
     /// Basis notes: which k_ij were used, which pairs had none.
     pub notes: Vec<String>,
+    /// The same model as a pure fluid with its own saturation solver (cubic members and the
+    /// Helmholtz formulations, for a single component), for states inside the dome and for
+    /// the (P, h), (P, s) and quality inputs.
+    pub pure: Option<Box<dyn PureFluid + Send + Sync>>,
 }
 
 /// A single-phase state from any model.
@@ -236,6 +241,7 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
     let ctx = format!("building model {id}");
     let err = |e| from_eos(&ctx, e);
     let mut notes = Vec::new();
+    let mut pure: Option<Box<dyn PureFluid + Send + Sync>> = None;
     let pure_only = |what: &str| {
         CliError::BadInput(format!(
             "model {id} ({what}) is for a single fluid, not a mixture; choose a mixture model \
@@ -253,9 +259,11 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
                     Translated::peneloux(kind, &comps, kij.as_deref(), None).map_err(err)?,
                 ))
             } else {
-                Engine::Helmholtz(Box::new(
-                    Cubic::new(kind, &comps, kij.as_deref()).map_err(err)?,
-                ))
+                let cubic = Cubic::new(kind, &comps, kij.as_deref()).map_err(err)?;
+                if feed.is_pure() {
+                    pure = Some(Box::new(cubic.clone()));
+                }
+                Engine::Helmholtz(Box::new(cubic))
             }
         }
         "virial" => Engine::Helmholtz(Box::new(
@@ -310,11 +318,12 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
             let citation =
                 eos::catalogue::find(id).map_or_else(String::new, |m| m.citation.to_string());
             return Ok(BuiltModel {
-                engine: Engine::Helmholtz(Box::new(f)),
+                engine: Engine::Helmholtz(Box::new(f.clone())),
                 id: id.to_string(),
                 name,
                 citation,
                 notes,
+                pure: Some(Box::new(f)),
             });
         }
         _ => return Err(unknown(id)),
@@ -326,6 +335,7 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
         name,
         citation,
         notes,
+        pure,
     })
 }
 

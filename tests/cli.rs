@@ -12,6 +12,18 @@ fn zf() -> Command {
     Command::cargo_bin("zfactor").unwrap()
 }
 
+/// Like [`json`], for runs that end with warnings (exit code 3) by design.
+fn json_warned(args: &[&str]) -> Value {
+    let out = zf().args(args).args(["--format", "json"]).output().unwrap();
+    assert!(
+        matches!(out.status.code(), Some(0 | 3)),
+        "{:?} failed: {}",
+        args,
+        String::from_utf8_lossy(&out.stderr)
+    );
+    serde_json::from_slice(&out.stdout).unwrap()
+}
+
 fn json(args: &[&str]) -> Value {
     let out = zf().args(args).args(["--format", "json"]).output().unwrap();
     assert!(
@@ -270,7 +282,7 @@ fn bad_input_is_refused_with_a_message_that_quotes_it() {
         ],
         "percent",
     );
-    run(&["--fluid", "methane", "-t", "300 K"], "two of");
+    run(&["--fluid", "methane", "-t", "300 K"], "two properties");
     run(
         &["--fluid", "methane", "-t", "300 K", "-d", "40000 mol/m3"],
         "co-volume",
@@ -424,5 +436,86 @@ fn every_model_answers_in_state_where_it_applies() {
             "state", "--fluid", "methane", "-t", "300 K", "-p", "1 bar", "-m", "if97",
         ],
         "water",
+    );
+}
+
+#[test]
+fn pure_fluid_pairs_with_enthalpy_entropy_and_quality() {
+    // Steam at 10 bar with h = 2000 kJ/kg on the steam-table zero: inside the dome, quality
+    // (2000 - h')/(h'' - h') with h' = 762.7 and h'' = 2777.1 kJ/kg at 10 bar (from memory of
+    // the IAPWS-IF97 steam tables) = 0.614.
+    let v = json_warned(&[
+        "state",
+        "--fluid",
+        "water",
+        "-p",
+        "10 bar",
+        "--enthalpy",
+        "2000 kJ/kg",
+        "-m",
+        "reference",
+    ]);
+    let r = &v["results"][0];
+    assert_eq!(r["phase"], "two-phase");
+    let x = r["vapor_fraction"].as_f64().unwrap();
+    assert!(
+        (x - (2000.0 - 762.7) / (2777.1 - 762.7)).abs() < 2e-3,
+        "{x}"
+    );
+    // (T, x) on every pure-fluid model gives the saturated phases; x = 0 is saturated liquid.
+    for model in ["pr", "srk", "reference"] {
+        let v = json_warned(&[
+            "state",
+            "--fluid",
+            "co2",
+            "-t",
+            "280 K",
+            "--quality",
+            "0",
+            "-m",
+            model,
+        ]);
+        assert_eq!(v["results"][0]["phase"], "saturated-liquid", "{model}");
+    }
+    // A density inside the dome of a pure fluid is two-phase, not a single-phase root.
+    let v = json_warned(&[
+        "state",
+        "--fluid",
+        "co2",
+        "-t",
+        "280 K",
+        "-d",
+        "400 kg/m3",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(v["results"][0]["phase"], "two-phase");
+    refused(
+        &[
+            "state",
+            "--fluid",
+            "water",
+            "-t",
+            "300 K",
+            "--quality",
+            "1.5",
+            "-m",
+            "pr",
+        ],
+        "1.5",
+    );
+    refused(
+        &[
+            "state",
+            "--mix",
+            "methane=0.5,ethane=0.5",
+            "-p",
+            "1 bar",
+            "--quality",
+            "0.5",
+            "-m",
+            "pr",
+        ],
+        "pure fluid",
     );
 }

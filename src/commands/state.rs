@@ -3,12 +3,13 @@
 use crate::cli::{RootArg, StateArgs};
 use crate::error::{from_eos, CliError};
 use crate::feed::{self, Feed};
-use crate::models::{self, BuiltModel};
+use crate::models::{self, BuiltModel, ModelState};
 use crate::report::state::{
     ComponentFraction, CompositionRow, FugacityRow, ModelResult, PhaseResult, StateInput,
     StateReport,
 };
 use crate::units::{self, Density};
+use eos::pure::Spec;
 use eos::state::RootChoice;
 
 /// The two properties that fix the state, in SI.
@@ -20,6 +21,14 @@ pub enum Given {
     TRho(f64, f64),
     /// P (Pa) and molar density (mol/m3).
     PRho(f64, f64),
+    /// P (Pa) and molar enthalpy (J/mol), pure fluids.
+    Ph(f64, f64),
+    /// P (Pa) and molar entropy (J/(mol K)), pure fluids.
+    Ps(f64, f64),
+    /// T (K) and vapour quality, pure fluids.
+    Tx(f64, f64),
+    /// P (Pa) and vapour quality, pure fluids.
+    Px(f64, f64),
 }
 
 impl Given {
@@ -28,6 +37,10 @@ impl Given {
             Given::Tp(..) => "T,P",
             Given::TRho(..) => "T,density",
             Given::PRho(..) => "P,density",
+            Given::Ph(..) => "P,h",
+            Given::Ps(..) => "P,s",
+            Given::Tx(..) => "T,x",
+            Given::Px(..) => "P,x",
         }
     }
 }
@@ -58,16 +71,39 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
         .map(units::density)
         .transpose()?
         .map(|d: Density| d.molar(feed.molar_mass()));
-    let given = match (t, p, rho) {
-        (Some(t), Some((p, _)), None) => Given::Tp(t, p),
-        (Some(t), None, Some(r)) => Given::TRho(t, r),
-        (None, Some((p, _)), Some(r)) => Given::PRho(p, r),
+    let m = feed.molar_mass();
+    let h = args.enthalpy.as_deref().map(units::enthalpy).transpose()?;
+    let s_in = args.entropy.as_deref().map(units::entropy).transpose()?;
+    let x_in = args.quality.as_deref().map(units::quality).transpose()?;
+    let given = match (t, p.map(|p| p.0), rho, h, s_in, x_in) {
+        (Some(t), Some(p), None, None, None, None) => Given::Tp(t, p),
+        (Some(t), None, Some(r), None, None, None) => Given::TRho(t, r),
+        (None, Some(p), Some(r), None, None, None) => Given::PRho(p, r),
+        (None, Some(p), None, Some(h), None, None) => Given::Ph(p, h.molar(m)),
+        (None, Some(p), None, None, Some(s), None) => Given::Ps(p, s.molar(m)),
+        (Some(t), None, None, None, None, Some(x)) => Given::Tx(t, x),
+        (None, Some(p), None, None, None, Some(x)) => Given::Px(p, x),
         _ => {
             return Err(CliError::BadInput(
-                "give exactly two of --temperature, --pressure and --density".to_string(),
+                "give two properties that fix the state: --temperature with --pressure or \
+                 --density; --pressure with --density; and for a pure fluid also --pressure \
+                 with --enthalpy, --entropy or --quality, or --temperature with --quality"
+                    .to_string(),
             ))
         }
     };
+    if !feed.is_pure()
+        && matches!(
+            given,
+            Given::Ph(..) | Given::Ps(..) | Given::Tx(..) | Given::Px(..)
+        )
+    {
+        return Err(CliError::BadInput(
+            "--enthalpy, --entropy and --quality fix the state of a pure fluid; for a mixture \
+             use `zfactor flash`"
+                .to_string(),
+        ));
+    }
     let ids = models::resolve_ids(&args.model, &feed)?;
     let all = args.model.trim().eq_ignore_ascii_case("all");
     let root = match args.root {
@@ -98,10 +134,20 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
         .collect();
     if !split.is_empty() {
         warnings.push(format!(
-            "the mixture splits into vapour and liquid at this state ({}): a single-phase Z \
-             would be meaningless; the phases are reported",
+            "the {} splits into vapour and liquid at this state ({}): a single-phase Z would \
+             be meaningless; the phases are reported",
+            if feed.is_pure() { "fluid" } else { "mixture" },
             split.join(", ")
         ));
+    }
+    if (args.enthalpy.is_some() || args.entropy.is_some()) && results.len() > 1 {
+        warnings.push(
+            "enthalpy and entropy are read on each model's own zero (a reference formulation's \
+             published one, e.g. the steam-table zero for water; the other models' ideal gas \
+             at 298.15 K and 101.325 kPa), so the same number is a different state for \
+             different models; the results show every model's h and s on the ideal-gas zero"
+                .to_string(),
+        );
     }
     let (notes, more) = extrapolation_warnings(&feed, &results);
     warnings.extend(more);
@@ -116,6 +162,9 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
             temperature: args.temperature.clone(),
             pressure: args.pressure.clone(),
             density: args.density.clone(),
+            enthalpy: args.enthalpy.clone(),
+            entropy: args.entropy.clone(),
+            quality: args.quality.clone(),
             temperature_k: t,
             pressure_pa: p.map(|p| p.0),
             pressure_is_gauge: p.is_some_and(|p| p.1),
@@ -169,17 +218,52 @@ fn compute(
             return two_phase(built, m, feed, &split);
         }
     }
-    let state = match given {
+    let mut named = None;
+    let pure_spec = match given {
+        Given::Tp(..) => None,
+        Given::TRho(t, r) => Some(Spec::Tv { t, v: 1.0 / r }),
+        Given::PRho(p, r) => Some(Spec::Pv { p, v: 1.0 / r }),
+        Given::Ph(p, h) => Some(Spec::Ph { p, h }),
+        Given::Ps(p, s) => Some(Spec::Ps { p, s }),
+        Given::Tx(t, x) => Some(Spec::Tx { t, x }),
+        Given::Px(p, x) => Some(Spec::Px { p, x }),
+    };
+    // A pure fluid at a density, enthalpy, entropy or quality goes through the model's own
+    // saturation solver: inside the dome it is two-phase, by the lever rule.
+    let given = match (pure_spec, &built.pure, built.helmholtz()) {
+        (Some(spec), Some(pf), Some(m)) => {
+            let ps = eos::pure::state(pf.as_ref(), spec).map_err(|e| from_pure(&ctx, e))?;
+            if let (Some(q), Some(sat)) = (ps.quality, ps.saturation) {
+                return pure_two_phase(built, m, feed, &sat, q, ps.phase);
+            }
+            named = Some(ps.phase);
+            Given::TRho(ps.t, ps.rho)
+        }
+        (Some(_), _, _) if !matches!(given, Given::TRho(..) | Given::PRho(..)) => {
+            return Err(CliError::BadInput(format!(
+                "model {} takes temperature, pressure and density only; enthalpy, entropy and \
+                 quality need a model with its own saturation solver: vdw, rk, srk, pr, pr78, \
+                 reference, sw12",
+                built.id
+            )))
+        }
+        _ => given,
+    };
+    let mut state = match given {
         Given::Tp(t, p) => built.at_tp(t, p, x, root),
         Given::TRho(t, r) => built.at_trho(t, r, x, root),
         Given::PRho(p, r) => built.at_prho(p, r, x, root),
+        _ => unreachable_pair(),
     }
     .map_err(|e| from_eos(&ctx, e))?;
+    if let Some(phase) = named {
+        state.phase = phase;
+    }
     let pr = &state.props;
     let (dev, of) = match given {
-        Given::Tp(..) => (pr.z - 1.0, "density"),
-        Given::TRho(..) => (1.0 / pr.z - 1.0, "pressure"),
+        Given::TRho(..) if named.is_none() => (1.0 / pr.z - 1.0, "pressure"),
         Given::PRho(..) => (pr.z - 1.0, "temperature"),
+        _ => (pr.z - 1.0, "density"),
     };
     let mut notes = built.notes.clone();
     if pr.cp.is_none() {
@@ -332,6 +416,63 @@ fn two_phase(
     };
     check_finite(&result)?;
     Ok(result)
+}
+
+/// The pairs that reach the single-phase evaluation are (T, P), (T, rho) and (P, rho); the
+/// others are turned into (T, rho) by the pure-fluid solver first.
+fn unreachable_pair() -> eos::Result<ModelState> {
+    Err(eos::Error::NoSolution(
+        "this pair of properties needs a pure-fluid model".to_string(),
+    ))
+}
+
+/// Maps a pure-fluid solver error: states the request cannot have are bad input.
+fn from_pure(context: &str, e: eos::pure::PureError) -> CliError {
+    use eos::pure::PureError as P;
+    match e {
+        P::Model(inner) => from_eos(context, inner),
+        P::NoSaturation { .. }
+        | P::OutOfRange { .. }
+        | P::QualityOutOfRange { .. }
+        | P::OnSaturationLine { .. }
+        | P::BelowTriplePoint { .. }
+        | P::UnsupportedPair { .. }
+        | P::InvalidInput { .. } => CliError::BadInput(format!("{context}: {e}")),
+        other => CliError::Computation(format!("{context}: {other}")),
+    }
+}
+
+/// A pure fluid inside the dome (or saturated): both phases from the model's saturation
+/// solver, evaluated on zfactor's zero of h and s, in proportion of the quality.
+fn pure_two_phase(
+    built: &BuiltModel,
+    m: &dyn eos::Model,
+    feed: &Feed,
+    sat: &eos::pure::SatState,
+    quality: f64,
+    phase: eos::phase::Phase,
+) -> Result<ModelResult, CliError> {
+    let split = eos::equilibrium::flash::TwoPhase {
+        t: sat.t,
+        p: sat.p,
+        vapor_fraction: quality,
+        x: vec![1.0],
+        y: vec![1.0],
+        rho_l: sat.liquid.rho,
+        rho_v: sat.vapor.rho,
+        iterations: 0,
+        fugacity_residual: 0.0,
+    };
+    let mut r = two_phase(built, m, feed, &split)?;
+    r.phase = phase.to_string();
+    if let Some(n) = r.notes.last_mut() {
+        *n = format!(
+            "saturated at {:.6} K and {:.6e} Pa with quality {quality:.6}: Z and density are \
+             bulk values of both phases together",
+            sat.t, sat.p
+        );
+    }
+    Ok(r)
 }
 
 /// Refuses a result carrying NaN or infinity: no such number reaches the output silently.

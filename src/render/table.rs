@@ -45,8 +45,15 @@ pub fn state(r: &StateReport) -> String {
         }
         given.push(s);
     }
-    if let Some(d) = &inp.density {
-        given.push(format!("density = {d}"));
+    for (name, v) in [
+        ("density", &inp.density),
+        ("enthalpy", &inp.enthalpy),
+        ("entropy", &inp.entropy),
+        ("quality", &inp.quality),
+    ] {
+        if let Some(v) = v {
+            given.push(format!("{name} = {v}"));
+        }
     }
     out.push_str(&format!("state: {}\n", given.join(", ")));
     if r.composition.len() > 1 {

@@ -32,6 +32,12 @@ pub struct StateInput {
     pub pressure: Option<String>,
     /// Density as entered.
     pub density: Option<String>,
+    /// Enthalpy as entered (pure fluids; on each model's own zero).
+    pub enthalpy: Option<String>,
+    /// Entropy as entered (pure fluids; on each model's own zero).
+    pub entropy: Option<String>,
+    /// Vapour quality as entered (pure fluids).
+    pub quality: Option<String>,
     /// Temperature, K (when given).
     pub temperature_k: Option<f64>,
     /// Absolute pressure, Pa (when given).
