@@ -195,3 +195,62 @@ fn compositions() {
     });
     assert!(ok > 1000 && bad > 1000, "accepted {ok}, refused {bad}");
 }
+
+#[test]
+fn grid_axes() {
+    use zfactor::compare::grid::parse_axis;
+    let seeds = [
+        "250 K,300 K,350 K",
+        "200..400 K step 25",
+        "1..150 bar n 20",
+        "1..100 bar n 10 log",
+        "0..40 degC step 10",
+    ];
+    let (ok, bad) = drive(&seeds, N, |s| {
+        let t = parse_axis(s, units::temperature);
+        let p = parse_axis(s, |q| {
+            units::pressure(q).and_then(|r| units::absolute_pressure(q, r, 101_325.0))
+        });
+        for axis in [&t, &p].into_iter().flatten() {
+            assert!(!axis.is_empty(), "{s:?}: empty axis accepted");
+            assert!(axis.iter().all(|v| v.is_finite() && *v > 0.0), "{s:?}");
+        }
+        t.is_ok() || p.is_ok()
+    });
+    assert!(ok > 1000 && bad > 1000, "accepted {ok}, refused {bad}");
+}
+
+#[test]
+fn reference_data_files() {
+    use zfactor::compare::data_file::{read, Need, Options};
+    let seeds = [
+        "T [K],P [bar],Z,source\n300,10,0.98,lab\n320,20,0.97,lab\n",
+        "T [degC],P [MPa],density [kg/m3],source,phase\n25,1,7.5,x,gas\n30,2,15,y,two-phase\n",
+        "P [psia],T [degF],Z,source\n100,60,0.99,a\n",
+    ];
+    let opts = |skip| Options {
+        need: Need::Reference,
+        molar_mass: 0.016,
+        ambient_pa: 101_325.0,
+        skip_bad_rows: skip,
+    };
+    // Fewer inputs than the one-line parsers: each is a whole file.
+    let n = N;
+    let (ok, bad) = drive(&seeds, n, |s| {
+        let strict = read(s, "fuzz.csv", opts(false));
+        let lenient = read(s, "fuzz.csv", opts(true));
+        for c in [&strict, &lenient].into_iter().flatten() {
+            for r in &c.rows {
+                assert!(
+                    r.t.is_finite() && r.t > 0.0 && r.p.is_finite() && r.p > 0.0,
+                    "{s:?}"
+                );
+            }
+        }
+        if let Err(e) = &strict {
+            assert!(e.to_string().contains("fuzz.csv"), "{e}");
+        }
+        strict.is_ok()
+    });
+    assert!(ok > 100 && bad > 1000, "accepted {ok}, refused {bad}");
+}

@@ -23,7 +23,10 @@ fn walk(name: &str, model: &dyn Model, pure: &dyn PureFluid, tc: f64, pc: f64, c
             let (t, p) = (tr * tc, pr * pc);
             match State::at_tp(model, t, p, &[1.0], RootChoice::LowestGibbs) {
                 Ok(s) => {
-                    assert!(s.props.z.is_finite() && s.props.h.is_finite(), "{name} {t} {p}");
+                    assert!(
+                        s.props.z.is_finite() && s.props.h.is_finite(),
+                        "{name} {t} {p}"
+                    );
                     c.ok += 1;
                 }
                 Err(e) => {

@@ -143,6 +143,7 @@ fn states_of(args: &CompareArgs, feed: &Feed, ambient: f64) -> Result<States, Cl
         units::pressure(s).and_then(|r| units::absolute_pressure(s, r, ambient))
     })
     .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
+    grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;
     let mut points = Vec::with_capacity(t.len() * p.len());
     for &ti in &t {
         for &pj in &p {

@@ -68,6 +68,7 @@ pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
         units::pressure(s).and_then(|r| units::absolute_pressure(s, r, ambient))
     })
     .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
+    grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;
     // The Z-only batch kernel has no phase check: it serves pure fluids, whose root of lowest
     // Gibbs energy is the stable phase; a mixture takes the per-state path with its flash.
     let fast = feed.is_pure() && !sel.phase && sel.properties.iter().all(|p| p.from_z);

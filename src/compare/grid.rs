@@ -23,6 +23,24 @@ use std::fmt;
 /// The most values one axis may have (a 1000 x 1000 grid is well inside it).
 pub const MAX_AXIS_VALUES: usize = 100_000;
 
+/// Most states a grid may have: the results of every state are held in memory for the
+/// report (a few hundred bytes each per model), so larger grids are refused rather than
+/// risk running out of memory on an ordinary machine.
+pub const MAX_GRID_STATES: usize = 4_000_000;
+
+/// Refuses a T-P grid of more than [`MAX_GRID_STATES`] states with a message that says how
+/// to proceed.
+pub fn check_size(nt: usize, np: usize) -> Result<(), String> {
+    let n = nt.saturating_mul(np);
+    if n > MAX_GRID_STATES {
+        return Err(format!(
+            "the grid has {nt} temperatures x {np} pressures = {n} states, more than the \
+             {MAX_GRID_STATES} zfactor holds in memory at once; split it into smaller grids"
+        ));
+    }
+    Ok(())
+}
+
 /// A grid axis that could not be read.
 #[derive(Debug, Clone, PartialEq)]
 pub struct GridError {
@@ -224,6 +242,19 @@ fn spaced(from: f64, to: f64, spacing: Spacing) -> Result<Vec<f64>, String> {
                 })
                 .collect())
         }
+    }
+}
+
+#[cfg(test)]
+mod size_tests {
+    use super::*;
+
+    #[test]
+    fn oversized_grids_are_refused_before_any_allocation() {
+        assert!(check_size(2000, 2000).is_ok());
+        let e = check_size(100_000, 100_000).unwrap_err();
+        assert!(e.contains("10000000000"), "{e}");
+        assert!(check_size(usize::MAX, 3).is_err());
     }
 }
 
