@@ -138,3 +138,46 @@ proptest! {
         }
     }
 }
+
+/// Every model id through the command layer's model registry, pure and mixed.
+fn registry_models(ids: &[&str], fractions: &[f64]) -> Vec<zfactor::models::BuiltModel> {
+    let text: Vec<String> = ids
+        .iter()
+        .zip(fractions)
+        .map(|(id, x)| format!("{id}={x}"))
+        .collect();
+    let feed = zfactor::feed::parse_mix(&text.join(","), zfactor::cli::Basis::Mole, true)
+        .expect("pool components");
+    zfactor::models::ALL_IDS
+        .iter()
+        .filter(|id| zfactor::models::applies(id, &feed))
+        .filter_map(|id| zfactor::models::build(id, &feed).ok())
+        .collect()
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig { cases: 150, .. ProptestConfig::default() })]
+
+    #[test]
+    fn every_registered_model_answers_or_fails_cleanly(
+        n in 1usize..=4,
+        start in 0usize..20,
+        raw in prop::collection::vec(0.0f64..1.0, 20),
+        log_t in 1.5f64..3.4,
+        log_p in 2.0f64..8.5,
+    ) {
+        let ids: Vec<&str> = (0..n).map(|k| POOL[(start + k) % 20]).collect();
+        let x = fractions(n, &raw);
+        let (t, p) = (10f64.powf(log_t), 10f64.powf(log_p));
+        for m in registry_models(&ids, &x) {
+            let feed_x: Vec<f64> = {
+                let s: f64 = x.iter().sum();
+                x.iter().map(|v| v / s).collect()
+            };
+            match m.at_tp(t, p, &feed_x, RootChoice::LowestGibbs) {
+                Ok(s) => check(&State { props: s.props, phase: s.phase, roots: s.roots }),
+                Err(e) => prop_assert!(!e.to_string().is_empty(), "{}", m.id),
+            }
+        }
+    }
+}
