@@ -20,6 +20,9 @@ pub enum Command {
     Fluids(FluidsArgs),
     /// Run the built-in demonstration (a fuel-gas skid of a fictional compressor station).
     Demo(DemoArgs),
+    /// A vessel or cylinder: inventory, heating or cooling, usable gas, fill pressure, mass to
+    /// a target, adiabatic venting.
+    Vessel(Box<crate::commands::vessel::VesselArgs>),
 }
 
 /// Output formats.

@@ -2,7 +2,9 @@
 
 pub mod demo;
 pub mod fluids;
+pub mod jobs_common;
 pub mod state;
+pub mod vessel;
 
 use crate::cli::{Cli, Command};
 use crate::error::CliError;
@@ -22,6 +24,11 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             Ok(Exit::Success)
         }
         Command::Demo(args) => demo::run(args),
+        Command::Vessel(args) => {
+            let report = vessel::run(args)?;
+            crate::render::vessel(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
     }
 }
 

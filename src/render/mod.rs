@@ -2,9 +2,11 @@
 //! figures chosen; JSON and CSV stay in SI.
 
 pub mod csv;
+pub mod jobs;
 pub mod json;
 pub mod number;
 pub mod table;
+pub mod vessel;
 
 use crate::cli::Format;
 use crate::error::CliError;
@@ -59,4 +61,18 @@ pub fn fluids(report: &FluidsReport, format: Format) -> Result<(), CliError> {
         }
     };
     emit(&text)
+}
+
+/// Renders a vessel report.
+pub fn vessel(
+    report: &crate::report::vessel::VesselReport,
+    format: Format,
+) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || vessel::table(report),
+        &report.warnings,
+        report.caution,
+    )
 }

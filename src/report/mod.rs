@@ -2,4 +2,6 @@
 //! them into tables, CSV or JSON; nothing here formats numbers for display.
 
 pub mod fluids;
+pub mod jobs_common;
 pub mod state;
+pub mod vessel;
