@@ -23,6 +23,9 @@ pub enum Command {
     /// A vessel or cylinder: inventory, heating or cooling, usable gas, fill pressure, mass to
     /// a target, adiabatic venting.
     Vessel(Box<crate::commands::vessel::VesselArgs>),
+    /// One compressor stage: discharge temperature, heads (isentropic, polytropic by Schultz
+    /// and by path integration), work and power.
+    Compress(Box<crate::commands::compress::CompressArgs>),
 }
 
 /// Output formats.

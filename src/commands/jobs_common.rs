@@ -237,3 +237,20 @@ pub fn per_model<T>(
 pub fn ctx(id: &str) -> impl Fn(eos::Error) -> CliError + '_ {
     move |e| from_eos(&format!("model {id}"), e)
 }
+
+/// Molar flow (mol/s) of `flow` for a model, with the actual conditions (T, P) of an actual
+/// volume flow.
+pub fn molar_flow(
+    model: &dyn eos::Model,
+    flow: Flow,
+    x: &[f64],
+    actual: (f64, f64),
+) -> Result<f64, eos::Error> {
+    use eos::jobs::base_conditions::molar_volume;
+    Ok(match flow {
+        Flow::Mass(q) => q / model.molar_mass(x),
+        Flow::Molar(q) => q,
+        Flow::Actual(q) => q / molar_volume(model, actual.0, actual.1, x)?.0,
+        Flow::Standard(q, b) => q / molar_volume(model, b.t, b.p, x)?.0,
+    })
+}

@@ -1,5 +1,6 @@
 //! One function per command: typed request in, report out; then the chosen renderer.
 
+pub mod compress;
 pub mod demo;
 pub mod fluids;
 pub mod jobs_common;
@@ -24,6 +25,11 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             Ok(Exit::Success)
         }
         Command::Demo(args) => demo::run(args),
+        Command::Compress(args) => {
+            let report = compress::run(args)?;
+            crate::render::compress(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
         Command::Vessel(args) => {
             let report = vessel::run(args)?;
             crate::render::vessel(&report, args.format)?;

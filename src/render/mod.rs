@@ -1,6 +1,7 @@
 //! Renderers: one file per output format. Only here are display units and significant
 //! figures chosen; JSON and CSV stay in SI.
 
+pub mod compress;
 pub mod csv;
 pub mod jobs;
 pub mod json;
@@ -72,6 +73,20 @@ pub fn vessel(
         report,
         format,
         || vessel::table(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders a compressor report.
+pub fn compress(
+    report: &crate::report::compress::CompressReport,
+    format: Format,
+) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || compress::table(report),
         &report.warnings,
         report.caution,
     )

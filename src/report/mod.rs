@@ -1,6 +1,7 @@
 //! Report structs: plain data, SI units, serialisable. Renderers in [`crate::render`] turn
 //! them into tables, CSV or JSON; nothing here formats numbers for display.
 
+pub mod compress;
 pub mod fluids;
 pub mod jobs_common;
 pub mod state;
