@@ -80,9 +80,9 @@ fn cooled_mixture_splits_by_the_flash_and_keeps_its_mass() {
     assert!(r.mass_balance.abs() < 1e-8, "{}", r.mass_balance);
     let s = r.end.state.split.as_ref().unwrap();
     // Material balance of the split: z_i = (1 - beta) x_i + beta y_i.
-    for i in 0..3 {
+    for (i, xi) in x.iter().enumerate() {
         let zi = (1.0 - s.vapor_fraction) * s.x[i] + s.vapor_fraction * s.y[i];
-        assert_relative_eq!(zi, x[i], max_relative = 1e-10);
+        assert_relative_eq!(zi, *xi, max_relative = 1e-10);
     }
 }
 
