@@ -26,6 +26,9 @@ pub enum Command {
     /// One compressor stage: discharge temperature, heads (isentropic, polytropic by Schultz
     /// and by path integration), work and power.
     Compress(Box<crate::commands::compress::CompressArgs>),
+    /// A gas flow as mass, amount, and volume at every named base condition and at flowing
+    /// conditions.
+    Flow(Box<crate::commands::flow::FlowArgs>),
 }
 
 /// Output formats.

@@ -2,6 +2,7 @@
 
 pub mod compress;
 pub mod demo;
+pub mod flow;
 pub mod fluids;
 pub mod jobs_common;
 pub mod state;
@@ -28,6 +29,11 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
         Command::Compress(args) => {
             let report = compress::run(args)?;
             crate::render::compress(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
+        Command::Flow(args) => {
+            let report = flow::run(args)?;
+            crate::render::flow(&report, args.format)?;
             Ok(exit_for(&report.warnings))
         }
         Command::Vessel(args) => {

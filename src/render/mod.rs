@@ -3,6 +3,7 @@
 
 pub mod compress;
 pub mod csv;
+pub mod flow;
 pub mod jobs;
 pub mod json;
 pub mod number;
@@ -87,6 +88,17 @@ pub fn compress(
         report,
         format,
         || compress::table(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders a flow report.
+pub fn flow(report: &crate::report::flow::FlowReport, format: Format) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || flow::table(report),
         &report.warnings,
         report.caution,
     )

@@ -2,6 +2,7 @@
 //! them into tables, CSV or JSON; nothing here formats numbers for display.
 
 pub mod compress;
+pub mod flow;
 pub mod fluids;
 pub mod jobs_common;
 pub mod state;
