@@ -104,7 +104,7 @@ fn one(
     let mm = m.molar_mass(x);
     let mut conds: Vec<BaseConditions> = NAMED.to_vec();
     if let Flow::Standard(_, b) = flow {
-        if !NAMED.iter().any(|k| k.t == b.t && k.p == b.p) {
+        if !NAMED.iter().any(|k| k.id == b.id) {
             conds.insert(0, b);
         }
     }

@@ -301,7 +301,7 @@ pub fn causes(
         with(row.t + 273.15, row.p, &x, b, R),
     );
     if row.quantity == Quantity::StdVolume {
-        for other in NAMED.iter().filter(|n| (n.t, n.p) != (b.t, b.p)) {
+        for other in NAMED.iter().filter(|n| n.id != b.id) {
             push(
                 Cause::BaseCondition(other.id),
                 with(row.t, row.p, &x, *other, R),
