@@ -29,6 +29,11 @@ pub enum Command {
     /// A gas flow as mass, amount, and volume at every named base condition and at flowing
     /// conditions.
     Flow(Box<crate::commands::flow::FlowArgs>),
+    /// A change of state along an isochoric, isobaric, isothermal, isentropic or isenthalpic
+    /// path: end state, heat, work and changes of u, h, s.
+    Process(Box<crate::commands::process::ProcessArgs>),
+    /// Z, real-gas isentropic exponent and molar mass at relieving conditions.
+    Relief(Box<crate::commands::relief::ReliefArgs>),
 }
 
 /// Output formats.

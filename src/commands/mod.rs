@@ -5,6 +5,8 @@ pub mod demo;
 pub mod flow;
 pub mod fluids;
 pub mod jobs_common;
+pub mod process;
+pub mod relief;
 pub mod state;
 pub mod vessel;
 
@@ -34,6 +36,16 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
         Command::Flow(args) => {
             let report = flow::run(args)?;
             crate::render::flow(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
+        Command::Process(args) => {
+            let report = process::run(args)?;
+            crate::render::process(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
+        Command::Relief(args) => {
+            let report = relief::run(args)?;
+            crate::render::relief(&report, args.format)?;
             Ok(exit_for(&report.warnings))
         }
         Command::Vessel(args) => {

@@ -4,7 +4,7 @@
 
 use crate::cli::Format;
 use crate::error::CliError;
-use crate::render::number::sig;
+use crate::render::number::{opt, sig};
 use crate::render::{emit, json, side_notes};
 use crate::report::jobs_common::Compared;
 use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
@@ -64,7 +64,7 @@ impl Grid {
         };
         self.row(name, unit, f(&|c| sig(c.value / scale, 6)));
         self.row("  ideal gas", unit, f(&|c| sig(c.ideal / scale, 6)));
-        self.row("  ideal-gas error", "%", f(&|c| sig(c.ideal_error_pct, 3)));
+        self.row("  ideal-gas error", "%", f(&|c| opt(c.ideal_error_pct, 3)));
     }
 
     /// The table as text.

@@ -7,6 +7,7 @@ pub mod flow;
 pub mod jobs;
 pub mod json;
 pub mod number;
+pub mod process;
 pub mod table;
 pub mod vessel;
 
@@ -99,6 +100,34 @@ pub fn flow(report: &crate::report::flow::FlowReport, format: Format) -> Result<
         report,
         format,
         || flow::table(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders a process report.
+pub fn process(
+    report: &crate::report::process::ProcessReport,
+    format: Format,
+) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || process::table(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders a relief report.
+pub fn relief(
+    report: &crate::report::relief::ReliefReport,
+    format: Format,
+) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || process::relief(report),
         &report.warnings,
         report.caution,
     )

@@ -59,11 +59,11 @@ pub struct CompressResult {
     /// Discharge temperature (path-integrated for a polytropic efficiency), K.
     pub discharge_temperature_k: f64,
     pub discharge_temperature_ideal_k: f64,
-    pub discharge_temperature_ideal_error_pct: f64,
+    pub discharge_temperature_ideal_error_pct: Option<f64>,
     /// Specific work h2 - h1, J/kg.
     pub specific_work_j_kg: f64,
     pub specific_work_ideal_j_kg: f64,
-    pub specific_work_ideal_error_pct: f64,
+    pub specific_work_ideal_error_pct: Option<f64>,
     /// How the discharge state was found.
     pub method: String,
     pub isentropic_head_j_kg: Compared,

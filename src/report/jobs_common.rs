@@ -10,18 +10,16 @@ pub struct Compared {
     pub value: f64,
     /// The ideal-gas value.
     pub ideal: f64,
-    /// (ideal - value) / value, percent (0 when both are 0).
-    pub ideal_error_pct: f64,
+    /// (ideal - value) / value, percent; null where the model's value is within 1e-6 (SI
+    /// units) of zero, where a relative error means nothing.
+    pub ideal_error_pct: Option<f64>,
 }
 
 impl Compared {
     /// Pairs a model value with the ideal-gas value.
     pub fn new(value: f64, ideal: f64) -> Self {
-        let ideal_error_pct = if value == 0.0 && ideal == 0.0 {
-            0.0
-        } else {
-            100.0 * (ideal - value) / value
-        };
+        let pct = 100.0 * (ideal - value) / value;
+        let ideal_error_pct = (value.abs() > 1e-6 && pct.is_finite()).then_some(pct);
         Compared {
             value,
             ideal,

@@ -5,5 +5,7 @@ pub mod compress;
 pub mod flow;
 pub mod fluids;
 pub mod jobs_common;
+pub mod process;
+pub mod relief;
 pub mod state;
 pub mod vessel;
