@@ -34,6 +34,9 @@ pub enum Command {
     Process(Box<crate::commands::process::ProcessArgs>),
     /// Z, real-gas isentropic exponent and molar mass at relieving conditions.
     Relief(Box<crate::commands::relief::ReliefArgs>),
+    /// Audit a spreadsheet (CSV or .xlsx) of gas calculations: recompute each row, flag and
+    /// explain deviations, write an annotated copy.
+    Audit(Box<crate::commands::audit::AuditArgs>),
 }
 
 /// Output formats.

@@ -1,5 +1,8 @@
 //! One function per command: typed request in, report out; then the chosen renderer.
 
+pub mod audit;
+pub mod audit_io;
+pub mod audit_row;
 pub mod compress;
 pub mod demo;
 pub mod flow;
@@ -28,6 +31,11 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             Ok(Exit::Success)
         }
         Command::Demo(args) => demo::run(args),
+        Command::Audit(args) => {
+            let report = audit::run(args)?;
+            crate::render::audit(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
         Command::Compress(args) => {
             let report = compress::run(args)?;
             crate::render::compress(&report, args.format)?;

@@ -1,6 +1,7 @@
 //! Renderers: one file per output format. Only here are display units and significant
 //! figures chosen; JSON and CSV stay in SI.
 
+pub mod audit;
 pub mod compress;
 pub mod csv;
 pub mod flow;
@@ -131,4 +132,27 @@ pub fn relief(
         &report.warnings,
         report.caution,
     )
+}
+
+/// Renders an audit summary.
+pub fn audit(report: &crate::report::audit::AuditReport, format: Format) -> Result<(), CliError> {
+    let text = match format {
+        Format::Table => format!(
+            "{}caution: {} Defer to local codes and licensed review.\n",
+            audit::table(report),
+            report.caution
+        ),
+        Format::Json => json::to_string(report)?,
+        Format::Csv => {
+            return Err(CliError::BadInput(
+                "the audit summary is a table or JSON; the annotated copy is the CSV".to_string(),
+            ))
+        }
+    };
+    emit(&text)?;
+    match format {
+        Format::Table => side_notes(&report.warnings, None),
+        _ => side_notes(&report.warnings, Some(report.caution)),
+    }
+    Ok(())
 }

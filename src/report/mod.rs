@@ -1,6 +1,7 @@
 //! Report structs: plain data, SI units, serialisable. Renderers in [`crate::render`] turn
 //! them into tables, CSV or JSON; nothing here formats numbers for display.
 
+pub mod audit;
 pub mod compress;
 pub mod flow;
 pub mod fluids;
