@@ -222,7 +222,7 @@ fn every_planted_cause_is_found_and_bad_cells_are_located() {
         .unwrap();
     let statuses: Vec<String> = rd
         .records()
-        .map(|r| r.unwrap().get(10).unwrap_or("").to_string())
+        .map(|r| r.unwrap().get(12).unwrap_or("").to_string())
         .collect();
     assert_eq!(
         statuses,
@@ -254,6 +254,12 @@ fn z_forced_to_one_is_found_with_a_real_gas_model() {
     let v = audit(&[input.to_str().unwrap(), "--model", "pr"]);
     assert_eq!(v["rows_flagged"], 1);
     assert!(causes_of(&v, 2).contains(&s("Z forced to 1 (ideal gas)")));
+    // The annotated copy carries the ideal-gas value beside the model's: here the planted
+    // number itself.
+    let mut rd = csv::Reader::from_path(dir.path().join("z.audit.csv")).unwrap();
+    let rec = rd.records().next().unwrap().unwrap();
+    let ideal: f64 = rec.get(6).unwrap().parse().unwrap();
+    assert!((ideal / (100e5 * m / (R * 300.0)) - 1.0).abs() < 1e-12);
 }
 
 #[test]
@@ -356,6 +362,6 @@ fn a_workbook_with_merged_cells_text_and_a_blank_row_is_audited_row_by_row() {
     // The annotated workbook reads back with the status column.
     let mut out: Xlsx<_> = open_workbook(dir.path().join("book.audit.xlsx")).unwrap();
     let range = out.worksheet_range_at(0).unwrap().unwrap();
-    let status: Vec<String> = range.rows().skip(1).map(|r| r[7].to_string()).collect();
+    let status: Vec<String> = range.rows().skip(1).map(|r| r[9].to_string()).collect();
     assert_eq!(status, ["ok", "ok", "bad", "bad", "bad", "bad", "ok"]);
 }

@@ -23,9 +23,11 @@ pub const CHUNK: usize = 16_384;
 /// Rows listed in the summary.
 const LISTED: usize = 200;
 /// Columns appended to each row of the annotated copy.
-pub const APPENDED: [&str; 6] = [
+pub const APPENDED: [&str; 8] = [
     "zfactor_model",
     "zfactor_value",
+    "ideal_gas_value",
+    "ideal_gas_error_pct",
     "deviation_pct",
     "status",
     "reconciling_causes",
@@ -281,6 +283,7 @@ fn tally(
             deviation,
             flagged,
             causes,
+            ..
         } => {
             report.rows_audited += 1;
             let pct = 100.0 * deviation;
@@ -338,17 +341,22 @@ fn annotate(
     match outcome {
         Outcome::Audited {
             value,
+            ideal,
             deviation,
             flagged,
             causes,
         } => {
             out.push_field(&format!("{value:e}"));
+            out.push_field(&format!("{ideal:e}"));
+            out.push_field(&format!("{:.6}", 100.0 * (ideal - value) / value));
             out.push_field(&format!("{:.6}", 100.0 * deviation));
             out.push_field(if *flagged { "FLAG" } else { "ok" });
             out.push_field(&causes.join("; "));
             out.push_field("");
         }
         Outcome::Bad(b) => {
+            out.push_field("");
+            out.push_field("");
             out.push_field("");
             out.push_field("");
             out.push_field("bad");

@@ -375,10 +375,12 @@ fn read_fluid(text: &str, basis: Basis) -> Result<Feed, String> {
 /// The outcome of one row.
 #[derive(Debug, Clone)]
 pub enum Outcome {
-    /// Recomputed: (model value, deviation (sheet - model)/model, flagged, reconciling
-    /// causes, every cause tested).
+    /// Recomputed: the model's value, the ideal-gas value, the deviation
+    /// (sheet - model)/model, whether it is flagged, and the causes that reconcile it.
     Audited {
         value: f64,
+        /// The ideal-gas value of the same row.
+        ideal: f64,
         deviation: f64,
         flagged: bool,
         causes: Vec<String>,
@@ -600,8 +602,10 @@ fn read_and_compute(
     } else {
         Vec::new()
     };
+    let ideal = audit::recompute(&model.ideal, &row).unwrap_or(f64::NAN);
     Ok(Outcome::Audited {
         value,
+        ideal,
         deviation,
         flagged,
         causes,
