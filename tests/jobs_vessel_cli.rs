@@ -247,3 +247,24 @@ fn unreachable_targets_and_bad_input_are_refused_with_code_2() {
     .code(2)
     .stderr(predicate::str::contains("unit"));
 }
+
+#[test]
+fn csv_output_has_one_row_per_model_with_the_fixed_names() {
+    let out = zf()
+        .args([
+            "vessel", "--fluid", "methane", "--volume", "1 m3", "-t", "15 degC", "-p", "100 bar",
+            "-m", "ideal,pr", "--format", "csv",
+        ])
+        .output()
+        .unwrap();
+    assert!(out.status.success());
+    let mut rd = csv::Reader::from_reader(out.stdout.as_slice());
+    let head = rd.headers().unwrap().clone();
+    let col = |name: &str| head.iter().position(|h| h == name).unwrap();
+    let rows: Vec<csv::StringRecord> = rd.records().map(|r| r.unwrap()).collect();
+    assert_eq!(rows.len(), 2);
+    assert_eq!(&rows[1][col("model")], "pr");
+    let m: f64 = rows[1][col("mass_kg")].parse().unwrap();
+    assert!(m > 0.0);
+    assert!(String::from_utf8_lossy(&out.stderr).contains("caution:"));
+}

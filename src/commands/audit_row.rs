@@ -611,3 +611,42 @@ fn read_and_compute(
         causes,
     })
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn column_letters_follow_the_spreadsheet_convention() {
+        // A..Z, then AA..AZ, BA...; column 703 (0-based 702) is AAA.
+        assert_eq!(column_letter(0), "A");
+        assert_eq!(column_letter(25), "Z");
+        assert_eq!(column_letter(26), "AA");
+        assert_eq!(column_letter(51), "AZ");
+        assert_eq!(column_letter(52), "BA");
+        assert_eq!(column_letter(701), "ZZ");
+        assert_eq!(column_letter(702), "AAA");
+    }
+
+    #[test]
+    fn headers_give_their_field_and_unit() {
+        let h: Vec<String> = [
+            "Gas",
+            "Temp [degF]",
+            "P (psig)",
+            "Rho calc (lb/ft3)",
+            "Basis",
+        ]
+        .iter()
+        .map(|s| s.to_string())
+        .collect();
+        let m = map_headers(&h, &[(Field::Value, "Rho calc (lb/ft3)".to_string())]).unwrap();
+        assert_eq!(m.columns[&Field::Fluid].index, 0);
+        assert_eq!(m.columns[&Field::Temperature].unit.as_deref(), Some("degF"));
+        assert_eq!(m.columns[&Field::Pressure].unit.as_deref(), Some("psig"));
+        assert_eq!(m.columns[&Field::Value].index, 3);
+        assert_eq!(m.columns[&Field::Basis].index, 4);
+        let none: Vec<String> = vec!["a".into(), "b".into()];
+        assert!(map_headers(&none, &[]).is_err());
+    }
+}
