@@ -347,8 +347,13 @@ fn annotate(
             causes,
         } => {
             out.push_field(&format!("{value:e}"));
-            out.push_field(&format!("{ideal:e}"));
-            out.push_field(&format!("{:.6}", 100.0 * (ideal - value) / value));
+            if ideal.is_finite() {
+                out.push_field(&format!("{ideal:e}"));
+                out.push_field(&format!("{:.6}", 100.0 * (ideal - value) / value));
+            } else {
+                out.push_field("");
+                out.push_field("");
+            }
             out.push_field(&format!("{:.6}", 100.0 * deviation));
             out.push_field(if *flagged { "FLAG" } else { "ok" });
             out.push_field(&causes.join("; "));
