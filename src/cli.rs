@@ -32,6 +32,23 @@ pub enum Command {
     Table(TableArgs),
     /// The model catalogue: every model with its source, range, strengths and weaknesses.
     Models(ModelsArgs),
+    /// A vessel or cylinder: inventory, heating or cooling, usable gas, fill pressure, mass to
+    /// a target, adiabatic venting.
+    Vessel(Box<crate::commands::vessel::VesselArgs>),
+    /// One compressor stage: discharge temperature, heads (isentropic, polytropic by Schultz
+    /// and by path integration), work and power.
+    Compress(Box<crate::commands::compress::CompressArgs>),
+    /// A gas flow as mass, amount, and volume at every named base condition and at flowing
+    /// conditions.
+    Flow(Box<crate::commands::flow::FlowArgs>),
+    /// A change of state along an isochoric, isobaric, isothermal, isentropic or isenthalpic
+    /// path: end state, heat, work and changes of u, h, s.
+    Process(Box<crate::commands::process::ProcessArgs>),
+    /// Z, real-gas isentropic exponent and molar mass at relieving conditions.
+    Relief(Box<crate::commands::relief::ReliefArgs>),
+    /// Audit a spreadsheet (CSV or .xlsx) of gas calculations: recompute each row, flag and
+    /// explain deviations, write an annotated copy.
+    Audit(Box<crate::commands::audit::AuditArgs>),
 }
 
 /// Arguments of `zfactor models`.

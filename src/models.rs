@@ -119,6 +119,19 @@ impl BuiltModel {
         }
     }
 
+    /// The model as an [`eos::Model`], or a message saying that this model answers at
+    /// (T, P) only (the engineering jobs and phase equilibrium need a Helmholtz energy).
+    pub fn model(&self) -> Result<&dyn Model, CliError> {
+        self.helmholtz().ok_or_else(|| {
+            CliError::BadInput(format!(
+                "model {} answers at given temperature and pressure only; this calculation \
+                 needs a model with a Helmholtz energy (ideal, the cubic family, their \
+                 Peneloux forms, virial, reference, sw12)",
+                self.id
+            ))
+        })
+    }
+
     /// The state at (T, P).
     pub fn at_tp(&self, t: f64, p: f64, x: &[f64], root: RootChoice) -> eos::Result<ModelState> {
         match &self.engine {
@@ -188,14 +201,19 @@ fn unknown(part: &str) -> CliError {
 /// Expands a `--model` value ("all", one id, or a comma-separated list) into ids, refusing
 /// unknown ones with the list of known ids. "all" keeps only the models that apply to `feed`.
 pub fn resolve_ids(spec: &str, feed: &Feed) -> Result<Vec<String>, CliError> {
-    let spec = spec.trim();
-    if spec.eq_ignore_ascii_case("all") {
+    if spec.trim().eq_ignore_ascii_case("all") {
         return Ok(ALL_SET
             .iter()
             .filter(|id| applies(id, feed))
             .map(|s| s.to_string())
             .collect());
     }
+    parse_ids(spec)
+}
+
+/// Reads an explicit comma-separated list of model ids (not "all"), refusing unknown ones.
+pub fn parse_ids(spec: &str) -> Result<Vec<String>, CliError> {
+    let spec = spec.trim();
     let mut ids = Vec::new();
     for part in spec.split(',').map(str::trim).filter(|s| !s.is_empty()) {
         let id = part.to_ascii_lowercase();

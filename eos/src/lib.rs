@@ -38,6 +38,7 @@ pub mod helmholtz;
 pub mod ideal;
 pub mod ideal_cp;
 pub mod if97;
+pub mod jobs;
 pub mod lee_kesler;
 pub mod model;
 pub mod phase;

@@ -1,12 +1,21 @@
 //! One function per command: typed request in, report out; then the chosen renderer.
 
+pub mod audit;
+pub mod audit_io;
+pub mod audit_row;
 pub mod compare;
+pub mod compress;
 pub mod demo;
+pub mod flow;
 pub mod fluids;
+pub mod jobs_common;
 pub mod models;
+pub mod process;
+pub mod relief;
 pub mod saturation;
 pub mod state;
 pub mod table;
+pub mod vessel;
 
 use crate::cli::{Cli, Command};
 use crate::error::CliError;
@@ -34,6 +43,36 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             Ok(Exit::Success)
         }
         Command::Saturation(args) => saturation::run_and_render(args),
+        Command::Audit(args) => {
+            let report = audit::run(args)?;
+            crate::render::audit(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
+        Command::Compress(args) => {
+            let report = compress::run(args)?;
+            crate::render::compress(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
+        Command::Flow(args) => {
+            let report = flow::run(args)?;
+            crate::render::flow(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
+        Command::Process(args) => {
+            let report = process::run(args)?;
+            crate::render::process(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
+        Command::Relief(args) => {
+            let report = relief::run(args)?;
+            crate::render::relief(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
+        Command::Vessel(args) => {
+            let report = vessel::run(args)?;
+            crate::render::vessel(&report, args.format)?;
+            Ok(exit_for(&report.warnings))
+        }
     }
 }
 

@@ -1,15 +1,21 @@
 //! Renderers: one file per output format. Only here are display units and significant
 //! figures chosen; JSON and CSV stay in SI.
 
+pub mod audit;
 pub mod chart;
 pub mod compare;
+pub mod compress;
 pub mod csv;
+pub mod flow;
 pub mod grid_table;
+pub mod jobs;
 pub mod json;
 pub mod number;
+pub mod process;
 pub mod saturation_csv;
 pub mod saturation_table;
 pub mod table;
+pub mod vessel;
 
 use crate::cli::Format;
 use crate::error::CliError;
@@ -77,4 +83,94 @@ pub fn fluids(report: &FluidsReport, format: Format) -> Result<(), CliError> {
         }
     };
     emit(&text)
+}
+
+/// Renders a vessel report.
+pub fn vessel(
+    report: &crate::report::vessel::VesselReport,
+    format: Format,
+) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || vessel::table(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders a compressor report.
+pub fn compress(
+    report: &crate::report::compress::CompressReport,
+    format: Format,
+) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || compress::table(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders a flow report.
+pub fn flow(report: &crate::report::flow::FlowReport, format: Format) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || flow::table(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders a process report.
+pub fn process(
+    report: &crate::report::process::ProcessReport,
+    format: Format,
+) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || process::table(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders a relief report.
+pub fn relief(
+    report: &crate::report::relief::ReliefReport,
+    format: Format,
+) -> Result<(), CliError> {
+    jobs::render(
+        report,
+        format,
+        || process::relief(report),
+        &report.warnings,
+        report.caution,
+    )
+}
+
+/// Renders an audit summary.
+pub fn audit(report: &crate::report::audit::AuditReport, format: Format) -> Result<(), CliError> {
+    let text = match format {
+        Format::Table => format!(
+            "{}caution: {} Defer to local codes and licensed review.\n",
+            audit::table(report),
+            report.caution
+        ),
+        Format::Json => json::to_string(report)?,
+        Format::Csv => {
+            return Err(CliError::BadInput(
+                "the audit summary is a table or JSON; the annotated copy is the CSV".to_string(),
+            ))
+        }
+    };
+    emit(&text)?;
+    match format {
+        Format::Table => side_notes(&report.warnings, None),
+        _ => side_notes(&report.warnings, Some(report.caution)),
+    }
+    Ok(())
 }

@@ -1,0 +1,381 @@
+//! `zfactor audit FILE`: recompute every row of a spreadsheet of gas calculations with one
+//! model, flag rows off by more than a tolerance, test the usual causes on each flagged row,
+//! and write an annotated copy beside the input (never over it).
+//!
+//! CSV is streamed in chunks of [`CHUNK`] rows; each chunk is audited in parallel (rayon)
+//! and written in order, so memory stays bounded whatever the file's length.
+
+use crate::cli::{Basis, Format};
+use crate::commands::audit_io::{check_output, kind_of, Kind, RawRow, Sink, Source};
+use crate::commands::audit_row::{self, Cache, Defaults, Field, Mapping, Outcome};
+use crate::commands::jobs_common as jc;
+use crate::error::CliError;
+use crate::models;
+use crate::report::audit::{AuditReport, BadRow, FlaggedRow};
+use clap::Args;
+use eos::jobs::audit::Quantity;
+use rayon::prelude::*;
+use std::collections::BTreeMap;
+use std::path::{Path, PathBuf};
+
+/// Rows per parallel chunk.
+pub const CHUNK: usize = 16_384;
+/// Rows listed in the summary.
+const LISTED: usize = 200;
+/// Columns appended to each row of the annotated copy.
+pub const APPENDED: [&str; 8] = [
+    "zfactor_model",
+    "zfactor_value",
+    "ideal_gas_value",
+    "ideal_gas_error_pct",
+    "deviation_pct",
+    "status",
+    "reconciling_causes",
+    "message",
+];
+
+/// Arguments of `zfactor audit`.
+#[derive(Debug, Args)]
+pub struct AuditArgs {
+    /// The spreadsheet: .csv or .xlsx. Never modified.
+    pub file: PathBuf,
+    /// Worksheet of a workbook (default: the first).
+    #[arg(long)]
+    pub sheet: Option<String>,
+    /// Column mapping overrides: "value=Rho calc,temperature=T1,..." (fields: fluid,
+    /// temperature, pressure, value, quantity, volume, mass, basis, base).
+    #[arg(long)]
+    pub columns: Option<String>,
+    /// What the sheet computed, for sheets without a quantity column: density, z, mass,
+    /// volume, std_volume.
+    #[arg(long)]
+    pub quantity: Option<String>,
+    /// The model to recompute with (one id).
+    #[arg(long, short = 'm', default_value = "pr")]
+    pub model: String,
+    /// Relative tolerance: "1%", "0.5 %" or a fraction such as 0.01.
+    #[arg(long, default_value = "1%")]
+    pub tolerance: String,
+    /// Basis of mixture fractions in rows without a basis column.
+    #[arg(long, value_enum, default_value = "mole")]
+    pub basis: Basis,
+    /// Base conditions of standard volumes in rows without a base column.
+    #[arg(long, default_value = "15degC")]
+    pub base: String,
+    /// Ambient pressure that gauge readings are referred to.
+    #[arg(long, default_value = "101.325 kPa")]
+    pub ambient: String,
+    /// Path of the annotated copy (default: FILE's name with ".audit" before the extension,
+    /// in the same folder).
+    #[arg(long, short = 'o')]
+    pub output: Option<PathBuf>,
+    /// Output format of the summary.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+fn tolerance(text: &str) -> Result<f64, CliError> {
+    let t = text.trim();
+    let (num, pct) = match t.strip_suffix('%') {
+        Some(n) => (n.trim(), true),
+        None => (t, false),
+    };
+    let v: f64 = num.parse().map_err(|_| {
+        CliError::BadInput(format!(
+            "--tolerance \"{text}\" is not a number; give \"1%\" or 0.01"
+        ))
+    })?;
+    let v = if pct { v / 100.0 } else { v };
+    if !(v.is_finite() && v > 0.0 && v < 1.0) {
+        return Err(CliError::BadInput(format!(
+            "--tolerance \"{text}\" must be above 0 and below 100 %"
+        )));
+    }
+    Ok(v)
+}
+
+fn default_output(input: &Path, kind: Kind) -> PathBuf {
+    let stem = input
+        .file_stem()
+        .map_or_else(|| "sheet".into(), |s| s.to_string_lossy().to_string());
+    let ext = match kind {
+        Kind::Csv => "csv",
+        Kind::Xlsx => "xlsx",
+    };
+    input.with_file_name(format!("{stem}.audit.{ext}"))
+}
+
+fn overrides(spec: Option<&str>) -> Result<Vec<(Field, String)>, CliError> {
+    let Some(spec) = spec else {
+        return Ok(Vec::new());
+    };
+    spec.split(',')
+        .map(str::trim)
+        .filter(|s| !s.is_empty())
+        .map(|pair| {
+            let (f, h) = pair.split_once('=').ok_or_else(|| {
+                CliError::BadInput(format!("--columns: \"{pair}\" is not field=Header"))
+            })?;
+            let field = Field::parse(f).ok_or_else(|| {
+                CliError::BadInput(format!(
+                    "--columns: unknown field \"{f}\"; fields: fluid, temperature, pressure, \
+                     value, quantity, volume, mass, basis, base"
+                ))
+            })?;
+            Ok((field, h.trim().to_string()))
+        })
+        .collect()
+}
+
+/// Runs the audit.
+pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
+    let started = std::time::Instant::now();
+    if args.model.trim().eq_ignore_ascii_case("all") {
+        return Err(CliError::BadInput(
+            "--model all: an audit recomputes with one model; give one id".to_string(),
+        ));
+    }
+    let ids = models::parse_ids(&args.model)?;
+    if ids.len() != 1 {
+        return Err(CliError::BadInput(format!(
+            "--model \"{}\": an audit recomputes with one model; give one id",
+            args.model
+        )));
+    }
+    let tol = tolerance(&args.tolerance)?;
+    let ambient = jc::ambient(&args.ambient)?;
+    let base = jc::base(&args.base, ambient)?;
+    let quantity = args
+        .quantity
+        .as_deref()
+        .map(|q| {
+            Quantity::parse(q).ok_or_else(|| {
+                CliError::BadInput(format!(
+                    "--quantity \"{q}\": give density, z, mass, volume or std_volume"
+                ))
+            })
+        })
+        .transpose()?;
+    let kind = kind_of(&args.file)?;
+    let output = args
+        .output
+        .clone()
+        .unwrap_or_else(|| default_output(&args.file, kind));
+    check_output(&args.file, &output)?;
+    if kind_of(&output)? != kind {
+        return Err(CliError::BadInput(format!(
+            "--output \"{}\" must have the input's kind ({})",
+            output.display(),
+            if kind == Kind::Csv { ".csv" } else { ".xlsx" }
+        )));
+    }
+    let mut source = Source::open(&args.file, args.sheet.as_deref())?;
+    let headers = source.headers().to_vec();
+    let mut map: Mapping = audit_row::map_headers(&headers, &overrides(args.columns.as_deref())?)?;
+    map.prepare_units(ambient);
+    let defaults = Defaults {
+        quantity,
+        basis: args.basis,
+        base,
+        ambient,
+        model: ids[0].clone(),
+        tolerance: tol,
+    };
+    let mut sink = Sink::create(&output, kind)?;
+    let mut head = csv::StringRecord::from(headers.clone());
+    for a in APPENDED {
+        head.push_field(a);
+    }
+    if let Err(e) = sink.write(&head, true) {
+        sink.abandon();
+        return Err(e);
+    }
+    let mut report = AuditReport {
+        tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
+        input: args.file.display().to_string(),
+        sheet: source.sheet().map(str::to_string),
+        output: output.display().to_string(),
+        model: defaults.model.clone(),
+        tolerance: tol,
+        ambient_pressure_pa: ambient,
+        default_base: base.id.to_string(),
+        rows_read: 0,
+        rows_audited: 0,
+        rows_within_tolerance: 0,
+        rows_flagged: 0,
+        rows_bad: 0,
+        largest_deviation_pct: None,
+        causes: BTreeMap::new(),
+        flagged_unexplained: 0,
+        flagged: Vec::new(),
+        bad: Vec::new(),
+        elapsed_s: 0.0,
+        warnings: Vec::new(),
+        caution: crate::CAUTION,
+    };
+    let mut cache = Cache::default();
+    let value_col = map.columns.get(&Field::Value).map(|c| c.index);
+    let width = headers.len();
+    let model_id = defaults.model.clone();
+    // Reading the next chunk overlaps auditing (in parallel) and writing the current one;
+    // chunks stay in order through a bounded channel.
+    let written: Result<Sink, CliError> = std::thread::scope(|scope| {
+        let (tx_in, rx_in) = std::sync::mpsc::sync_channel::<Vec<RawRow>>(1);
+        let source = &mut source;
+        scope.spawn(move || loop {
+            let chunk = source.next_chunk(CHUNK);
+            if chunk.is_empty() || tx_in.send(chunk).is_err() {
+                break;
+            }
+        });
+        for chunk in rx_in {
+            cache.prepare(&chunk, &map, &defaults);
+            let done: Vec<Done> = chunk
+                .into_par_iter()
+                .map(|(row, cells, problem)| {
+                    let outcome = match problem {
+                        Some(b) => Outcome::Bad(b),
+                        None => audit_row::audit_row(row, &cells, &map, &defaults, &cache),
+                    };
+                    let out = annotate(cells, width, &model_id, &outcome);
+                    (row, outcome, out)
+                })
+                .collect();
+            for (row, outcome, out) in done {
+                tally(&mut report, row, &outcome, &out, value_col);
+                if let Err(e) = sink.write(&out, false) {
+                    sink.abandon();
+                    return Err(e);
+                }
+            }
+        }
+        Ok(sink)
+    });
+    let sink = written?;
+    sink.finish()?;
+    if report.rows_flagged > 0 {
+        report.warnings.push(format!(
+            "{} row(s) differ from the recomputation by more than {}%",
+            report.rows_flagged,
+            100.0 * tol
+        ));
+    }
+    if report.rows_bad > 0 {
+        report.warnings.push(format!(
+            "{} row(s) could not be audited (see the bad rows)",
+            report.rows_bad
+        ));
+    }
+    report.elapsed_s = started.elapsed().as_secs_f64();
+    Ok(report)
+}
+
+/// A row audited: its number, the outcome and the annotated cells.
+type Done = (usize, Outcome, csv::StringRecord);
+
+/// Adds one row to the summary.
+fn tally(
+    report: &mut AuditReport,
+    row: usize,
+    outcome: &Outcome,
+    out: &csv::StringRecord,
+    value_col: Option<usize>,
+) {
+    report.rows_read += 1;
+    match outcome {
+        Outcome::Audited {
+            value,
+            deviation,
+            flagged,
+            causes,
+            ..
+        } => {
+            report.rows_audited += 1;
+            let pct = 100.0 * deviation;
+            if !matches!(report.largest_deviation_pct, Some(m) if m.abs() >= pct.abs()) {
+                report.largest_deviation_pct = Some(pct);
+            }
+            if *flagged {
+                report.rows_flagged += 1;
+                if causes.is_empty() {
+                    report.flagged_unexplained += 1;
+                }
+                for c in causes {
+                    *report.causes.entry(c.clone()).or_insert(0) += 1;
+                }
+                if report.flagged.len() < LISTED {
+                    report.flagged.push(FlaggedRow {
+                        row,
+                        sheet_value: value_col
+                            .and_then(|i| out.get(i))
+                            .unwrap_or_default()
+                            .to_string(),
+                        recomputed: *value,
+                        deviation_pct: pct,
+                        reconciling_causes: causes.clone(),
+                    });
+                }
+            } else {
+                report.rows_within_tolerance += 1;
+            }
+        }
+        Outcome::Bad(b) => {
+            report.rows_bad += 1;
+            if report.bad.len() < LISTED {
+                report.bad.push(BadRow {
+                    row: b.row,
+                    column: b.column.clone(),
+                    message: b.message.clone(),
+                });
+            }
+        }
+    }
+}
+
+/// The row as read with the audit's columns appended.
+fn annotate(
+    mut out: csv::StringRecord,
+    width: usize,
+    model: &str,
+    outcome: &Outcome,
+) -> csv::StringRecord {
+    while out.len() < width {
+        out.push_field("");
+    }
+    out.push_field(model);
+    match outcome {
+        Outcome::Audited {
+            value,
+            ideal,
+            deviation,
+            flagged,
+            causes,
+        } => {
+            out.push_field(&format!("{value:e}"));
+            if ideal.is_finite() {
+                out.push_field(&format!("{ideal:e}"));
+                out.push_field(&format!("{:.6}", 100.0 * (ideal - value) / value));
+            } else {
+                out.push_field("");
+                out.push_field("");
+            }
+            out.push_field(&format!("{:.6}", 100.0 * deviation));
+            out.push_field(if *flagged { "FLAG" } else { "ok" });
+            out.push_field(&causes.join("; "));
+            out.push_field("");
+        }
+        Outcome::Bad(b) => {
+            out.push_field("");
+            out.push_field("");
+            out.push_field("");
+            out.push_field("");
+            out.push_field("bad");
+            out.push_field("");
+            out.push_field(&format!(
+                "row {}, column {}: {}",
+                b.row, b.column, b.message
+            ));
+        }
+    }
+    out
+}

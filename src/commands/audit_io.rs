@@ -1,0 +1,347 @@
+//! Reading an audited sheet (CSV streamed in chunks; .xlsx through calamine, with merged
+//! cells found) and writing its annotated copy atomically: a temporary file in the same
+//! folder, renamed over the output only when complete. The input is never written.
+
+use crate::commands::audit_row::{column_letter, BadCell};
+use crate::error::CliError;
+use calamine::{open_workbook, Data, Reader, Xlsx};
+use std::fs::File;
+use std::io::BufReader;
+use std::path::{Path, PathBuf};
+
+/// A row as read: its spreadsheet row number, its cells as text, and a problem found while
+/// reading it (a merged cell, an unreadable record).
+pub type RawRow = (usize, csv::StringRecord, Option<BadCell>);
+
+/// The kind of file.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Kind {
+    Csv,
+    Xlsx,
+}
+
+/// The kind of a path by its extension.
+pub fn kind_of(path: &Path) -> Result<Kind, CliError> {
+    match path
+        .extension()
+        .and_then(|e| e.to_str())
+        .map(str::to_ascii_lowercase)
+        .as_deref()
+    {
+        Some("csv") | Some("txt") => Ok(Kind::Csv),
+        Some("xlsx") | Some("xlsm") => Ok(Kind::Xlsx),
+        _ => Err(CliError::BadInput(format!(
+            "\"{}\": give a .csv or .xlsx file",
+            path.display()
+        ))),
+    }
+}
+
+/// A sheet being read.
+pub enum Source {
+    Csv {
+        reader: csv::Reader<BufReader<File>>,
+        headers: Vec<String>,
+        /// Spreadsheet row number of the next record (one row per record, as a spreadsheet
+        /// program shows a CSV file; the header is row 1).
+        next_row: usize,
+    },
+    Xlsx {
+        headers: Vec<String>,
+        rows: std::vec::IntoIter<RawRow>,
+        sheet: String,
+    },
+}
+
+impl Source {
+    /// Opens `path`; `sheet` names the worksheet of a workbook (default: the first).
+    pub fn open(path: &Path, sheet: Option<&str>) -> Result<Source, CliError> {
+        let err =
+            |e: String| CliError::BadInput(format!("cannot read \"{}\": {e}", path.display()));
+        match kind_of(path)? {
+            Kind::Csv => {
+                let f = File::open(path).map_err(|e| err(e.to_string()))?;
+                let mut reader = csv::ReaderBuilder::new()
+                    .flexible(true)
+                    .has_headers(true)
+                    .from_reader(BufReader::with_capacity(1 << 20, f));
+                let headers = reader
+                    .headers()
+                    .map_err(|e| err(e.to_string()))?
+                    .iter()
+                    .map(|h| h.trim().to_string())
+                    .collect();
+                Ok(Source::Csv {
+                    reader,
+                    headers,
+                    next_row: 2,
+                })
+            }
+            Kind::Xlsx => {
+                let mut wb: Xlsx<_> = open_workbook(path).map_err(|e| err(format!("{e}")))?;
+                let names = wb.sheet_names();
+                let name = match sheet {
+                    Some(s) => names.iter().find(|n| *n == s).cloned().ok_or_else(|| {
+                        err(format!(
+                            "no sheet \"{s}\"; the sheets are: {}",
+                            names.join(", ")
+                        ))
+                    })?,
+                    None => names
+                        .first()
+                        .cloned()
+                        .ok_or_else(|| err("the workbook has no sheet".to_string()))?,
+                };
+                let range = wb.worksheet_range(&name).map_err(|e| err(format!("{e}")))?;
+                let merged = wb
+                    .worksheet_merge_cells(&name)
+                    .transpose()
+                    .map_err(|e| err(format!("{e}")))?
+                    .unwrap_or_default();
+                let (r0, c0) = range.start().unwrap_or((0, 0));
+                let mut all = range.rows().enumerate().map(|(i, r)| {
+                    let abs = r0 as usize + i;
+                    let mut cells: Vec<String> = vec![String::new(); c0 as usize];
+                    cells.extend(r.iter().map(cell_text));
+                    (abs, cells)
+                });
+                let headers = all
+                    .next()
+                    .map(|(_, h)| h.into_iter().map(|s| s.trim().to_string()).collect())
+                    .ok_or_else(|| err(format!("sheet \"{name}\" is empty")))?;
+                let rows: Vec<RawRow> = all
+                    .map(|(abs, cells)| {
+                        let hit = merged.iter().find(|d| {
+                            d.start.0 as usize <= abs && abs <= d.end.0 as usize && d.start != d.end
+                        });
+                        let problem = hit.map(|d| BadCell {
+                            row: abs + 1,
+                            column: column_letter(d.start.1 as usize),
+                            message: format!(
+                                "merged cells {}{}:{}{}",
+                                column_letter(d.start.1 as usize),
+                                d.start.0 + 1,
+                                column_letter(d.end.1 as usize),
+                                d.end.0 + 1
+                            ),
+                        });
+                        (abs + 1, csv::StringRecord::from(cells), problem)
+                    })
+                    .collect();
+                Ok(Source::Xlsx {
+                    headers,
+                    rows: rows.into_iter(),
+                    sheet: name,
+                })
+            }
+        }
+    }
+
+    /// The header row.
+    pub fn headers(&self) -> &[String] {
+        match self {
+            Source::Csv { headers, .. } | Source::Xlsx { headers, .. } => headers,
+        }
+    }
+
+    /// The worksheet read, for a workbook.
+    pub fn sheet(&self) -> Option<&str> {
+        match self {
+            Source::Csv { .. } => None,
+            Source::Xlsx { sheet, .. } => Some(sheet),
+        }
+    }
+
+    /// Up to `n` more rows; empty at the end.
+    pub fn next_chunk(&mut self, n: usize) -> Vec<RawRow> {
+        let mut out = Vec::with_capacity(n);
+        match self {
+            Source::Csv {
+                reader, next_row, ..
+            } => {
+                while out.len() < n {
+                    let line = *next_row;
+                    let mut rec = csv::StringRecord::with_capacity(64, 8);
+                    match reader.read_record(&mut rec) {
+                        Ok(true) => {
+                            *next_row += 1;
+                            out.push((line, rec, None));
+                        }
+                        Ok(false) => break,
+                        Err(e) => {
+                            *next_row += 1;
+                            out.push((
+                                line,
+                                csv::StringRecord::new(),
+                                Some(BadCell {
+                                    row: line,
+                                    column: "-".to_string(),
+                                    message: format!("unreadable record: {e}"),
+                                }),
+                            ));
+                            if !matches!(e.kind(), csv::ErrorKind::Utf8 { .. }) {
+                                break;
+                            }
+                        }
+                    }
+                }
+            }
+            Source::Xlsx { rows, .. } => out.extend(rows.by_ref().take(n)),
+        }
+        out
+    }
+}
+
+/// Text of a workbook cell; numbers in their shortest exact form.
+fn cell_text(d: &Data) -> String {
+    match d {
+        Data::Empty => String::new(),
+        Data::String(s) => s.clone(),
+        Data::Float(f) => format!("{f}"),
+        Data::Int(i) => format!("{i}"),
+        Data::Bool(b) => format!("{b}"),
+        Data::DateTime(t) => format!("{t}"),
+        Data::DateTimeIso(s) | Data::DurationIso(s) => s.clone(),
+        Data::Error(e) => format!("#{e:?}"),
+    }
+}
+
+/// The annotated copy being written to a temporary file.
+pub enum Sink {
+    Csv {
+        writer: Box<csv::Writer<std::io::BufWriter<File>>>,
+        tmp: PathBuf,
+        dest: PathBuf,
+    },
+    Xlsx {
+        sheet: Box<rust_xlsxwriter::Worksheet>,
+        row: u32,
+        tmp: PathBuf,
+        dest: PathBuf,
+    },
+}
+
+/// The temporary path beside `dest`.
+fn tmp_path(dest: &Path) -> PathBuf {
+    let name = dest
+        .file_name()
+        .map_or_else(|| "audit".into(), |n| n.to_string_lossy().to_string());
+    let ext = dest
+        .extension()
+        .map_or_else(String::new, |e| format!(".{}", e.to_string_lossy()));
+    dest.with_file_name(format!(".{name}.{}.tmp{ext}", std::process::id()))
+}
+
+/// Refuses an output that is the input (by canonical path).
+pub fn check_output(input: &Path, output: &Path) -> Result<(), CliError> {
+    let canon_in = std::fs::canonicalize(input).ok();
+    let parent = output
+        .parent()
+        .filter(|p| !p.as_os_str().is_empty())
+        .unwrap_or(Path::new("."));
+    let canon_out = std::fs::canonicalize(parent)
+        .ok()
+        .zip(output.file_name())
+        .map(|(p, n)| p.join(n));
+    if canon_in.is_some() && canon_in == canon_out {
+        return Err(CliError::BadInput(format!(
+            "--output \"{}\" is the input file; the audit never overwrites its input",
+            output.display()
+        )));
+    }
+    Ok(())
+}
+
+fn out_err(e: impl std::fmt::Display) -> CliError {
+    CliError::Output(e.to_string())
+}
+
+impl Sink {
+    /// Starts the copy of kind `kind` bound for `dest`.
+    pub fn create(dest: &Path, kind: Kind) -> Result<Sink, CliError> {
+        let tmp = tmp_path(dest);
+        Ok(match kind {
+            Kind::Csv => {
+                let f = File::create(&tmp).map_err(|e| {
+                    CliError::Output(format!("cannot create \"{}\": {e}", tmp.display()))
+                })?;
+                Sink::Csv {
+                    writer: Box::new(
+                        csv::WriterBuilder::new()
+                            .flexible(true)
+                            .from_writer(std::io::BufWriter::with_capacity(1 << 20, f)),
+                    ),
+                    tmp,
+                    dest: dest.to_path_buf(),
+                }
+            }
+            Kind::Xlsx => Sink::Xlsx {
+                sheet: Box::new(rust_xlsxwriter::Worksheet::new()),
+                row: 0,
+                tmp,
+                dest: dest.to_path_buf(),
+            },
+        })
+    }
+
+    /// Writes one row (numbers as numbers in a workbook; `emphasis` in bold).
+    pub fn write(&mut self, cells: &csv::StringRecord, emphasis: bool) -> Result<(), CliError> {
+        match self {
+            Sink::Csv { writer, .. } => writer.write_record(cells).map_err(out_err),
+            Sink::Xlsx { sheet, row, .. } => {
+                let bold = rust_xlsxwriter::Format::new().set_bold();
+                for (c, text) in cells.iter().enumerate() {
+                    let text = text.to_string();
+                    let c = c as u16;
+                    let r = match text.parse::<f64>() {
+                        Ok(v) if v.is_finite() => sheet.write_number(*row, c, v),
+                        _ if emphasis => sheet.write_string_with_format(*row, c, &text, &bold),
+                        _ => sheet.write_string(*row, c, &text),
+                    };
+                    r.map_err(out_err)?;
+                }
+                *row += 1;
+                Ok(())
+            }
+        }
+    }
+
+    /// Completes the file and renames it over the destination.
+    pub fn finish(self) -> Result<PathBuf, CliError> {
+        let (tmp, dest) = match self {
+            Sink::Csv { writer, tmp, dest } => {
+                let inner = writer.into_inner().map_err(out_err)?;
+                inner
+                    .into_inner()
+                    .map_err(out_err)?
+                    .sync_all()
+                    .map_err(out_err)?;
+                (tmp, dest)
+            }
+            Sink::Xlsx {
+                sheet, tmp, dest, ..
+            } => {
+                let mut wb = rust_xlsxwriter::Workbook::new();
+                wb.push_worksheet(*sheet);
+                if let Err(e) = wb.save(&tmp) {
+                    let _ = std::fs::remove_file(&tmp);
+                    return Err(out_err(e));
+                }
+                (tmp, dest)
+            }
+        };
+        std::fs::rename(&tmp, &dest).map_err(|e| {
+            let _ = std::fs::remove_file(&tmp);
+            CliError::Output(format!("cannot rename to \"{}\": {e}", dest.display()))
+        })?;
+        Ok(dest)
+    }
+
+    /// Removes the temporary file after a failure.
+    pub fn abandon(self) {
+        let tmp = match self {
+            Sink::Csv { tmp, .. } | Sink::Xlsx { tmp, .. } => tmp,
+        };
+        let _ = std::fs::remove_file(tmp);
+    }
+}

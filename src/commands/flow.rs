@@ -1,0 +1,143 @@
+//! `zfactor flow`: one flow of gas as mass, amount, and volume at every named base condition
+//! and at flowing conditions, using each model's Z at each condition.
+
+use crate::cli::{FluidArgs, Format};
+use crate::commands::jobs_common::{self as jc, ctx, molar_flow, per_model, Flow, Pair};
+use crate::error::CliError;
+use crate::feed;
+use crate::report::flow::{FlowInput, FlowReport, FlowResult, VolumeAt};
+use crate::report::jobs_common::Compared;
+use clap::Args;
+use eos::jobs::base_conditions::{molar_volume, NAMED};
+use eos::jobs::BaseConditions;
+use eos::Model;
+
+/// Arguments of `zfactor flow`.
+#[derive(Debug, Args)]
+pub struct FlowArgs {
+    #[command(flatten)]
+    pub fluid: FluidArgs,
+    /// The flow with its unit: "12 kg/s", "50000 Sm3/h", "20 MMscfd", "1500 m3/h" (actual
+    /// volume flows need --temperature and --pressure).
+    #[arg(long)]
+    pub flow: String,
+    /// Base conditions of a standard volume flow (overrides the one its unit implies).
+    #[arg(long)]
+    pub base: Option<String>,
+    /// Flowing temperature (for actual volume flows).
+    #[arg(long, short = 't', allow_hyphen_values = true, requires = "pressure")]
+    pub temperature: Option<String>,
+    /// Flowing pressure (for actual volume flows).
+    #[arg(
+        long,
+        short = 'p',
+        allow_hyphen_values = true,
+        requires = "temperature"
+    )]
+    pub pressure: Option<String>,
+    /// Ambient pressure that gauge readings are referred to.
+    #[arg(long, default_value = "101.325 kPa")]
+    pub ambient: String,
+    /// Model id, a comma-separated list, or "all".
+    #[arg(long, short = 'm', default_value = "all")]
+    pub model: String,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+/// Computes the report.
+pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
+    let feed = feed::read(&args.fluid)?;
+    let amb = jc::ambient(&args.ambient)?;
+    let base = args.base.as_deref().map(|b| jc::base(b, amb)).transpose()?;
+    let flow = jc::flow(&args.flow, "--flow", base)?;
+    let actual = match (&args.temperature, &args.pressure) {
+        (Some(t), Some(p)) => Some((jc::temperature(t)?, jc::pressure(p, amb)?)),
+        _ => None,
+    };
+    if matches!(flow, Flow::Actual(_)) && actual.is_none() {
+        return Err(CliError::BadInput(format!(
+            "--flow \"{}\" is an actual volume flow: give the flowing --temperature and \
+             --pressure",
+            args.flow
+        )));
+    }
+    let x = feed.mole.clone();
+    let (results, warnings) = per_model(&args.model, &feed, |pair| one(pair, flow, actual, &x))?;
+    let (kind, value_si, b) = match flow {
+        Flow::Mass(q) => ("mass", q, None),
+        Flow::Molar(q) => ("molar", q, None),
+        Flow::Actual(q) => ("actual volume", q, None),
+        Flow::Standard(q, b) => ("standard volume", q, Some(b.into())),
+    };
+    Ok(FlowReport {
+        tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
+        fluid: jc::fluid_report(&feed),
+        input: FlowInput {
+            flow: args.flow.clone(),
+            kind,
+            value_si,
+            base: b,
+            actual_temperature_k: actual.map(|a| a.0),
+            actual_pressure_pa: actual.map(|a| a.1),
+            ambient_pressure_pa: amb,
+        },
+        results,
+        warnings,
+        caution: crate::CAUTION,
+    })
+}
+
+fn one(
+    pair: &Pair,
+    flow: Flow,
+    actual: Option<(f64, f64)>,
+    x: &[f64],
+) -> Result<FlowResult, CliError> {
+    let m: &dyn Model = pair.built.model()?;
+    let ig: &dyn Model = &pair.ideal;
+    let e = ctx(&pair.built.id);
+    let at = actual.unwrap_or((f64::NAN, f64::NAN));
+    let n = molar_flow(m, flow, x, at).map_err(&e)?;
+    let ni = molar_flow(ig, flow, x, at).map_err(&e)?;
+    let mm = m.molar_mass(x);
+    let mut conds: Vec<BaseConditions> = NAMED.to_vec();
+    if let Flow::Standard(_, b) = flow {
+        if !NAMED.iter().any(|k| k.id == b.id) {
+            conds.insert(0, b);
+        }
+    }
+    let mut volumes = Vec::new();
+    for b in &conds {
+        let (v, s) = molar_volume(m, b.t, b.p, x).map_err(&e)?;
+        let (vi, _) = molar_volume(ig, b.t, b.p, x).map_err(&e)?;
+        volumes.push(VolumeAt {
+            base: b.id.to_string(),
+            temperature_k: b.t,
+            pressure_pa: b.p,
+            z: s.z,
+            volume_flow_m3_s: Compared::new(n * v, ni * vi),
+        });
+    }
+    if let Some((t, p)) = actual {
+        let (v, s) = molar_volume(m, t, p, x).map_err(&e)?;
+        let (vi, _) = molar_volume(ig, t, p, x).map_err(&e)?;
+        volumes.push(VolumeAt {
+            base: "actual".to_string(),
+            temperature_k: t,
+            pressure_pa: p,
+            z: s.z,
+            volume_flow_m3_s: Compared::new(n * v, ni * vi),
+        });
+    }
+    Ok(FlowResult {
+        model: pair.built.id.clone(),
+        model_name: pair.built.name.clone(),
+        mass_flow_kg_s: n * mm,
+        mass_flow: Compared::new(n * mm, ni * mm),
+        molar_flow_mol_s: Compared::new(n, ni),
+        volumes,
+        notes: pair.built.notes.clone(),
+    })
+}

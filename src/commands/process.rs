@@ -1,0 +1,173 @@
+//! `zfactor process`: a change of state along a named path, per model.
+
+use crate::cli::{FluidArgs, Format};
+use crate::commands::jobs_common::{self as jc, ctx, per_model, Pair};
+use crate::error::CliError;
+use crate::feed;
+use crate::report::jobs_common::{Compared, StateReport};
+use crate::report::process::{ProcessInput, ProcessReport, ProcessResult};
+use clap::{Args, ValueEnum};
+use eos::jobs::process::{run as run_process, End, Path};
+use eos::phase::Phase;
+use eos::Model;
+
+/// The path.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, ValueEnum)]
+pub enum PathArg {
+    /// Constant volume (end at --to-temperature or --to-pressure).
+    Isochoric,
+    /// Constant pressure (end at --to-temperature).
+    Isobaric,
+    /// Constant temperature (end at --to-pressure).
+    Isothermal,
+    /// Constant entropy (end at --to-pressure).
+    Isentropic,
+    /// Constant enthalpy, a throttling valve (end at --to-pressure).
+    Isenthalpic,
+}
+
+/// Arguments of `zfactor process`.
+#[derive(Debug, Args)]
+pub struct ProcessArgs {
+    #[command(flatten)]
+    pub fluid: FluidArgs,
+    /// The path.
+    #[arg(long, value_enum)]
+    pub path: PathArg,
+    /// Start temperature.
+    #[arg(long, short = 't', allow_hyphen_values = true)]
+    pub temperature: String,
+    /// Start pressure, absolute or gauge.
+    #[arg(long, short = 'p', allow_hyphen_values = true)]
+    pub pressure: String,
+    /// End temperature.
+    #[arg(long, allow_hyphen_values = true, conflicts_with = "to_pressure")]
+    pub to_temperature: Option<String>,
+    /// End pressure, absolute or gauge.
+    #[arg(long, allow_hyphen_values = true)]
+    pub to_pressure: Option<String>,
+    /// Ambient pressure that gauge readings are referred to.
+    #[arg(long, default_value = "101.325 kPa")]
+    pub ambient: String,
+    /// Model id, a comma-separated list, or "all".
+    #[arg(long, short = 'm', default_value = "all")]
+    pub model: String,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+/// Computes the report.
+pub fn run(args: &ProcessArgs) -> Result<ProcessReport, CliError> {
+    let feed = feed::read(&args.fluid)?;
+    let amb = jc::ambient(&args.ambient)?;
+    let t1 = jc::temperature(&args.temperature)?;
+    let p1 = jc::pressure(&args.pressure, amb)?;
+    let path = match args.path {
+        PathArg::Isochoric => Path::Isochoric,
+        PathArg::Isobaric => Path::Isobaric,
+        PathArg::Isothermal => Path::Isothermal,
+        PathArg::Isentropic => Path::Isentropic,
+        PathArg::Isenthalpic => Path::Isenthalpic,
+    };
+    let end = match (&args.to_temperature, &args.to_pressure) {
+        (Some(t), None) => End::Temperature(jc::temperature(t)?),
+        (None, Some(p)) => End::Pressure(jc::pressure(p, amb)?),
+        _ => {
+            return Err(CliError::BadInput(
+                "give the end of the path: --to-temperature or --to-pressure".to_string(),
+            ))
+        }
+    };
+    let fits = matches!(
+        (path, end),
+        (Path::Isochoric, _)
+            | (Path::Isobaric, End::Temperature(_))
+            | (
+                Path::Isothermal | Path::Isentropic | Path::Isenthalpic,
+                End::Pressure(_)
+            )
+    );
+    if !fits {
+        let needs = if path == Path::Isobaric {
+            "--to-temperature"
+        } else {
+            "--to-pressure"
+        };
+        return Err(CliError::BadInput(format!(
+            "an {} path ends at a stated {needs}",
+            path.as_str()
+        )));
+    }
+    let x = feed.mole.clone();
+    let (mut results, mut warnings) =
+        per_model(&args.model, &feed, |pair| one(pair, t1, p1, path, end, &x))?;
+    for r in &mut results {
+        for n in &r.notes {
+            if let Some(w) = n.strip_prefix("warning: ") {
+                warnings.push(format!("{}: {w}", r.model));
+            }
+        }
+    }
+    let (et, ep) = match end {
+        End::Temperature(t) => (Some(t), None),
+        End::Pressure(p) => (None, Some(p)),
+    };
+    Ok(ProcessReport {
+        tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
+        fluid: jc::fluid_report(&feed),
+        input: ProcessInput {
+            path: path.as_str(),
+            temperature_k: t1,
+            pressure_pa: p1,
+            end_temperature_k: et,
+            end_pressure_pa: ep,
+            ambient_pressure_pa: amb,
+            convention: "heat into the fluid, work done by the fluid; du = q - w",
+        },
+        results,
+        warnings,
+        caution: crate::CAUTION,
+    })
+}
+
+fn one(
+    pair: &Pair,
+    t1: f64,
+    p1: f64,
+    path: Path,
+    end: End,
+    x: &[f64],
+) -> Result<ProcessResult, CliError> {
+    let m: &dyn Model = pair.built.model()?;
+    let ig: &dyn Model = &pair.ideal;
+    let e = ctx(&pair.built.id);
+    let r = run_process(m, t1, p1, x, path, end).map_err(&e)?;
+    let ri = run_process(ig, t1, p1, x, path, end).map_err(&e)?;
+    let c = Compared::new;
+    let mut notes = pair.built.notes.clone();
+    for (which, s) in [("start", &r.start), ("end", &r.end)] {
+        if s.phase == Phase::TwoPhase {
+            notes.push(format!(
+                "warning: the {which} state is two-phase (vapour mass fraction {:.4})",
+                s.split.as_ref().map_or(f64::NAN, |p| p.vapor_mass_fraction)
+            ));
+        }
+    }
+    Ok(ProcessResult {
+        model: pair.built.id.clone(),
+        model_name: pair.built.name.clone(),
+        start: StateReport::from(&r.start),
+        end: StateReport::from(&r.end),
+        end_temperature_k: c(r.end.t, ri.end.t),
+        end_pressure_pa: c(r.end.p, ri.end.p),
+        heat_j_kg: c(r.heat, ri.heat),
+        work_j_kg: c(r.work, ri.work),
+        flow_work_j_kg: c(r.flow_work, ri.flow_work),
+        delta_u_j_kg: c(r.du, ri.du),
+        delta_h_j_kg: c(r.dh, ri.dh),
+        delta_s_j_kg_k: c(r.ds, ri.ds),
+        delta_t_k: c(r.dt, ri.dt),
+        notes,
+    })
+}

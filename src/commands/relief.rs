@@ -1,0 +1,81 @@
+//! `zfactor relief`: Z, the real-gas isentropic exponent and the molar mass at relieving
+//! conditions, per model, with a warning where Z is outside 0.8 to 1.1.
+
+use crate::cli::{FluidArgs, Format};
+use crate::commands::jobs_common::{self as jc, ctx, per_model, Pair};
+use crate::error::CliError;
+use crate::feed;
+use crate::report::jobs_common::{Compared, StateReport};
+use crate::report::relief::{ReliefInput, ReliefReport, ReliefResult};
+use clap::Args;
+use eos::jobs::relief::{self, Z_RANGE};
+
+/// Arguments of `zfactor relief`.
+#[derive(Debug, Args)]
+pub struct ReliefArgs {
+    #[command(flatten)]
+    pub fluid: FluidArgs,
+    /// Relieving temperature.
+    #[arg(long, short = 't', allow_hyphen_values = true)]
+    pub temperature: String,
+    /// Relieving pressure (set pressure plus overpressure), absolute or gauge.
+    #[arg(long, short = 'p', allow_hyphen_values = true)]
+    pub pressure: String,
+    /// Ambient pressure that gauge readings are referred to.
+    #[arg(long, default_value = "101.325 kPa")]
+    pub ambient: String,
+    /// Model id, a comma-separated list, or "all".
+    #[arg(long, short = 'm', default_value = "all")]
+    pub model: String,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+/// Computes the report.
+pub fn run(args: &ReliefArgs) -> Result<ReliefReport, CliError> {
+    let feed = feed::read(&args.fluid)?;
+    let amb = jc::ambient(&args.ambient)?;
+    let t = jc::temperature(&args.temperature)?;
+    let p = jc::pressure(&args.pressure, amb)?;
+    let x = feed.mole.clone();
+    let (results, mut warnings) = per_model(&args.model, &feed, |pair| one(pair, t, p, &x))?;
+    for r in &results {
+        if r.z_outside_range {
+            warnings.push(format!(
+                "{}: Z = {:.4} is outside {}-{}: ideal-gas relief sizing formulas lose \
+                 accuracy there (common practice); use a real-gas method",
+                r.model, r.z.value, Z_RANGE.0, Z_RANGE.1
+            ));
+        }
+    }
+    Ok(ReliefReport {
+        tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
+        fluid: jc::fluid_report(&feed),
+        input: ReliefInput {
+            temperature_k: t,
+            pressure_pa: p,
+            ambient_pressure_pa: amb,
+            z_range: Z_RANGE,
+        },
+        results,
+        warnings,
+        caution: crate::CAUTION,
+    })
+}
+
+fn one(pair: &Pair, t: f64, p: f64, x: &[f64]) -> Result<ReliefResult, CliError> {
+    let e = ctx(&pair.built.id);
+    let r = relief::at(pair.built.model()?, t, p, x).map_err(&e)?;
+    let ri = relief::at(&pair.ideal, t, p, x).map_err(&e)?;
+    Ok(ReliefResult {
+        model: pair.built.id.clone(),
+        model_name: pair.built.name.clone(),
+        z: Compared::new(r.z, ri.z),
+        isentropic_exponent: Compared::new(r.k_real, ri.k_ideal),
+        molar_mass_kg_mol: r.molar_mass,
+        z_outside_range: r.z_outside_range,
+        state: StateReport::from(&r.state),
+        notes: pair.built.notes.clone(),
+    })
+}

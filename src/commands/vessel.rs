@@ -1,0 +1,329 @@
+//! `zfactor vessel`: what a vessel or cylinder holds, and what happens to it when it is
+//! heated or cooled, drawn down, filled to a rating, topped up or vented.
+
+use crate::cli::{FluidArgs, Format};
+use crate::commands::jobs_common::{self as jc, ctx, per_model, Pair};
+use crate::error::CliError;
+use crate::feed;
+use crate::report::jobs_common::{Compared, StateReport};
+use crate::report::vessel::{
+    Fill, Heating, TargetReport, UsableGas, VentPointReport, VentingReport, VesselInput,
+    VesselReport, VesselResult,
+};
+use crate::units;
+use clap::Args;
+use eos::jobs::base_conditions::molar_volume;
+use eos::jobs::vessel::{self, Target};
+use eos::jobs::BaseConditions;
+use eos::phase::Phase;
+use eos::Model;
+
+/// Arguments of `zfactor vessel`.
+#[derive(Debug, Args)]
+pub struct VesselArgs {
+    #[command(flatten)]
+    pub fluid: FluidArgs,
+    /// Internal volume with its unit: "1 m3", "50 L", "1.5 ft3".
+    #[arg(long)]
+    pub volume: String,
+    /// Temperature of the contents: "15 degC", "300 K".
+    #[arg(long, short = 't', allow_hyphen_values = true)]
+    pub temperature: String,
+    /// Pressure of the contents, absolute or gauge: "200 barg", "3000 psig".
+    #[arg(long, short = 'p', allow_hyphen_values = true)]
+    pub pressure: String,
+    /// Heat or cool the closed vessel to this temperature (fixed volume and mass).
+    #[arg(long, allow_hyphen_values = true)]
+    pub to_temperature: Option<String>,
+    /// Draw gas down to this pressure: the usable gas between the two states.
+    #[arg(long, allow_hyphen_values = true)]
+    pub draw_to_pressure: Option<String>,
+    /// Temperature at the end of the draw-down (default: the starting temperature).
+    #[arg(long, allow_hyphen_values = true)]
+    pub draw_to_temperature: Option<String>,
+    /// Rated (settled) pressure: the fill pressure at --temperature that settles to it.
+    #[arg(long, allow_hyphen_values = true, requires = "rated_temperature")]
+    pub rated_pressure: Option<String>,
+    /// Reference temperature of the rated pressure, e.g. "15 degC".
+    #[arg(long, allow_hyphen_values = true)]
+    pub rated_temperature: Option<String>,
+    /// Target pressure at --temperature: the mass to add or vent to reach it.
+    #[arg(long, allow_hyphen_values = true, conflicts_with = "target_mass")]
+    pub target_pressure: Option<String>,
+    /// Target mass of contents: the mass to add or vent to reach it, e.g. "120 kg".
+    #[arg(long)]
+    pub target_mass: Option<String>,
+    /// Pressure the vessel vents into (default: the ambient pressure).
+    #[arg(long, allow_hyphen_values = true)]
+    pub back_pressure: Option<String>,
+    /// Vent adiabatically and reversibly to this pressure: final gas temperature.
+    #[arg(long, allow_hyphen_values = true)]
+    pub vent_to: Option<String>,
+    /// Minimum design metal temperature to flag the venting temperature against.
+    #[arg(long, allow_hyphen_values = true)]
+    pub mdmt: Option<String>,
+    /// Steps of the venting path (equal steps of ln P).
+    #[arg(long, default_value_t = 50)]
+    pub vent_steps: usize,
+    /// Base conditions of the standard volume: 15degC, 0degC, 20degC, 60degF-14.696psia,
+    /// 60degF-14.73psia, or "T,P".
+    #[arg(long, default_value = "15degC")]
+    pub base: String,
+    /// Ambient pressure that gauge readings are referred to.
+    #[arg(long, default_value = "101.325 kPa")]
+    pub ambient: String,
+    /// Model id, a comma-separated list, or "all".
+    #[arg(long, short = 'm', default_value = "all")]
+    pub model: String,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+/// The inputs in SI.
+struct Input {
+    v: f64,
+    t: f64,
+    p: f64,
+    base: BaseConditions,
+    to_t: Option<f64>,
+    draw: Option<(f64, f64)>,
+    rated: Option<(f64, f64)>,
+    target: Option<Target>,
+    back: f64,
+    vent: Option<f64>,
+    mdmt: Option<f64>,
+    steps: usize,
+}
+
+/// Computes the report.
+pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
+    let feed = feed::read(&args.fluid)?;
+    let amb = jc::ambient(&args.ambient)?;
+    let t = jc::temperature(&args.temperature)?;
+    let opt_t = |s: &Option<String>| s.as_deref().map(jc::temperature).transpose();
+    let opt_p = |s: &Option<String>| s.as_deref().map(|x| jc::pressure(x, amb)).transpose();
+    let input = Input {
+        v: units::volume(&args.volume)?,
+        t,
+        p: jc::pressure(&args.pressure, amb)?,
+        base: jc::base(&args.base, amb)?,
+        to_t: opt_t(&args.to_temperature)?,
+        draw: opt_p(&args.draw_to_pressure)?
+            .map(|p| Ok::<_, CliError>((opt_t(&args.draw_to_temperature)?.unwrap_or(t), p)))
+            .transpose()?,
+        rated: match (
+            opt_p(&args.rated_pressure)?,
+            opt_t(&args.rated_temperature)?,
+        ) {
+            (Some(p), Some(tr)) => Some((p, tr)),
+            _ => None,
+        },
+        target: match (&args.target_pressure, &args.target_mass) {
+            (Some(_), _) => opt_p(&args.target_pressure)?.map(Target::Pressure),
+            (None, Some(m)) => Some(Target::Mass(jc::mass(m, "--target-mass")?)),
+            _ => None,
+        },
+        back: opt_p(&args.back_pressure)?.unwrap_or(amb),
+        vent: opt_p(&args.vent_to)?,
+        mdmt: opt_t(&args.mdmt)?,
+        steps: args.vent_steps,
+    };
+    if input.vent.is_some_and(|p2| p2 >= input.p) {
+        return Err(CliError::BadInput(format!(
+            "--vent-to \"{}\" is not below the vessel pressure \"{}\"",
+            args.vent_to.as_deref().unwrap_or(""),
+            args.pressure
+        )));
+    }
+    if !(1..=10_000).contains(&input.steps) {
+        return Err(CliError::BadInput(format!(
+            "--vent-steps {} is outside 1 to 10000",
+            input.steps
+        )));
+    }
+    let x = feed.mole.clone();
+    let (mut results, mut warnings) = per_model(&args.model, &feed, |pair| one(pair, &input, &x))?;
+    for r in &mut results {
+        for n in &r.notes {
+            if let Some(w) = n.strip_prefix("warning: ") {
+                warnings.push(format!("{}: {w}", r.model));
+            }
+        }
+    }
+    Ok(VesselReport {
+        tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
+        fluid: jc::fluid_report(&feed),
+        input: VesselInput {
+            volume_m3: input.v,
+            temperature_k: input.t,
+            pressure_pa: input.p,
+            ambient_pressure_pa: amb,
+        },
+        base: input.base.into(),
+        results,
+        warnings,
+        caution: crate::CAUTION,
+    })
+}
+
+fn cmp(a: f64, b: f64) -> Compared {
+    Compared::new(a, b)
+}
+
+fn one(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, CliError> {
+    let m: &dyn Model = pair.built.model()?;
+    let ig: &dyn Model = &pair.ideal;
+    let id = pair.built.id.as_str();
+    let e = ctx(id);
+    let inv = vessel::inventory(m, inp.v, inp.t, inp.p, x).map_err(&e)?;
+    let inv_i = vessel::inventory(ig, inp.v, inp.t, inp.p, x).map_err(&e)?;
+    let (vb, _) = molar_volume(m, inp.base.t, inp.base.p, x).map_err(&e)?;
+    let (vb_i, _) = molar_volume(ig, inp.base.t, inp.base.p, x).map_err(&e)?;
+    let mut notes = pair.built.notes.clone();
+    if inv.state.phase == Phase::TwoPhase {
+        notes.push(format!(
+            "warning: the contents are two-phase at the given state (vapour mass fraction {:.4})",
+            inv.state
+                .split
+                .as_ref()
+                .map_or(f64::NAN, |s| s.vapor_mass_fraction)
+        ));
+    }
+    let heating = match inp.to_t {
+        Some(t2) => {
+            let r = vessel::retemper(m, inp.v, inp.t, inp.p, t2, x).map_err(&e)?;
+            let ri = vessel::retemper(ig, inp.v, inp.t, inp.p, t2, x).map_err(&e)?;
+            if r.end.state.phase == Phase::TwoPhase {
+                notes.push(format!(
+                    "warning: at {t2:.2} K the contents condense: vapour mass fraction {:.4}",
+                    r.end
+                        .state
+                        .split
+                        .as_ref()
+                        .map_or(f64::NAN, |s| s.vapor_mass_fraction)
+                ));
+            }
+            Some(Heating {
+                temperature_k: t2,
+                pressure_pa: cmp(r.end.state.p, ri.end.state.p),
+                end_state: StateReport::from(&r.end.state),
+                mass_balance: r.mass_balance,
+            })
+        }
+        None => None,
+    };
+    let usable = match inp.draw {
+        Some((t2, p2)) => {
+            let u = vessel::usable(m, inp.v, (inp.t, inp.p), (t2, p2), x).map_err(&e)?;
+            let ui = vessel::usable(ig, inp.v, (inp.t, inp.p), (t2, p2), x).map_err(&e)?;
+            Some(UsableGas {
+                end_temperature_k: t2,
+                end_pressure_pa: p2,
+                mass_kg: cmp(u.mass, ui.mass),
+                standard_volume_m3: cmp(u.moles * vb, ui.moles * vb_i),
+                end_state: StateReport::from(&u.end.state),
+            })
+        }
+        None => None,
+    };
+    let fill = match inp.rated {
+        Some((pr, tr)) => {
+            let f = vessel::fill_pressure(m, inp.t, pr, tr, x).map_err(&e)?;
+            let fi = vessel::fill_pressure(ig, inp.t, pr, tr, x).map_err(&e)?;
+            Some(Fill {
+                rated_pressure_pa: pr,
+                reference_temperature_k: tr,
+                fill_temperature_k: inp.t,
+                fill_pressure_pa: cmp(f.fill.p, fi.fill.p),
+                fill_state: StateReport::from(&f.fill),
+            })
+        }
+        None => None,
+    };
+    let target = match inp.target {
+        Some(tg) => {
+            let r = vessel::to_target(m, inp.v, inp.t, inp.p, tg, inp.back, x).map_err(&e)?;
+            let ri = vessel::to_target(ig, inp.v, inp.t, inp.p, tg, inp.back, x).map_err(&e)?;
+            let (kind, value) = match tg {
+                Target::Pressure(p) => ("pressure", p),
+                Target::Mass(kg) => ("mass", kg),
+            };
+            Some(TargetReport {
+                target: kind,
+                target_value: value,
+                action: if r.delta_mass >= 0.0 { "add" } else { "vent" },
+                delta_mass_kg: cmp(r.delta_mass, ri.delta_mass),
+                end_pressure_pa: cmp(r.end.state.p, ri.end.state.p),
+                end_state: StateReport::from(&r.end.state),
+            })
+        }
+        None => None,
+    };
+    let venting = match inp.vent {
+        Some(p2) => {
+            let v = vessel::vent_isentropic(m, inp.v, inp.t, inp.p, p2, inp.steps, inp.mdmt, x)
+                .map_err(&e)?;
+            let vi = vessel::vent_isentropic(ig, inp.v, inp.t, inp.p, p2, inp.steps, inp.mdmt, x)
+                .map_err(&e)?;
+            let end = &v.path[v.path.len() - 1];
+            let end_i = &vi.path[vi.path.len() - 1];
+            if v.below_mdmt == Some(true) {
+                notes.push(format!(
+                    "warning: venting to {p2:.0} Pa cools the gas to {:.2} K, below the minimum \
+                     design metal temperature of {:.2} K",
+                    v.t_min,
+                    inp.mdmt.unwrap_or(f64::NAN)
+                ));
+            }
+            if end.state.phase == Phase::TwoPhase {
+                notes.push(
+                    "warning: the vented contents reach the two-phase region (liquid forms)"
+                        .to_string(),
+                );
+            }
+            Some(VentingReport {
+                final_pressure_pa: p2,
+                final_temperature_k: cmp(end.t, end_i.t),
+                min_temperature_k: cmp(v.t_min, vi.t_min),
+                mass_left_kg: cmp(v.mass_left, vi.mass_left),
+                mass_vented_kg: cmp(v.mass_vented, vi.mass_vented),
+                entropy_drift_j_mol_k: v.entropy_drift,
+                mdmt_k: inp.mdmt,
+                below_mdmt: v.below_mdmt,
+                end_state: StateReport::from(&end.state),
+                path: v
+                    .path
+                    .iter()
+                    .map(|pt| VentPointReport {
+                        pressure_pa: pt.p,
+                        temperature_k: pt.t,
+                        mass_kg: pt.mass,
+                        phase: pt.state.phase.to_string(),
+                    })
+                    .collect(),
+            })
+        }
+        None => None,
+    };
+    Ok(VesselResult {
+        model: id.to_string(),
+        model_name: pair.built.name.clone(),
+        state: StateReport::from(&inv.state),
+        mass_kg: inv.mass,
+        mass_ideal_kg: inv_i.mass,
+        mass_ideal_error_pct: Compared::new(inv.mass, inv_i.mass).ideal_error_pct,
+        moles_mol: inv.moles,
+        moles_ideal_mol: inv_i.moles,
+        standard_volume_m3: inv.moles * vb,
+        standard_volume_ideal_m3: inv_i.moles * vb_i,
+        standard_volume_ideal_error_pct: Compared::new(inv.moles * vb, inv_i.moles * vb_i)
+            .ideal_error_pct,
+        heating,
+        usable,
+        fill,
+        target,
+        venting,
+        notes,
+    })
+}

@@ -1,0 +1,171 @@
+//! Terminal table of `zfactor compress`.
+
+use crate::render::jobs::Grid;
+use crate::render::number::sig;
+use crate::report::compress::CompressReport;
+use crate::report::jobs_common::Compared;
+use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
+
+/// The compressor report as text.
+pub fn table(r: &CompressReport) -> String {
+    let i = &r.input;
+    let mut out = format!("{}\n", r.fluid.label);
+    out.push_str(&format!(
+        "suction {} bar abs, {} degC; discharge {} bar abs (ratio {}); {} efficiency {}\n",
+        sig(i.suction_pressure_pa / PA_PER_BAR, 6),
+        sig(i.suction_temperature_k - KELVIN_AT_0_DEGC, 5),
+        sig(i.discharge_pressure_pa / PA_PER_BAR, 6),
+        sig(i.pressure_ratio, 4),
+        i.efficiency_kind,
+        sig(i.efficiency, 4)
+    ));
+    if let Some(f) = &i.flow {
+        out.push_str(&format!("flow {f}"));
+        if let Some(b) = &i.flow_base {
+            out.push_str(&format!(
+                " (base {}: {} K, {} kPa)",
+                b.id,
+                sig(b.temperature_k, 6),
+                sig(b.pressure_pa / 1e3, 6)
+            ));
+        }
+        out.push('\n');
+    }
+    let res = &r.results;
+    let ids: Vec<String> = res.iter().map(|m| m.model.clone()).collect();
+    let mut g = Grid::new(&ids);
+    let col = |f: &dyn Fn(&crate::report::compress::CompressResult) -> Compared| {
+        res.iter().map(|m| Some(f(m))).collect::<Vec<_>>()
+    };
+    let num = |f: &dyn Fn(&crate::report::compress::CompressResult) -> f64| {
+        res.iter().map(|m| Some(f(m))).collect::<Vec<_>>()
+    };
+    g.compared(
+        "discharge temperature",
+        "K",
+        &col(&|m| Compared::new(m.discharge_temperature_k, m.discharge_temperature_ideal_k)),
+        1.0,
+    );
+    g.row(
+        "  discharge phase",
+        "",
+        res.iter().map(|m| m.discharge.phase.clone()).collect(),
+    );
+    g.compared(
+        "specific work h2 - h1",
+        "kJ/kg",
+        &col(&|m| Compared::new(m.specific_work_j_kg, m.specific_work_ideal_j_kg)),
+        1e3,
+    );
+    g.compared(
+        "isentropic head",
+        "kJ/kg",
+        &col(&|m| m.isentropic_head_j_kg),
+        1e3,
+    );
+    g.compared(
+        "polytropic head, path",
+        "kJ/kg",
+        &col(&|m| m.polytropic_head_path_j_kg),
+        1e3,
+    );
+    g.compared(
+        "polytropic head, Schultz",
+        "kJ/kg",
+        &col(&|m| m.polytropic_head_schultz_j_kg),
+        1e3,
+    );
+    g.nums(
+        "Schultz - path",
+        "%",
+        &num(&|m| m.schultz_minus_path_pct),
+        1.0,
+    );
+    g.nums("Schultz f", "-", &num(&|m| m.schultz_f), 1.0);
+    g.nums(
+        "Schultz discharge T",
+        "K",
+        &num(&|m| m.schultz_discharge_temperature_k),
+        1.0,
+    );
+    g.nums(
+        "isentropic efficiency",
+        "-",
+        &num(&|m| m.isentropic_efficiency),
+        1.0,
+    );
+    g.nums(
+        "polytropic efficiency",
+        "-",
+        &num(&|m| m.polytropic_efficiency),
+        1.0,
+    );
+    g.nums("Z suction", "-", &num(&|m| m.z_suction), 1.0);
+    g.nums("Z discharge", "-", &num(&|m| m.z_discharge), 1.0);
+    g.nums(
+        "cp0/cv0 suction (ideal gas)",
+        "-",
+        &num(&|m| m.exponents_suction.ideal_cp_cv),
+        1.0,
+    );
+    g.nums(
+        "k_v suction",
+        "-",
+        &num(&|m| m.exponents_suction.isentropic_volume_exponent),
+        1.0,
+    );
+    g.nums(
+        "k_T suction",
+        "-",
+        &num(&|m| m.exponents_suction.isentropic_temperature_exponent),
+        1.0,
+    );
+    g.nums(
+        "k_v discharge",
+        "-",
+        &num(&|m| m.exponents_discharge.isentropic_volume_exponent),
+        1.0,
+    );
+    g.nums(
+        "k_T discharge",
+        "-",
+        &num(&|m| m.exponents_discharge.isentropic_temperature_exponent),
+        1.0,
+    );
+    g.nums(
+        "T2 shortcut, cp0/cv0",
+        "K",
+        &num(&|m| m.shortcuts[0].discharge_temperature_k),
+        1.0,
+    );
+    g.nums(
+        "T2 shortcut, mean k_T",
+        "K",
+        &num(&|m| m.shortcuts[1].discharge_temperature_k),
+        1.0,
+    );
+    if res.iter().any(|m| m.power_w.is_some()) {
+        let opt = |f: &dyn Fn(&crate::report::compress::CompressResult) -> Option<Compared>| {
+            res.iter().map(f).collect::<Vec<_>>()
+        };
+        g.compared("mass flow", "kg/s", &opt(&|m| m.mass_flow_kg_s), 1.0);
+        g.compared(
+            "actual inlet flow",
+            "m3/h",
+            &opt(&|m| m.actual_inlet_flow_m3_s),
+            1.0 / 3600.0,
+        );
+        g.compared("power (gas)", "kW", &opt(&|m| m.power_w), 1e3);
+    }
+    out.push_str(&g.finish());
+    for m in res {
+        for n in m.notes.iter().filter(|n| !n.starts_with("warning: ")) {
+            out.push_str(&format!("{}: {n}\n", m.model));
+        }
+    }
+    if let Some(m) = res.first() {
+        out.push_str(&format!("method: {}\n", m.method));
+    }
+    out.push_str("ideal-gas error = (ideal-gas answer - model answer) / model answer.\n");
+    out
+}

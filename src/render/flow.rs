@@ -1,0 +1,72 @@
+//! Terminal table of `zfactor flow`.
+
+use crate::render::jobs::Grid;
+use crate::render::number::sig;
+use crate::report::flow::FlowReport;
+
+/// The flow report as text.
+pub fn table(r: &FlowReport) -> String {
+    let mut out = format!("{}\n", r.fluid.label);
+    out.push_str(&format!("flow {} ({})", r.input.flow, r.input.kind));
+    if let Some(b) = &r.input.base {
+        out.push_str(&format!(
+            ", base {} ({} K, {} kPa)",
+            b.id,
+            sig(b.temperature_k, 6),
+            sig(b.pressure_pa / 1e3, 6)
+        ));
+    }
+    out.push('\n');
+    let res = &r.results;
+    let ids: Vec<String> = res.iter().map(|m| m.model.clone()).collect();
+    let mut g = Grid::new(&ids);
+    g.compared(
+        "mass flow",
+        "kg/h",
+        &res.iter().map(|m| Some(m.mass_flow)).collect::<Vec<_>>(),
+        1.0 / 3600.0,
+    );
+    g.compared(
+        "molar flow",
+        "kmol/h",
+        &res.iter()
+            .map(|m| Some(m.molar_flow_mol_s))
+            .collect::<Vec<_>>(),
+        1.0 / 3.6,
+    );
+    if let Some(first) = res.first() {
+        for (k, v) in first.volumes.iter().enumerate() {
+            let name = if v.base == "actual" {
+                format!(
+                    "actual volume flow at {} K, {} kPa",
+                    sig(v.temperature_k, 5),
+                    sig(v.pressure_pa / 1e3, 6)
+                )
+            } else {
+                format!("volume flow at base {}", v.base)
+            };
+            g.compared(
+                &name,
+                "m3/h",
+                &res.iter()
+                    .map(|m| m.volumes.get(k).map(|x| x.volume_flow_m3_s))
+                    .collect::<Vec<_>>(),
+                1.0 / 3600.0,
+            );
+            g.nums(
+                "  Z there",
+                "-",
+                &res.iter()
+                    .map(|m| m.volumes.get(k).map(|x| x.z))
+                    .collect::<Vec<_>>(),
+                1.0,
+            );
+        }
+    }
+    out.push_str(&g.finish());
+    out.push_str(
+        "every volume states its base; Z at each base is the model's own (ideal gas: 1).\n",
+    );
+    out.push_str("ideal-gas error = (ideal-gas answer - model answer) / model answer.\n");
+    out
+}

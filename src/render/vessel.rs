@@ -1,0 +1,173 @@
+//! Terminal table of `zfactor vessel`.
+
+use crate::render::jobs::Grid;
+use crate::render::number::sig;
+use crate::report::vessel::VesselReport;
+use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
+
+/// The vessel report as text.
+pub fn table(r: &VesselReport) -> String {
+    let mut out = format!("{}\n", r.fluid.label);
+    let i = &r.input;
+    out.push_str(&format!(
+        "vessel {} m3 at {} K ({} degC), {} bar abs; standard volume at {} ({} K, {} kPa)\n",
+        sig(i.volume_m3, 6),
+        sig(i.temperature_k, 6),
+        sig(i.temperature_k - KELVIN_AT_0_DEGC, 5),
+        sig(i.pressure_pa / PA_PER_BAR, 6),
+        r.base.id,
+        sig(r.base.temperature_k, 6),
+        sig(r.base.pressure_pa / 1e3, 6)
+    ));
+    let res = &r.results;
+    let ids: Vec<String> = res.iter().map(|m| m.model.clone()).collect();
+    let mut g = Grid::new(&ids);
+    g.row(
+        "phase",
+        "",
+        res.iter().map(|m| m.state.phase.clone()).collect(),
+    );
+    g.nums(
+        "Z",
+        "-",
+        &res.iter().map(|m| Some(m.state.z)).collect::<Vec<_>>(),
+        1.0,
+    );
+    let c = |v: f64, i: f64| Some(crate::report::jobs_common::Compared::new(v, i));
+    g.compared(
+        "mass",
+        "kg",
+        &res.iter()
+            .map(|m| c(m.mass_kg, m.mass_ideal_kg))
+            .collect::<Vec<_>>(),
+        1.0,
+    );
+    g.compared(
+        "standard volume",
+        "m3",
+        &res.iter()
+            .map(|m| c(m.standard_volume_m3, m.standard_volume_ideal_m3))
+            .collect::<Vec<_>>(),
+        1.0,
+    );
+    if res.iter().any(|m| m.heating.is_some()) {
+        let t2 = res
+            .iter()
+            .find_map(|m| m.heating.as_ref())
+            .map_or(0.0, |h| h.temperature_k);
+        g.compared(
+            &format!("pressure at {} degC", sig(t2 - KELVIN_AT_0_DEGC, 4)),
+            "bar abs",
+            &res.iter()
+                .map(|m| m.heating.as_ref().map(|h| h.pressure_pa))
+                .collect::<Vec<_>>(),
+            PA_PER_BAR,
+        );
+        g.row(
+            "  phase there",
+            "",
+            res.iter()
+                .map(|m| {
+                    m.heating
+                        .as_ref()
+                        .map_or("-".into(), |h| h.end_state.phase.clone())
+                })
+                .collect(),
+        );
+        g.nums(
+            "  vapour mass fraction",
+            "-",
+            &res.iter()
+                .map(|m| {
+                    m.heating
+                        .as_ref()
+                        .and_then(|h| h.end_state.vapor_mass_fraction)
+                })
+                .collect::<Vec<_>>(),
+            1.0,
+        );
+    }
+    if res.iter().any(|m| m.usable.is_some()) {
+        g.compared(
+            "usable gas",
+            "kg",
+            &res.iter()
+                .map(|m| m.usable.as_ref().map(|u| u.mass_kg))
+                .collect::<Vec<_>>(),
+            1.0,
+        );
+        g.compared(
+            "usable gas, standard volume",
+            "m3",
+            &res.iter()
+                .map(|m| m.usable.as_ref().map(|u| u.standard_volume_m3))
+                .collect::<Vec<_>>(),
+            1.0,
+        );
+    }
+    if res.iter().any(|m| m.fill.is_some()) {
+        g.compared(
+            "fill pressure now",
+            "bar abs",
+            &res.iter()
+                .map(|m| m.fill.as_ref().map(|f| f.fill_pressure_pa))
+                .collect::<Vec<_>>(),
+            PA_PER_BAR,
+        );
+    }
+    if res.iter().any(|m| m.target.is_some()) {
+        g.compared(
+            "mass to add (+) / vent (-)",
+            "kg",
+            &res.iter()
+                .map(|m| m.target.as_ref().map(|t| t.delta_mass_kg))
+                .collect::<Vec<_>>(),
+            1.0,
+        );
+    }
+    if res.iter().any(|m| m.venting.is_some()) {
+        let v = |f: &dyn Fn(
+            &crate::report::vessel::VentingReport,
+        ) -> crate::report::jobs_common::Compared| {
+            res.iter()
+                .map(|m| m.venting.as_ref().map(f))
+                .collect::<Vec<_>>()
+        };
+        g.compared(
+            "vented: final gas temperature",
+            "K",
+            &v(&|x| x.final_temperature_k),
+            1.0,
+        );
+        g.compared(
+            "vented: lowest temperature",
+            "K",
+            &v(&|x| x.min_temperature_k),
+            1.0,
+        );
+        g.compared("vented: mass left", "kg", &v(&|x| x.mass_left_kg), 1.0);
+        g.row(
+            "  below MDMT",
+            "",
+            res.iter()
+                .map(|m| {
+                    m.venting
+                        .as_ref()
+                        .and_then(|x| x.below_mdmt)
+                        .map_or(
+                            "-".to_string(),
+                            |b| if b { "YES".into() } else { "no".into() },
+                        )
+                })
+                .collect(),
+        );
+    }
+    out.push_str(&g.finish());
+    for m in res {
+        for n in m.notes.iter().filter(|n| !n.starts_with("warning: ")) {
+            out.push_str(&format!("{}: {n}\n", m.model));
+        }
+    }
+    out.push_str("ideal-gas error = (ideal-gas answer - model answer) / model answer.\n");
+    out
+}
