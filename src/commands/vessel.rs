@@ -178,9 +178,20 @@ fn one(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, CliError> {
     let e = ctx(id);
     let inv = vessel::inventory(m, inp.v, inp.t, inp.p, x).map_err(&e)?;
     let inv_i = vessel::inventory(ig, inp.v, inp.t, inp.p, x).map_err(&e)?;
-    let (vb, _) = molar_volume(m, inp.base.t, inp.base.p, x).map_err(&e)?;
+    let (vb, base_state) = molar_volume(m, inp.base.t, inp.base.p, x).map_err(&e)?;
     let (vb_i, _) = molar_volume(ig, inp.base.t, inp.base.p, x).map_err(&e)?;
     let mut notes = pair.built.notes.clone();
+    if matches!(
+        base_state.phase,
+        Phase::Liquid | Phase::TwoPhase | Phase::SaturatedLiquid
+    ) {
+        notes.push(format!(
+            "warning: at the base conditions the fluid is {} with this model, so its \
+             standard volume is that of a condensed fluid, not of a gas; a gas standard volume \
+             is not meaningful for it",
+            base_state.phase
+        ));
+    }
     if inv.state.phase == Phase::TwoPhase {
         notes.push(format!(
             "warning: the contents are two-phase at the given state (vapour mass fraction {:.4})",
