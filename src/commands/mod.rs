@@ -2,6 +2,8 @@
 
 pub mod compare;
 pub mod demo;
+pub mod envelope;
+pub mod flash;
 pub mod fluids;
 pub mod state;
 pub mod table;
@@ -26,6 +28,8 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
         Command::Demo(args) => demo::run(args),
         Command::Compare(args) => compare::dispatch(args),
         Command::Table(args) => table::run(args),
+        Command::Flash(args) => flash::dispatch(args),
+        Command::Envelope(args) => envelope::dispatch(args),
     }
 }
 

@@ -4,6 +4,9 @@
 pub mod chart;
 pub mod compare;
 pub mod csv;
+pub mod envelope;
+pub mod envelope_chart;
+pub mod flash;
 pub mod grid_table;
 pub mod json;
 pub mod number;
