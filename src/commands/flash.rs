@@ -90,6 +90,37 @@ pub fn check_triple_points(feed: &Feed, t: f64, what: &str) -> Result<(), CliErr
     Ok(())
 }
 
+/// How far outside its fitted range (as a fraction of the range end) a heat-capacity
+/// polynomial is extrapolated before the result carries a warning rather than a note (the
+/// rule of `zfactor state`).
+const CP_EXTRAPOLATION_NOTE: f64 = 0.1;
+
+/// Notes and warnings for ideal-gas heat capacities used outside their fitted range at T:
+/// (notes, warnings). Only enthalpy and entropy (and so the (P, h), (P, s) flashes) depend
+/// on them.
+fn cp_extrapolation(feed: &Feed, t: f64) -> (Vec<String>, Vec<String>) {
+    let (mut notes, mut warnings) = (Vec::new(), Vec::new());
+    for r in &feed.records {
+        let (lo, hi) = r.cp_range_k;
+        if t < lo || t > hi {
+            let text = format!(
+                "the ideal-gas heat capacity of {} is fitted from {lo} K to {hi} K and is \
+                 extrapolated to {t:.2} K: enthalpy and entropy are less certain (the phase \
+                 split at given T and P is not affected)",
+                r.name
+            );
+            let near =
+                t >= lo * (1.0 - CP_EXTRAPOLATION_NOTE) && t <= hi * (1.0 + CP_EXTRAPOLATION_NOTE);
+            if near {
+                notes.push(text);
+            } else {
+                warnings.push(text);
+            }
+        }
+    }
+    (notes, warnings)
+}
+
 /// Reads the specification from the arguments.
 fn spec(args: &FlashArgs, feed: &Feed, ambient: f64) -> Result<Spec, CliError> {
     let t = args
@@ -186,15 +217,12 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
         results.push(r);
     }
     let mut warnings = Vec::new();
-    if let Some(t) = results.first().map(|r| r.temperature_k) {
-        for r in &feed.records {
-            let (lo, hi) = r.cp_range_k;
-            if (t < lo || t > hi) && !matches!(spec, Spec::Tp(..)) {
-                warnings.push(format!(
-                    "the ideal-gas heat capacity of {} is fitted from {lo} K to {hi} K and is \
-                     extrapolated to {t:.2} K: enthalpy and entropy are less certain",
-                    r.name
-                ));
+    for r in &mut results {
+        let (notes, more) = cp_extrapolation(&feed, r.temperature_k);
+        r.notes.extend(notes);
+        for w in more {
+            if !warnings.contains(&w) {
+                warnings.push(w);
             }
         }
     }
