@@ -221,6 +221,37 @@ impl Cubic {
 
     /// The density integral D(rho) = int_0^rho dr / ((1 + d1 b r)(1 + d2 b r)) with
     /// rho D' and rho^2 D''.
+    /// a and b of the mixture at T without their temperature derivatives (for the density
+    /// roots and ln phi, which need none): the same operations in the same order as
+    /// [`Cubic::mix`], so the values are identical, at a third of the inner-loop work.
+    fn mix_ab(&self, t: f64, x: &[f64], mut sum_a: Option<&mut [f64]>) -> (f64, f64) {
+        let n = self.comps.len();
+        let mut s = [0.0; MAX_COMPONENTS];
+        for (i, si) in s[..n].iter_mut().enumerate() {
+            *si = self.sqrt_ac[i]
+                * self
+                    .spec
+                    .alpha
+                    .sqrt_alpha(t / self.comps[i].tc, self.m[i])
+                    .s;
+        }
+        let (mut a, mut b) = (0.0, 0.0);
+        for i in 0..n {
+            let row = &self.one_minus_k[i * n..(i + 1) * n];
+            let mut ra = 0.0;
+            for j in 0..n {
+                ra += x[j] * row[j] * s[j];
+            }
+            let ai = s[i] * ra;
+            if let Some(out) = sum_a.as_deref_mut() {
+                out[i] = ai;
+            }
+            a += x[i] * ai;
+            b += x[i] * self.b[i];
+        }
+        (a, b)
+    }
+
     #[inline]
     fn d_integral(&self, b: f64, rho: f64) -> (f64, f64, f64) {
         let (d1, d2) = (self.spec.d1, self.spec.d2);
@@ -268,7 +299,13 @@ impl Model for Cubic {
     fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]) {
         let n = self.comps.len();
         let mut sum_a = [0.0; MAX_COMPONENTS];
-        let mp = self.mix(t, x, Some(&mut sum_a[..n]));
+        let (a, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
+        let mp = MixParams {
+            a,
+            a_t: 0.0,
+            a_tt: 0.0,
+            b,
+        };
         let rt = R * t;
         let eta = mp.b * rho;
         let (d, rd1, _) = self.d_integral(mp.b, rho);
@@ -282,7 +319,13 @@ impl Model for Cubic {
     }
 
     fn densities(&self, t: f64, p: f64, x: &[f64]) -> DensityRoots {
-        let mp = self.mix(t, x, None);
+        let (a, b) = self.mix_ab(t, x, None);
+        let mp = MixParams {
+            a,
+            a_t: 0.0,
+            a_tt: 0.0,
+            b,
+        };
         let rt = R * t;
         let aa = mp.a * p / (rt * rt);
         let bb = mp.b * p / rt;
