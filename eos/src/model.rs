@@ -52,6 +52,15 @@ pub trait Model: Send + Sync {
     /// (mol/m3) and mole fractions x.
     fn residual(&self, t: f64, rho: f64, x: &[f64]) -> Residual;
 
+    /// The reduced residual Helmholtz energy alpha and the compressibility factor Z = 1 +
+    /// a_d at (T, rho, x): all that choosing a density root by its Gibbs energy needs.
+    /// Default: from [`Model::residual`]; a model may compute them more cheaply (the values
+    /// must be the same).
+    fn alpha_z(&self, t: f64, rho: f64, x: &[f64]) -> (f64, f64) {
+        let r = self.residual(t, rho, x);
+        (r.a, r.z())
+    }
+
     /// Natural logarithm of each component's fugacity coefficient at (T, rho, x), into `out`.
     fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]);
 

@@ -296,6 +296,17 @@ impl Model for Cubic {
         }
     }
 
+    fn alpha_z(&self, t: f64, rho: f64, x: &[f64]) -> (f64, f64) {
+        // The a and a_d of `residual`, without the temperature derivatives of a.
+        let (a, b) = self.mix_ab(t, x, None);
+        let rt = R * t;
+        let eta = b * rho;
+        let (d, rd1, _) = self.d_integral(b, rho);
+        let f = a / rt;
+        let one_eta = 1.0 - eta;
+        (-one_eta.ln() - f * d, 1.0 + (eta / one_eta - f * rd1))
+    }
+
     fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]) {
         let n = self.comps.len();
         let mut sum_a = [0.0; MAX_COMPONENTS];

@@ -26,6 +26,11 @@ use crate::model::Model;
 /// Most components the equilibrium solvers accept (the size of their stack work arrays).
 pub const MAX_COMPONENTS: usize = 64;
 
+/// Up to this many components the Newton solvers keep their n x n matrices in stack arrays
+/// of SMALL_COMPONENTS^2 entries (zeroing a 64 x 64 array costs as much as a few fugacity
+/// evaluations); larger mixtures use MAX_COMPONENTS^2.
+pub const SMALL_COMPONENTS: usize = 16;
+
 /// Which density root a phase takes.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub enum RootSel {
@@ -71,9 +76,9 @@ pub fn normalise(n: &[f64], x: &mut [f64]) -> Option<f64> {
 /// large terms), and the model's own Z.
 #[inline]
 fn g_res(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -> (f64, f64, f64) {
-    let r = model.residual(t, rho, x);
+    let (a, z_model) = model.alpha_z(t, rho, x);
     let z = p / (rho * R * t);
-    (r.a + z - 1.0 - z.ln(), z, r.z())
+    (a + z - 1.0 - z.ln(), z, z_model)
 }
 
 /// ln phi of every component of a phase with mole numbers (or fractions) `n` at (T, P), into

@@ -23,7 +23,7 @@
 //! with s_i = ln W_i + ln phi_i - d_i, with a halving line search on tm. A trial that
 //! approaches the feed composition (the trivial solution) is dropped.
 
-use super::phase_eval::{dlnphi_dn, ln_phi_tp, RootSel, MAX_COMPONENTS};
+use super::phase_eval::{dlnphi_dn, ln_phi_tp, RootSel, MAX_COMPONENTS, SMALL_COMPONENTS};
 use super::{dense, wilson};
 use crate::composition;
 use crate::error::{positive, Error, Result};
@@ -320,11 +320,16 @@ fn run_trial(
             };
         }
     }
-    newton(model, t, p, z, d, w, its)
+    if n <= SMALL_COMPONENTS {
+        newton::<{ SMALL_COMPONENTS * SMALL_COMPONENTS }>(model, t, p, z, d, w, its)
+    } else {
+        newton::<{ MAX_COMPONENTS * MAX_COMPONENTS }>(model, t, p, z, d, w, its)
+    }
 }
 
-/// Newton's method on tm in alpha_i = 2 sqrt(W_i), with a halving line search.
-fn newton(
+/// Newton's method on tm in alpha_i = 2 sqrt(W_i), with a halving line search; `NN` >= n^2
+/// is the size of the matrix work arrays.
+fn newton<const NN: usize>(
     model: &dyn Model,
     t: f64,
     p: f64,
@@ -343,8 +348,8 @@ fn newton(
         }
     }
     let mut lnphi = [0.0; MAX_COMPONENTS];
-    let mut jac = [0.0; MAX_COMPONENTS * MAX_COMPONENTS];
-    let mut h = [0.0; MAX_COMPONENTS * MAX_COMPONENTS];
+    let mut jac = [0.0; NN];
+    let mut h = [0.0; NN];
     let mut g = [0.0; MAX_COMPONENTS];
     let mut wt = [0.0; MAX_COMPONENTS];
     let mut lt = [0.0; MAX_COMPONENTS];
