@@ -124,12 +124,11 @@ pub fn run(args: &EnvelopeArgs) -> Result<EnvelopeReport, CliError> {
         )));
     }
     let id = &ids[0];
-    if id == "ideal" {
-        return Err(CliError::BadInput(
-            "model ideal: the ideal gas never condenses, so it has no phase envelope; choose \
-             a model such as pr or srk"
-                .to_string(),
-        ));
+    if crate::commands::flash::GAS_ONLY.contains(&id.as_str()) {
+        return Err(CliError::BadInput(format!(
+            "model {id} describes the gas only and never condenses (it has no liquid root), so \
+             it has no phase envelope or vapour-pressure curve; choose a model such as pr or srk"
+        )));
     }
     let built = models::build(id, &feed)?;
     let Some(m) = built.helmholtz() else {

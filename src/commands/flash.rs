@@ -20,6 +20,9 @@ use eos::equilibrium::{
 use eos::properties::{evaluate, Properties};
 use eos::Model;
 
+/// Models without a liquid root: the ideal gas and the virial equation truncated after B.
+pub const GAS_ONLY: [&str; 2] = ["ideal", "virial"];
+
 /// What fixes the state, in SI.
 #[derive(Debug, Clone, Copy)]
 pub enum Spec {
@@ -196,7 +199,19 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
     if let Spec::Tp(t, _) | Spec::PointAtT(_, t) = spec {
         check_triple_points(&feed, t, "the temperature")?;
     }
-    let ids = models::resolve_ids(&args.model, &feed)?;
+    let mut ids = models::resolve_ids(&args.model, &feed)?;
+    if args.model.trim().eq_ignore_ascii_case("all") {
+        // "all" means every model that can show two phases: the ideal gas never condenses.
+        ids.retain(|id| id != "ideal");
+    }
+    if matches!(spec, Spec::PointAtT(..) | Spec::PointAtP(..)) {
+        if let Some(id) = ids.iter().find(|id| GAS_ONLY.contains(&id.as_str())) {
+            return Err(CliError::BadInput(format!(
+                "model {id} describes the gas only (it has no liquid root), so it has no \
+                 bubble or dew points; choose a model such as pr or srk"
+            )));
+        }
+    }
     let mut built = Vec::new();
     for id in &ids {
         let b = models::build(id, &feed)?;
