@@ -245,6 +245,10 @@ fn bad_input_is_refused_with_exit_code_2() {
     );
     refused(&["envelope", "--mix", GAS, "-m", "pr,srk"], "one model");
     refused(
+        &["envelope", "--mix", GAS, "--start-pressure", "200 bar"],
+        "above the cricondenbar",
+    );
+    refused(
         &["envelope", "--mix", GAS, "-m", "dak"],
         "no Helmholtz energy",
     );

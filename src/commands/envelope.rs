@@ -207,7 +207,30 @@ fn mixture(
         ..EnvelopeOptions::default()
     };
     let ctx = format!("model {}: tracing the envelope", built.id);
-    let env = envelope::trace(m, z, options).map_err(|e| from_eos(&ctx, e))?;
+    let env = match envelope::trace(m, z, options) {
+        Ok(e) => e,
+        Err(e) => {
+            // A start above the cricondenbar has no dew point to start from: say so, with the
+            // cricondenbar of the envelope traced from the default start.
+            let default = EnvelopeOptions::default();
+            if p_start > default.p_start {
+                if let Ok(full) = envelope::trace(m, z, default) {
+                    if p_start > full.cricondenbar.p {
+                        return Err(CliError::BadInput(format!(
+                            "--start-pressure {:.4} bar is above the cricondenbar of this \
+                             mixture ({:.4} bar at {:.2} K with model {}): there is no dew \
+                             point to start from; give a lower pressure",
+                            p_start / units::PA_PER_BAR,
+                            full.cricondenbar.p / units::PA_PER_BAR,
+                            full.cricondenbar.t,
+                            built.id
+                        )));
+                    }
+                }
+            }
+            return Err(from_eos(&ctx, e));
+        }
+    };
     let mm = m.molar_mass(z);
     for pt in &env.points {
         let mi = m.molar_mass(&pt.incipient);
