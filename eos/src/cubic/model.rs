@@ -6,6 +6,7 @@ use super::spec::{CriticalConstants, CubicSpec};
 use super::CubicKind;
 use crate::component::Component;
 use crate::constants::R;
+use crate::equilibrium::phase_eval::{select_root, PhaseAt, RootSel};
 use crate::error::{Error, Result};
 use crate::model::{DensityRoots, Model};
 use crate::residual::Residual;
@@ -252,6 +253,52 @@ impl Cubic {
         (a, b)
     }
 
+    /// The density roots at (T, P) for mixture parameters a and b (see [`Cubic::mix_ab`]).
+    fn roots_from(&self, a: f64, b: f64, t: f64, p: f64) -> DensityRoots {
+        let rt = R * t;
+        let aa = a * p / (rt * rt);
+        let bb = b * p / rt;
+        let (u, w) = (self.spec.d1 + self.spec.d2, self.spec.d1 * self.spec.d2);
+        let c2 = (u - 1.0) * bb - 1.0;
+        let c1 = aa + (w - u) * bb * bb - u * bb;
+        let c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
+        let roots = solve_cubic(c2, c1, c0);
+        let mut rho = [0.0; 3];
+        let mut k = 0;
+        for &z in roots.as_slice() {
+            if z > bb {
+                rho[k] = p / (z * rt);
+                k += 1;
+            }
+        }
+        DensityRoots::from_slice(&rho[..k])
+    }
+
+    /// alpha and Z = 1 + a_d at (T, rho) for mixture parameters a and b: the `a` and `a_d`
+    /// of [`Model::residual`], without the temperature derivatives.
+    fn alpha_z_from(&self, a: f64, b: f64, t: f64, rho: f64) -> (f64, f64) {
+        let rt = R * t;
+        let eta = b * rho;
+        let (d, rd1, _) = self.d_integral(b, rho);
+        let f = a / rt;
+        let one_eta = 1.0 - eta;
+        (-one_eta.ln() - f * d, 1.0 + (eta / one_eta - f * rd1))
+    }
+
+    /// ln phi at (T, rho) for mixture parameters a, b and sum_j x_j a_ij (`sum_a`).
+    fn ln_phi_from(&self, a: f64, b: f64, sum_a: &[f64], t: f64, rho: f64, out: &mut [f64]) {
+        let rt = R * t;
+        let eta = b * rho;
+        let (d, rd1, _) = self.d_integral(b, rho);
+        let f = a / rt;
+        let z = 1.0 + eta / (1.0 - eta) - f * rd1;
+        let ln_z_b = z.ln() + (1.0 - eta).ln();
+        for (i, o) in out.iter_mut().enumerate().take(self.comps.len()) {
+            let bi_b = self.b[i] / b;
+            *o = bi_b * (z - 1.0) - ln_z_b - f * d * (2.0 * sum_a[i] / a - bi_b);
+        }
+    }
+
     #[inline]
     fn d_integral(&self, b: f64, rho: f64) -> (f64, f64, f64) {
         let (d1, d2) = (self.spec.d1, self.spec.d2);
@@ -297,63 +344,45 @@ impl Model for Cubic {
     }
 
     fn alpha_z(&self, t: f64, rho: f64, x: &[f64]) -> (f64, f64) {
-        // The a and a_d of `residual`, without the temperature derivatives of a.
         let (a, b) = self.mix_ab(t, x, None);
-        let rt = R * t;
-        let eta = b * rho;
-        let (d, rd1, _) = self.d_integral(b, rho);
-        let f = a / rt;
-        let one_eta = 1.0 - eta;
-        (-one_eta.ln() - f * d, 1.0 + (eta / one_eta - f * rd1))
+        self.alpha_z_from(a, b, t, rho)
+    }
+
+    fn ln_phi_at_tp(
+        &self,
+        t: f64,
+        p: f64,
+        x: &[f64],
+        sel: RootSel,
+        out: &mut [f64],
+    ) -> Option<PhaseAt> {
+        // One mixing sum for the roots, the root choice and ln phi (the values are those of
+        // densities, alpha_z and ln_phi called one by one).
+        let n = self.comps.len();
+        let mut sum_a = [0.0; MAX_COMPONENTS];
+        let (a, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
+        let roots = self.roots_from(a, b, t, p);
+        select_root(
+            t,
+            p,
+            roots.as_slice(),
+            sel,
+            |rho| self.alpha_z_from(a, b, t, rho),
+            |rho, out| self.ln_phi_from(a, b, &sum_a[..n], t, rho, out),
+            out,
+        )
     }
 
     fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]) {
         let n = self.comps.len();
         let mut sum_a = [0.0; MAX_COMPONENTS];
         let (a, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
-        let mp = MixParams {
-            a,
-            a_t: 0.0,
-            a_tt: 0.0,
-            b,
-        };
-        let rt = R * t;
-        let eta = mp.b * rho;
-        let (d, rd1, _) = self.d_integral(mp.b, rho);
-        let f = mp.a / rt;
-        let z = 1.0 + eta / (1.0 - eta) - f * rd1;
-        let ln_z_b = z.ln() + (1.0 - eta).ln();
-        for i in 0..n {
-            let bi_b = self.b[i] / mp.b;
-            out[i] = bi_b * (z - 1.0) - ln_z_b - f * d * (2.0 * sum_a[i] / mp.a - bi_b);
-        }
+        self.ln_phi_from(a, b, &sum_a[..n], t, rho, out);
     }
 
     fn densities(&self, t: f64, p: f64, x: &[f64]) -> DensityRoots {
         let (a, b) = self.mix_ab(t, x, None);
-        let mp = MixParams {
-            a,
-            a_t: 0.0,
-            a_tt: 0.0,
-            b,
-        };
-        let rt = R * t;
-        let aa = mp.a * p / (rt * rt);
-        let bb = mp.b * p / rt;
-        let (u, w) = (self.spec.d1 + self.spec.d2, self.spec.d1 * self.spec.d2);
-        let c2 = (u - 1.0) * bb - 1.0;
-        let c1 = aa + (w - u) * bb * bb - u * bb;
-        let c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
-        let roots = solve_cubic(c2, c1, c0);
-        let mut rho = [0.0; 3];
-        let mut k = 0;
-        for &z in roots.as_slice() {
-            if z > bb {
-                rho[k] = p / (z * rt);
-                k += 1;
-            }
-        }
-        DensityRoots::from_slice(&rho[..k])
+        self.roots_from(a, b, t, p)
     }
 
     fn max_density(&self, x: &[f64]) -> f64 {

@@ -71,18 +71,9 @@ pub fn normalise(n: &[f64], x: &mut [f64]) -> Option<f64> {
     Some(total)
 }
 
-/// g_res/RT of a root at pressure p, with Z = P/(rho R T) taken from the given pressure (not
-/// from the model's Z, which for a dense liquid at low pressure is a small difference of
-/// large terms), and the model's own Z.
-#[inline]
-fn g_res(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -> (f64, f64, f64) {
-    let (a, z_model) = model.alpha_z(t, rho, x);
-    let z = p / (rho * R * t);
-    (a + z - 1.0 - z.ln(), z, z_model)
-}
-
 /// ln phi of every component of a phase with mole numbers (or fractions) `n` at (T, P), into
 /// `out`. Returns `None` when the model has no density root or the amounts are not usable.
+/// The work is done by [`Model::ln_phi_at_tp`] (by default [`ln_phi_at_tp_generic`]).
 pub fn ln_phi_tp(
     model: &dyn Model,
     t: f64,
@@ -95,14 +86,52 @@ pub fn ln_phi_tp(
     let mut xb = [0.0; MAX_COMPONENTS];
     let x = &mut xb[..nc];
     normalise(n, x)?;
+    model.ln_phi_at_tp(t, p, x, sel, out)
+}
+
+/// ln phi at (T, P) and mole fractions `x` through the model's density roots, alpha and Z
+/// ([`Model::alpha_z`]) and ln phi at (T, rho): the default of [`Model::ln_phi_at_tp`].
+pub fn ln_phi_at_tp_generic<M: Model + ?Sized>(
+    model: &M,
+    t: f64,
+    p: f64,
+    x: &[f64],
+    sel: RootSel,
+    out: &mut [f64],
+) -> Option<PhaseAt> {
     let roots = model.densities(t, p, x);
-    let r = roots.as_slice();
+    select_root(
+        t,
+        p,
+        roots.as_slice(),
+        sel,
+        |rho| model.alpha_z(t, rho, x),
+        |rho, out| model.ln_phi(t, rho, x, out),
+        out,
+    )
+}
+
+/// Chooses the root `sel` among the density roots `r` at (T, P), then fills `out` with ln
+/// phi there. `alpha_z(rho)` gives the model's alpha and Z, `ln_phi(rho, out)` its ln phi at
+/// (T, rho); the Gibbs energy of a root is g_res/RT = alpha + Z - 1 - ln Z with Z =
+/// P/(rho R T) taken from the given pressure (not from the model's Z, which for a dense
+/// liquid at low pressure is a small difference of large terms).
+pub fn select_root(
+    t: f64,
+    p: f64,
+    r: &[f64],
+    sel: RootSel,
+    alpha_z: impl Fn(f64) -> (f64, f64),
+    ln_phi: impl FnOnce(f64, &mut [f64]),
+    out: &mut [f64],
+) -> Option<PhaseAt> {
     if r.is_empty() {
         return None;
     }
     let pick = |rho: f64| {
-        let (g, z, zm) = g_res(model, t, p, rho, x);
-        (rho, z, g, zm)
+        let (a, z_model) = alpha_z(rho);
+        let z = p / (rho * R * t);
+        (rho, z, a + z - 1.0 - z.ln(), z_model)
     };
     let (rho, z, g, z_model) = match sel {
         RootSel::Vapor => pick(r[0]),
@@ -127,7 +156,7 @@ pub fn ln_phi_tp(
     if !(rho.is_finite() && z.is_finite() && z > 0.0 && z_model > 0.0 && g.is_finite()) {
         return None;
     }
-    model.ln_phi(t, rho, x, out);
+    ln_phi(rho, out);
     // ln phi_i = mu_res_i/RT - ln Z: replace the model's ln Z by ln(P/(rho R T)).
     let corr = (z_model / z).ln();
     for o in out.iter_mut() {
