@@ -82,6 +82,15 @@ pub trait Model: Send + Sync {
         crate::equilibrium::phase_eval::ln_phi_at_tp_generic(self, t, p, x, sel, out)
     }
 
+    /// d ln phi_i / d n_j at fixed T and P for one mole of composition `x` at (T, rho), rho
+    /// being a root of the pressure equation there, row-major into `jac[i * n + j]`. Returns
+    /// false when the model has no analytic form (the default): the equilibrium solvers then
+    /// take finite differences.
+    fn dlnphi_dn_tp(&self, t: f64, rho: f64, x: &[f64], jac: &mut [f64]) -> bool {
+        let _ = (t, rho, x, jac);
+        false
+    }
+
     /// Every density at which the model gives pressure `p` at (T, x), in mol/m3.
     fn densities(&self, t: f64, p: f64, x: &[f64]) -> DensityRoots;
 

@@ -299,6 +299,91 @@ impl Cubic {
         }
     }
 
+    /// d ln phi_i / d n_j at fixed T and P for one mole at (T, rho, x), from the residual
+    /// Helmholtz energy in total quantities (M. L. Michelsen, J. M. Mollerup, *Thermodynamic
+    /// Models: Fundamentals and Computational Aspects*, 2nd ed., Tie-Line 2007, chapter 3):
+    ///
+    /// ```text
+    /// F(T, V, n) = -n g(V, B) - D(T)/(RT) f(V, B),  g = ln(1 - B/V),
+    /// f = ln((V + d1 B)/(V + d2 B)) / (B (d1 - d2)),  B = sum n_i b_i,  D = sum n_i n_j a_ij
+    /// d ln phi_i/d n_j |T,P = F_ij + 1/n + P_i P_j / (RT dP/dV)
+    /// ```
+    ///
+    /// with F_ij the second derivative at fixed (T, V), P_i = RT/V - RT F_Vi the partial
+    /// derivative of P with n_i at fixed (T, V) and dP/dV = -RT F_VV - nRT/V^2.
+    fn dlnphi_dn_from(&self, t: f64, rho: f64, x: &[f64], jac: &mut [f64]) -> bool {
+        let n = self.comps.len();
+        let mut sum_a = [0.0; MAX_COMPONENTS];
+        let mut s = [0.0; MAX_COMPONENTS];
+        for (i, si) in s[..n].iter_mut().enumerate() {
+            *si = self.sqrt_ac[i]
+                * self
+                    .spec
+                    .alpha
+                    .sqrt_alpha(t / self.comps[i].tc, self.m[i])
+                    .s;
+        }
+        let (d, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
+        let rt = R * t;
+        let v = 1.0 / rho;
+        let (d1, d2) = (self.spec.d1, self.spec.d2);
+        let (e1, e2) = (v + d1 * b, v + d2 * b);
+        let vb = v - b;
+        if !(vb > 0.0 && e1 > 0.0 && e2 > 0.0 && b > 0.0) {
+            return false;
+        }
+        // g = ln(1 - B/V) and f, with their derivatives (n = 1 mol, V = v).
+        let g_v = 1.0 / vb - 1.0 / v;
+        let g_b = -1.0 / vb;
+        let g_bb = -1.0 / (vb * vb);
+        let g_bv = 1.0 / (vb * vb);
+        let g_vv = -1.0 / (vb * vb) + 1.0 / (v * v);
+        let f = if (d1 - d2).abs() < 1e-12 {
+            1.0 / e1
+        } else {
+            (e1 / e2).ln() / (b * (d1 - d2))
+        };
+        let f_v = -1.0 / (e1 * e2);
+        let f_b = -(f + v * f_v) / b;
+        let f_vv = -f_v * (1.0 / e1 + 1.0 / e2);
+        let f_vb = -f_v * (d1 / e1 + d2 / e2);
+        let f_bb = -(2.0 * f_b + v * f_vb) / b;
+        let dr = d / rt;
+        let f_nb = -g_b;
+        let f_bb_tot = -g_bb - dr * f_bb;
+        let f_bd = -f_b / rt;
+        let f_dd1 = -f / rt;
+        let f_nv = -g_v;
+        let f_bv = -g_bv - dr * f_vb;
+        let f_dv = -f_v / rt;
+        let f_vv_tot = -g_vv - dr * f_vv;
+        // dP/dV / (RT) and P_i / (RT) at fixed (T, V).
+        let p_v = -f_vv_tot - 1.0 / (v * v);
+        if !(p_v.is_finite() && p_v.abs() > f64::MIN_POSITIVE) {
+            return false;
+        }
+        let mut p_i = [0.0; MAX_COMPONENTS];
+        let mut d_i = [0.0; MAX_COMPONENTS];
+        for i in 0..n {
+            d_i[i] = 2.0 * sum_a[i];
+            p_i[i] = 1.0 / v - (f_nv + f_bv * self.b[i] + f_dv * d_i[i]);
+        }
+        for i in 0..n {
+            let bi = self.b[i];
+            let row = &self.one_minus_k[i * n..(i + 1) * n];
+            for j in 0..n {
+                let bj = self.b[j];
+                let d_ij = 2.0 * s[i] * s[j] * row[j];
+                let f_ij = f_nb * (bi + bj)
+                    + f_bb_tot * bi * bj
+                    + f_bd * (bi * d_i[j] + bj * d_i[i])
+                    + f_dd1 * d_ij;
+                jac[i * n + j] = f_ij + 1.0 + p_i[i] * p_i[j] / p_v;
+            }
+        }
+        true
+    }
+
     #[inline]
     fn d_integral(&self, b: f64, rho: f64) -> (f64, f64, f64) {
         let (d1, d2) = (self.spec.d1, self.spec.d2);
@@ -371,6 +456,10 @@ impl Model for Cubic {
             |rho, out| self.ln_phi_from(a, b, &sum_a[..n], t, rho, out),
             out,
         )
+    }
+
+    fn dlnphi_dn_tp(&self, t: f64, rho: f64, x: &[f64], jac: &mut [f64]) -> bool {
+        self.dlnphi_dn_from(t, rho, x, jac)
     }
 
     fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]) {

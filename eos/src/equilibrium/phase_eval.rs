@@ -10,8 +10,9 @@
 //! Derivatives with respect to mole numbers, temperature and pressure are taken by finite
 //! differences on the same density branch (the root nearest the unperturbed density), so
 //! that every solver works with every model. Mole-number derivatives use forward differences
-//! with step 1e-7 N (the Jacobian only steers Newton's method; the residuals are exact); T
-//! and P derivatives use central differences with relative step 1e-5.
+//! with step 1e-7 N (the Jacobian only steers Newton's method; the residuals are exact),
+//! unless the model gives them analytically ([`Model::dlnphi_dn_tp`]: the cubics); T and P
+//! derivatives use central differences with relative step 1e-5.
 //!
 //! ln phi_i = mu_res_i/(RT) - ln Z: at a density root of the given pressure the exact Z is
 //! P/(rho R T), and the model's ln Z (a small difference of large terms for a dense liquid at
@@ -175,8 +176,36 @@ pub fn select_root(
 
 /// d ln phi_i / d n_j at fixed (T, P) for a phase with mole numbers `n` (any total), on the
 /// branch of density `rho`; `base` holds ln phi at `n`. Row-major into `jac[i * nc + j]`.
-/// Returns false if a perturbed state has no root.
+/// The model's analytic form ([`Model::dlnphi_dn_tp`]) where it has one, otherwise
+/// [`dlnphi_dn_fd`]. Returns false if the derivative cannot be formed.
 pub fn dlnphi_dn(
+    model: &dyn Model,
+    t: f64,
+    p: f64,
+    n: &[f64],
+    rho: f64,
+    base: &[f64],
+    jac: &mut [f64],
+) -> bool {
+    let nc = n.len();
+    let mut xb = [0.0; MAX_COMPONENTS];
+    let Some(total) = normalise(n, &mut xb[..nc]) else {
+        return false;
+    };
+    if model.dlnphi_dn_tp(t, rho, &xb[..nc], &mut jac[..nc * nc]) {
+        // The model's derivative is for one mole; for `total` moles it is 1/total of it.
+        let inv = 1.0 / total;
+        for v in jac[..nc * nc].iter_mut() {
+            *v *= inv;
+        }
+        return jac[..nc * nc].iter().all(|v| v.is_finite());
+    }
+    dlnphi_dn_fd(model, t, p, n, rho, base, jac)
+}
+
+/// [`dlnphi_dn`] by forward differences (step 1e-7 of the total amount) on the branch of
+/// density `rho`, for models without an analytic form.
+pub fn dlnphi_dn_fd(
     model: &dyn Model,
     t: f64,
     p: f64,
