@@ -362,3 +362,37 @@ fn csv_has_one_row_per_model_and_phase() {
     assert!(lines[1].starts_with("pr,two-phase,") && lines[1].contains(",vapor,"));
     assert!(lines[4].starts_with("srk,two-phase,") && lines[4].contains(",liquid,"));
 }
+
+#[test]
+fn bubble_and_dew_pressures_lie_on_the_traced_envelope() {
+    // Two independent routes to the same curve: the direct saturation-point solve at T and
+    // the continuation of the envelope (Michelsen, Fluid Phase Equilib. 4 (1980) 1-10). Below
+    // the critical temperature the bubble and the dew pressure at T are unique.
+    let out = zf()
+        .args(["envelope", "--mix", GAS, "--format", "json"])
+        .output()
+        .unwrap();
+    let env: Value = serde_json::from_slice(&out.stdout).unwrap();
+    let tc = f(&env["critical_point"]["temperature_k"]);
+    let pts = env["points"].as_array().unwrap();
+    let mut checked = 0;
+    for (k, pt) in pts.iter().enumerate() {
+        let t = f(&pt["temperature_k"]);
+        if k % 6 != 0 || t > tc - 0.5 {
+            continue;
+        }
+        let flag = match pt["branch"].as_str().unwrap() {
+            "bubble" => "--bubble-pressure",
+            _ => "--dew-pressure",
+        };
+        let r = json(&["flash", "--mix", GAS, "-t", &format!("{t:e} K"), flag]);
+        let p = f(&r["results"][0]["pressure_pa"]);
+        let want = f(&pt["pressure_pa"]);
+        assert!(
+            (p / want - 1.0).abs() < 1e-6,
+            "{flag} at {t} K: {p} Pa, envelope {want} Pa"
+        );
+        checked += 1;
+    }
+    assert!(checked >= 8, "{checked} points");
+}
