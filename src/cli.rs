@@ -3,7 +3,9 @@
 
 use clap::{Args, Parser, Subcommand, ValueEnum};
 
+pub mod equilibrium_args;
 pub mod grid_args;
+pub use equilibrium_args::{EnvelopeArgs, FlashArgs};
 pub use grid_args::{ChartFormat, CompareArgs, TableArgs, TableFormat};
 
 /// Real-gas Z, density and energy properties, with every model side by side.
@@ -49,6 +51,12 @@ pub enum Command {
     /// Audit a spreadsheet (CSV or .xlsx) of gas calculations: recompute each row, flag and
     /// explain deviations, write an annotated copy.
     Audit(Box<crate::commands::audit::AuditArgs>),
+    /// Phase equilibrium of a mixture: flash at (T, P), (P, h) or (P, s), or a bubble or dew
+    /// point, for one model or several.
+    Flash(FlashArgs),
+    /// The phase envelope of a mixture (or the vapour-pressure curve of a pure fluid) with
+    /// its critical point, cricondenbar and cricondentherm, and a chart.
+    Envelope(EnvelopeArgs),
 }
 
 /// Arguments of `zfactor models`.

@@ -13,6 +13,7 @@
 pub mod cli;
 pub mod commands;
 pub mod compare;
+pub mod energy_units;
 pub mod error;
 pub mod exit;
 pub mod feed;

@@ -5,6 +5,7 @@
 //! phase-equilibrium solvers can evaluate trial phases of any composition with one model.
 
 use crate::component::Component;
+use crate::equilibrium::phase_eval::{PhaseAt, RootSel};
 use crate::ideal_cp::IdealGasValues;
 use crate::residual::Residual;
 
@@ -52,8 +53,43 @@ pub trait Model: Send + Sync {
     /// (mol/m3) and mole fractions x.
     fn residual(&self, t: f64, rho: f64, x: &[f64]) -> Residual;
 
+    /// The reduced residual Helmholtz energy alpha and the compressibility factor Z = 1 +
+    /// a_d at (T, rho, x): all that choosing a density root by its Gibbs energy needs.
+    /// Default: from [`Model::residual`]; a model may compute them more cheaply (the values
+    /// must be the same).
+    fn alpha_z(&self, t: f64, rho: f64, x: &[f64]) -> (f64, f64) {
+        let r = self.residual(t, rho, x);
+        (r.a, r.z())
+    }
+
     /// Natural logarithm of each component's fugacity coefficient at (T, rho, x), into `out`.
     fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]);
+
+    /// ln phi of a phase of mole fractions `x` at (T, P) on the density root chosen by `sel`,
+    /// into `out`, with the root's density, Z and Gibbs energy (`None` where the model has
+    /// no usable root): the evaluation at the heart of every equilibrium solver. Default:
+    /// [`crate::equilibrium::phase_eval::ln_phi_at_tp_generic`] from [`Model::densities`],
+    /// [`Model::alpha_z`] and [`Model::ln_phi`]; a model may share work between those steps
+    /// (the values must be the same).
+    fn ln_phi_at_tp(
+        &self,
+        t: f64,
+        p: f64,
+        x: &[f64],
+        sel: RootSel,
+        out: &mut [f64],
+    ) -> Option<PhaseAt> {
+        crate::equilibrium::phase_eval::ln_phi_at_tp_generic(self, t, p, x, sel, out)
+    }
+
+    /// d ln phi_i / d n_j at fixed T and P for one mole of composition `x` at (T, rho), rho
+    /// being a root of the pressure equation there, row-major into `jac[i * n + j]`. Returns
+    /// false when the model has no analytic form (the default): the equilibrium solvers then
+    /// take finite differences.
+    fn dlnphi_dn_tp(&self, t: f64, rho: f64, x: &[f64], jac: &mut [f64]) -> bool {
+        let _ = (t, rho, x, jac);
+        false
+    }
 
     /// Every density at which the model gives pressure `p` at (T, x), in mol/m3.
     fn densities(&self, t: f64, p: f64, x: &[f64]) -> DensityRoots;

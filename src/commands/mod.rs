@@ -6,6 +6,8 @@ pub mod audit_row;
 pub mod compare;
 pub mod compress;
 pub mod demo;
+pub mod envelope;
+pub mod flash;
 pub mod flow;
 pub mod fluids;
 pub mod jobs_common;
@@ -73,6 +75,8 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             crate::render::vessel(&report, args.format)?;
             Ok(exit_for(&report.warnings))
         }
+        Command::Flash(args) => flash::dispatch(args),
+        Command::Envelope(args) => envelope::dispatch(args),
     }
 }
 

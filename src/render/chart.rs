@@ -36,7 +36,7 @@ type SvgDraw<'a> = &'a dyn Fn(DrawingArea<SVGBackend, Shift>) -> Result<(), CliE
 /// The same drawing on a bitmap area.
 type PngDraw<'a> = &'a dyn Fn(DrawingArea<BitMapBackend, Shift>) -> Result<(), CliError>;
 
-fn register_font() -> Result<(), CliError> {
+pub(crate) fn register_font() -> Result<(), CliError> {
     let mut ok = true;
     FONT_ONCE.call_once(|| {
         ok = plotters::style::register_font("sans-serif", FontStyle::Normal, FONT).is_ok();

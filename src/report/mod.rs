@@ -4,6 +4,8 @@
 pub mod audit;
 pub mod compare;
 pub mod compress;
+pub mod envelope;
+pub mod flash;
 pub mod flow;
 pub mod fluids;
 pub mod jobs_common;

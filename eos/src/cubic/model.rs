@@ -6,6 +6,7 @@ use super::spec::{CriticalConstants, CubicSpec};
 use super::CubicKind;
 use crate::component::Component;
 use crate::constants::R;
+use crate::equilibrium::phase_eval::{select_root, PhaseAt, RootSel};
 use crate::error::{Error, Result};
 use crate::model::{DensityRoots, Model};
 use crate::residual::Residual;
@@ -221,6 +222,168 @@ impl Cubic {
 
     /// The density integral D(rho) = int_0^rho dr / ((1 + d1 b r)(1 + d2 b r)) with
     /// rho D' and rho^2 D''.
+    /// a and b of the mixture at T without their temperature derivatives (for the density
+    /// roots and ln phi, which need none): the same operations in the same order as
+    /// [`Cubic::mix`], so the values are identical, at a third of the inner-loop work.
+    fn mix_ab(&self, t: f64, x: &[f64], mut sum_a: Option<&mut [f64]>) -> (f64, f64) {
+        let n = self.comps.len();
+        let mut s = [0.0; MAX_COMPONENTS];
+        for (i, si) in s[..n].iter_mut().enumerate() {
+            *si = self.sqrt_ac[i]
+                * self
+                    .spec
+                    .alpha
+                    .sqrt_alpha(t / self.comps[i].tc, self.m[i])
+                    .s;
+        }
+        let (mut a, mut b) = (0.0, 0.0);
+        for i in 0..n {
+            let row = &self.one_minus_k[i * n..(i + 1) * n];
+            let mut ra = 0.0;
+            for j in 0..n {
+                ra += x[j] * row[j] * s[j];
+            }
+            let ai = s[i] * ra;
+            if let Some(out) = sum_a.as_deref_mut() {
+                out[i] = ai;
+            }
+            a += x[i] * ai;
+            b += x[i] * self.b[i];
+        }
+        (a, b)
+    }
+
+    /// The density roots at (T, P) for mixture parameters a and b (see [`Cubic::mix_ab`]).
+    fn roots_from(&self, a: f64, b: f64, t: f64, p: f64) -> DensityRoots {
+        let rt = R * t;
+        let aa = a * p / (rt * rt);
+        let bb = b * p / rt;
+        let (u, w) = (self.spec.d1 + self.spec.d2, self.spec.d1 * self.spec.d2);
+        let c2 = (u - 1.0) * bb - 1.0;
+        let c1 = aa + (w - u) * bb * bb - u * bb;
+        let c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
+        let roots = solve_cubic(c2, c1, c0);
+        let mut rho = [0.0; 3];
+        let mut k = 0;
+        for &z in roots.as_slice() {
+            if z > bb {
+                rho[k] = p / (z * rt);
+                k += 1;
+            }
+        }
+        DensityRoots::from_slice(&rho[..k])
+    }
+
+    /// alpha and Z = 1 + a_d at (T, rho) for mixture parameters a and b: the `a` and `a_d`
+    /// of [`Model::residual`], without the temperature derivatives.
+    fn alpha_z_from(&self, a: f64, b: f64, t: f64, rho: f64) -> (f64, f64) {
+        let rt = R * t;
+        let eta = b * rho;
+        let (d, rd1, _) = self.d_integral(b, rho);
+        let f = a / rt;
+        let one_eta = 1.0 - eta;
+        (-one_eta.ln() - f * d, 1.0 + (eta / one_eta - f * rd1))
+    }
+
+    /// ln phi at (T, rho) for mixture parameters a, b and sum_j x_j a_ij (`sum_a`).
+    fn ln_phi_from(&self, a: f64, b: f64, sum_a: &[f64], t: f64, rho: f64, out: &mut [f64]) {
+        let rt = R * t;
+        let eta = b * rho;
+        let (d, rd1, _) = self.d_integral(b, rho);
+        let f = a / rt;
+        let z = 1.0 + eta / (1.0 - eta) - f * rd1;
+        let ln_z_b = z.ln() + (1.0 - eta).ln();
+        for (i, o) in out.iter_mut().enumerate().take(self.comps.len()) {
+            let bi_b = self.b[i] / b;
+            *o = bi_b * (z - 1.0) - ln_z_b - f * d * (2.0 * sum_a[i] / a - bi_b);
+        }
+    }
+
+    /// d ln phi_i / d n_j at fixed T and P for one mole at (T, rho, x), from the residual
+    /// Helmholtz energy in total quantities (M. L. Michelsen, J. M. Mollerup, *Thermodynamic
+    /// Models: Fundamentals and Computational Aspects*, 2nd ed., Tie-Line 2007, chapter 3):
+    ///
+    /// ```text
+    /// F(T, V, n) = -n g(V, B) - D(T)/(RT) f(V, B),  g = ln(1 - B/V),
+    /// f = ln((V + d1 B)/(V + d2 B)) / (B (d1 - d2)),  B = sum n_i b_i,  D = sum n_i n_j a_ij
+    /// d ln phi_i/d n_j |T,P = F_ij + 1/n + P_i P_j / (RT dP/dV)
+    /// ```
+    ///
+    /// with F_ij the second derivative at fixed (T, V), P_i = RT/V - RT F_Vi the partial
+    /// derivative of P with n_i at fixed (T, V) and dP/dV = -RT F_VV - nRT/V^2.
+    fn dlnphi_dn_from(&self, t: f64, rho: f64, x: &[f64], jac: &mut [f64]) -> bool {
+        let n = self.comps.len();
+        let mut sum_a = [0.0; MAX_COMPONENTS];
+        let mut s = [0.0; MAX_COMPONENTS];
+        for (i, si) in s[..n].iter_mut().enumerate() {
+            *si = self.sqrt_ac[i]
+                * self
+                    .spec
+                    .alpha
+                    .sqrt_alpha(t / self.comps[i].tc, self.m[i])
+                    .s;
+        }
+        let (d, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
+        let rt = R * t;
+        let v = 1.0 / rho;
+        let (d1, d2) = (self.spec.d1, self.spec.d2);
+        let (e1, e2) = (v + d1 * b, v + d2 * b);
+        let vb = v - b;
+        if !(vb > 0.0 && e1 > 0.0 && e2 > 0.0 && b > 0.0) {
+            return false;
+        }
+        // g = ln(1 - B/V) and f, with their derivatives (n = 1 mol, V = v).
+        let g_v = 1.0 / vb - 1.0 / v;
+        let g_b = -1.0 / vb;
+        let g_bb = -1.0 / (vb * vb);
+        let g_bv = 1.0 / (vb * vb);
+        let g_vv = -1.0 / (vb * vb) + 1.0 / (v * v);
+        let f = if (d1 - d2).abs() < 1e-12 {
+            1.0 / e1
+        } else {
+            (e1 / e2).ln() / (b * (d1 - d2))
+        };
+        let f_v = -1.0 / (e1 * e2);
+        let f_b = -(f + v * f_v) / b;
+        let f_vv = -f_v * (1.0 / e1 + 1.0 / e2);
+        let f_vb = -f_v * (d1 / e1 + d2 / e2);
+        let f_bb = -(2.0 * f_b + v * f_vb) / b;
+        let dr = d / rt;
+        let f_nb = -g_b;
+        let f_bb_tot = -g_bb - dr * f_bb;
+        let f_bd = -f_b / rt;
+        let f_dd1 = -f / rt;
+        let f_nv = -g_v;
+        let f_bv = -g_bv - dr * f_vb;
+        let f_dv = -f_v / rt;
+        let f_vv_tot = -g_vv - dr * f_vv;
+        // dP/dV / (RT) and P_i / (RT) at fixed (T, V).
+        let p_v = -f_vv_tot - 1.0 / (v * v);
+        if !(p_v.is_finite() && p_v.abs() > f64::MIN_POSITIVE) {
+            return false;
+        }
+        let mut p_i = [0.0; MAX_COMPONENTS];
+        let mut d_i = [0.0; MAX_COMPONENTS];
+        for i in 0..n {
+            d_i[i] = 2.0 * sum_a[i];
+            p_i[i] = 1.0 / v - (f_nv + f_bv * self.b[i] + f_dv * d_i[i]);
+        }
+        for i in 0..n {
+            let bi = self.b[i];
+            let row = &self.one_minus_k[i * n..(i + 1) * n];
+            for j in 0..n {
+                let bj = self.b[j];
+                let d_ij = 2.0 * s[i] * s[j] * row[j];
+                let f_ij = f_nb * (bi + bj)
+                    + f_bb_tot * bi * bj
+                    + f_bd * (bi * d_i[j] + bj * d_i[i])
+                    + f_dd1 * d_ij;
+                jac[i * n + j] = f_ij + 1.0 + p_i[i] * p_i[j] / p_v;
+            }
+        }
+        true
+    }
+
     #[inline]
     fn d_integral(&self, b: f64, rho: f64) -> (f64, f64, f64) {
         let (d1, d2) = (self.spec.d1, self.spec.d2);
@@ -265,41 +428,50 @@ impl Model for Cubic {
         }
     }
 
+    fn alpha_z(&self, t: f64, rho: f64, x: &[f64]) -> (f64, f64) {
+        let (a, b) = self.mix_ab(t, x, None);
+        self.alpha_z_from(a, b, t, rho)
+    }
+
+    fn ln_phi_at_tp(
+        &self,
+        t: f64,
+        p: f64,
+        x: &[f64],
+        sel: RootSel,
+        out: &mut [f64],
+    ) -> Option<PhaseAt> {
+        // One mixing sum for the roots, the root choice and ln phi (the values are those of
+        // densities, alpha_z and ln_phi called one by one).
+        let n = self.comps.len();
+        let mut sum_a = [0.0; MAX_COMPONENTS];
+        let (a, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
+        let roots = self.roots_from(a, b, t, p);
+        select_root(
+            t,
+            p,
+            roots.as_slice(),
+            sel,
+            |rho| self.alpha_z_from(a, b, t, rho),
+            |rho, out| self.ln_phi_from(a, b, &sum_a[..n], t, rho, out),
+            out,
+        )
+    }
+
+    fn dlnphi_dn_tp(&self, t: f64, rho: f64, x: &[f64], jac: &mut [f64]) -> bool {
+        self.dlnphi_dn_from(t, rho, x, jac)
+    }
+
     fn ln_phi(&self, t: f64, rho: f64, x: &[f64], out: &mut [f64]) {
         let n = self.comps.len();
         let mut sum_a = [0.0; MAX_COMPONENTS];
-        let mp = self.mix(t, x, Some(&mut sum_a[..n]));
-        let rt = R * t;
-        let eta = mp.b * rho;
-        let (d, rd1, _) = self.d_integral(mp.b, rho);
-        let f = mp.a / rt;
-        let z = 1.0 + eta / (1.0 - eta) - f * rd1;
-        let ln_z_b = z.ln() + (1.0 - eta).ln();
-        for i in 0..n {
-            let bi_b = self.b[i] / mp.b;
-            out[i] = bi_b * (z - 1.0) - ln_z_b - f * d * (2.0 * sum_a[i] / mp.a - bi_b);
-        }
+        let (a, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
+        self.ln_phi_from(a, b, &sum_a[..n], t, rho, out);
     }
 
     fn densities(&self, t: f64, p: f64, x: &[f64]) -> DensityRoots {
-        let mp = self.mix(t, x, None);
-        let rt = R * t;
-        let aa = mp.a * p / (rt * rt);
-        let bb = mp.b * p / rt;
-        let (u, w) = (self.spec.d1 + self.spec.d2, self.spec.d1 * self.spec.d2);
-        let c2 = (u - 1.0) * bb - 1.0;
-        let c1 = aa + (w - u) * bb * bb - u * bb;
-        let c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
-        let roots = solve_cubic(c2, c1, c0);
-        let mut rho = [0.0; 3];
-        let mut k = 0;
-        for &z in roots.as_slice() {
-            if z > bb {
-                rho[k] = p / (z * rt);
-                k += 1;
-            }
-        }
-        DensityRoots::from_slice(&rho[..k])
+        let (a, b) = self.mix_ab(t, x, None);
+        self.roots_from(a, b, t, p)
     }
 
     fn max_density(&self, x: &[f64]) -> f64 {

@@ -30,7 +30,7 @@
 
 use super::phase_eval::RootSel;
 use super::sat_system::{is_trivial, Side, System, MAX_VARS};
-use super::{dew, stability, wilson};
+use super::{saturation_point, stability, wilson};
 use crate::error::{Error, Result};
 use crate::model::Model;
 
@@ -163,7 +163,12 @@ pub fn trace(model: &dyn Model, z: &[f64], options: EnvelopeOptions) -> Result<E
         ));
     }
     let m = n + 2;
-    let first = dew::temperature(model, options.p_start, z)?;
+    let first = saturation_point::point_direct(
+        model,
+        z,
+        Side::Dew,
+        saturation_point::Given::P(options.p_start),
+    )?;
     let mut x = [0.0; MAX_VARS];
     for i in 0..n {
         x[i] = if z[i] > 0.0 && first.x[i] > 0.0 {

@@ -10,8 +10,9 @@
 //! Derivatives with respect to mole numbers, temperature and pressure are taken by finite
 //! differences on the same density branch (the root nearest the unperturbed density), so
 //! that every solver works with every model. Mole-number derivatives use forward differences
-//! with step 1e-7 N (the Jacobian only steers Newton's method; the residuals are exact); T
-//! and P derivatives use central differences with relative step 1e-5.
+//! with step 1e-7 N (the Jacobian only steers Newton's method; the residuals are exact),
+//! unless the model gives them analytically ([`Model::dlnphi_dn_tp`]: the cubics); T and P
+//! derivatives use central differences with relative step 1e-5.
 //!
 //! ln phi_i = mu_res_i/(RT) - ln Z: at a density root of the given pressure the exact Z is
 //! P/(rho R T), and the model's ln Z (a small difference of large terms for a dense liquid at
@@ -25,6 +26,11 @@ use crate::model::Model;
 
 /// Most components the equilibrium solvers accept (the size of their stack work arrays).
 pub const MAX_COMPONENTS: usize = 64;
+
+/// Up to this many components the Newton solvers keep their n x n matrices in stack arrays
+/// of SMALL_COMPONENTS^2 entries (zeroing a 64 x 64 array costs as much as a few fugacity
+/// evaluations); larger mixtures use MAX_COMPONENTS^2.
+pub const SMALL_COMPONENTS: usize = 16;
 
 /// Which density root a phase takes.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -66,18 +72,9 @@ pub fn normalise(n: &[f64], x: &mut [f64]) -> Option<f64> {
     Some(total)
 }
 
-/// g_res/RT of a root at pressure p, with Z = P/(rho R T) taken from the given pressure (not
-/// from the model's Z, which for a dense liquid at low pressure is a small difference of
-/// large terms), and the model's own Z.
-#[inline]
-fn g_res(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -> (f64, f64, f64) {
-    let r = model.residual(t, rho, x);
-    let z = p / (rho * R * t);
-    (r.a + z - 1.0 - z.ln(), z, r.z())
-}
-
 /// ln phi of every component of a phase with mole numbers (or fractions) `n` at (T, P), into
 /// `out`. Returns `None` when the model has no density root or the amounts are not usable.
+/// The work is done by [`Model::ln_phi_at_tp`] (by default [`ln_phi_at_tp_generic`]).
 pub fn ln_phi_tp(
     model: &dyn Model,
     t: f64,
@@ -90,14 +87,52 @@ pub fn ln_phi_tp(
     let mut xb = [0.0; MAX_COMPONENTS];
     let x = &mut xb[..nc];
     normalise(n, x)?;
+    model.ln_phi_at_tp(t, p, x, sel, out)
+}
+
+/// ln phi at (T, P) and mole fractions `x` through the model's density roots, alpha and Z
+/// ([`Model::alpha_z`]) and ln phi at (T, rho): the default of [`Model::ln_phi_at_tp`].
+pub fn ln_phi_at_tp_generic<M: Model + ?Sized>(
+    model: &M,
+    t: f64,
+    p: f64,
+    x: &[f64],
+    sel: RootSel,
+    out: &mut [f64],
+) -> Option<PhaseAt> {
     let roots = model.densities(t, p, x);
-    let r = roots.as_slice();
+    select_root(
+        t,
+        p,
+        roots.as_slice(),
+        sel,
+        |rho| model.alpha_z(t, rho, x),
+        |rho, out| model.ln_phi(t, rho, x, out),
+        out,
+    )
+}
+
+/// Chooses the root `sel` among the density roots `r` at (T, P), then fills `out` with ln
+/// phi there. `alpha_z(rho)` gives the model's alpha and Z, `ln_phi(rho, out)` its ln phi at
+/// (T, rho); the Gibbs energy of a root is g_res/RT = alpha + Z - 1 - ln Z with Z =
+/// P/(rho R T) taken from the given pressure (not from the model's Z, which for a dense
+/// liquid at low pressure is a small difference of large terms).
+pub fn select_root(
+    t: f64,
+    p: f64,
+    r: &[f64],
+    sel: RootSel,
+    alpha_z: impl Fn(f64) -> (f64, f64),
+    ln_phi: impl FnOnce(f64, &mut [f64]),
+    out: &mut [f64],
+) -> Option<PhaseAt> {
     if r.is_empty() {
         return None;
     }
     let pick = |rho: f64| {
-        let (g, z, zm) = g_res(model, t, p, rho, x);
-        (rho, z, g, zm)
+        let (a, z_model) = alpha_z(rho);
+        let z = p / (rho * R * t);
+        (rho, z, a + z - 1.0 - z.ln(), z_model)
     };
     let (rho, z, g, z_model) = match sel {
         RootSel::Vapor => pick(r[0]),
@@ -122,7 +157,7 @@ pub fn ln_phi_tp(
     if !(rho.is_finite() && z.is_finite() && z > 0.0 && z_model > 0.0 && g.is_finite()) {
         return None;
     }
-    model.ln_phi(t, rho, x, out);
+    ln_phi(rho, out);
     // ln phi_i = mu_res_i/RT - ln Z: replace the model's ln Z by ln(P/(rho R T)).
     let corr = (z_model / z).ln();
     for o in out.iter_mut() {
@@ -141,8 +176,36 @@ pub fn ln_phi_tp(
 
 /// d ln phi_i / d n_j at fixed (T, P) for a phase with mole numbers `n` (any total), on the
 /// branch of density `rho`; `base` holds ln phi at `n`. Row-major into `jac[i * nc + j]`.
-/// Returns false if a perturbed state has no root.
+/// The model's analytic form ([`Model::dlnphi_dn_tp`]) where it has one, otherwise
+/// [`dlnphi_dn_fd`]. Returns false if the derivative cannot be formed.
 pub fn dlnphi_dn(
+    model: &dyn Model,
+    t: f64,
+    p: f64,
+    n: &[f64],
+    rho: f64,
+    base: &[f64],
+    jac: &mut [f64],
+) -> bool {
+    let nc = n.len();
+    let mut xb = [0.0; MAX_COMPONENTS];
+    let Some(total) = normalise(n, &mut xb[..nc]) else {
+        return false;
+    };
+    if model.dlnphi_dn_tp(t, rho, &xb[..nc], &mut jac[..nc * nc]) {
+        // The model's derivative is for one mole; for `total` moles it is 1/total of it.
+        let inv = 1.0 / total;
+        for v in jac[..nc * nc].iter_mut() {
+            *v *= inv;
+        }
+        return jac[..nc * nc].iter().all(|v| v.is_finite());
+    }
+    dlnphi_dn_fd(model, t, p, n, rho, base, jac)
+}
+
+/// [`dlnphi_dn`] by forward differences (step 1e-7 of the total amount) on the branch of
+/// density `rho`, for models without an analytic form.
+pub fn dlnphi_dn_fd(
     model: &dyn Model,
     t: f64,
     p: f64,

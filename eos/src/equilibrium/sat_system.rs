@@ -20,8 +20,8 @@
 //! infinite dilution.
 
 use super::dense;
-use super::phase_eval::MAX_COMPONENTS;
 use super::phase_eval::{dlnphi_dlnstate, dlnphi_dn, ln_phi_tp, RootSel, StateVar};
+use super::phase_eval::{MAX_COMPONENTS, SMALL_COMPONENTS};
 use crate::error::{Error, Result};
 use crate::model::Model;
 
@@ -118,7 +118,9 @@ impl<'a> System<'a> {
         f[n] = w[..n].iter().sum::<f64>() - 1.0;
         if let Some(jac) = jac {
             jac[..m * m].fill(0.0);
-            let mut dw = [0.0; MAX_COMPONENTS * MAX_COMPONENTS];
+            // d ln phi / d n into the first n * n entries (row stride n), then spread to row
+            // stride m in place: from the last entry back, each moves to an index at least
+            // as large as its own, past every entry still to be read.
             if !dlnphi_dn(
                 self.model,
                 t,
@@ -126,14 +128,18 @@ impl<'a> System<'a> {
                 &w[..n],
                 pw.rho,
                 &lw[..n],
-                &mut dw[..n * n],
+                &mut jac[..n * n],
             ) {
                 return None;
             }
-            for i in 0..n {
-                for j in 0..n {
-                    jac[i * m + j] = dw[i * n + j] * w[j];
+            for i in (0..n).rev() {
+                for j in (0..n).rev() {
+                    let v = jac[i * n + j];
+                    jac[i * n + j] = 0.0;
+                    jac[i * m + j] = v * w[j];
                 }
+            }
+            for i in 0..n {
                 jac[i * m + i] += 1.0;
                 jac[n * m + i] = sign * w[i];
             }
@@ -159,11 +165,25 @@ impl<'a> System<'a> {
     /// Newton's method with variable `spec` fixed at `value` (x[spec] is set to it first).
     /// Returns the iterations and the densities at convergence.
     pub fn solve(&self, x: &mut [f64], spec: usize, value: f64) -> Result<(usize, Densities)> {
+        if self.z.len() <= SMALL_COMPONENTS {
+            self.solve_in::<{ (SMALL_COMPONENTS + 2) * (SMALL_COMPONENTS + 2) }>(x, spec, value)
+        } else {
+            self.solve_in::<{ MAX_VARS * MAX_VARS }>(x, spec, value)
+        }
+    }
+
+    /// [`System::solve`] with a Jacobian array of `NN` >= (n + 2)^2 entries.
+    fn solve_in<const NN: usize>(
+        &self,
+        x: &mut [f64],
+        spec: usize,
+        value: f64,
+    ) -> Result<(usize, Densities)> {
         let n = self.z.len();
         let m = n + 2;
         x[spec] = value;
         let mut f = [0.0; MAX_VARS];
-        let mut jac = [0.0; MAX_VARS * MAX_VARS];
+        let mut jac = [0.0; NN];
         let mut best = f64::INFINITY;
         for it in 1..=60 {
             let Some(d) = self.eval(x, &mut f[..m], Some(&mut jac[..m * m])) else {
@@ -217,10 +237,19 @@ impl<'a> System<'a> {
 
     /// Sensitivities dX/dS at a converged point for specification `spec`: J dX/dS = e_(n+2).
     pub fn sensitivity(&self, x: &[f64], spec: usize, out: &mut [f64]) -> bool {
+        if self.z.len() <= SMALL_COMPONENTS {
+            self.sensitivity_in::<{ (SMALL_COMPONENTS + 2) * (SMALL_COMPONENTS + 2) }>(x, spec, out)
+        } else {
+            self.sensitivity_in::<{ MAX_VARS * MAX_VARS }>(x, spec, out)
+        }
+    }
+
+    /// [`System::sensitivity`] with a Jacobian array of `NN` >= (n + 2)^2 entries.
+    fn sensitivity_in<const NN: usize>(&self, x: &[f64], spec: usize, out: &mut [f64]) -> bool {
         let n = self.z.len();
         let m = n + 2;
         let mut f = [0.0; MAX_VARS];
-        let mut jac = [0.0; MAX_VARS * MAX_VARS];
+        let mut jac = [0.0; NN];
         if self.eval(x, &mut f[..m], Some(&mut jac[..m * m])).is_none() {
             return false;
         }

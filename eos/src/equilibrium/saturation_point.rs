@@ -9,12 +9,22 @@
 //!    equation but the specification's intent), a stability test of the feed
 //!    ([`super::stability`]) at pressures (or temperatures) around the estimate; an unstable
 //!    trial phase of the right kind (lighter than the feed for a bubble point, heavier for a
-//!    dew point) gives K and the state to start from.
+//!    dew point) gives K and the state to start from;
+//! 3. if neither converges, the phase envelope of the feed ([`super::envelope`], M. L.
+//!    Michelsen, Fluid Phase Equilib. 4 (1980) 1-10): the unknowns interpolated between the
+//!    two points of the wanted branch that bracket the given T or P (the first such pair in
+//!    trace order: of two dew points at one pressure, the one on the rising dew curve).
+//!
+//! A solution of the equations is accepted only if a stability test of the feed there finds
+//! no trial phase clearly below its tangent plane (tm < -1e-6): Newton's method can also
+//! converge to a stationary point of the tangent-plane distance inside the two-phase region,
+//! which satisfies the same equations.
 //!
 //! No solution from any start is reported as [`Error::NoSolution`]: at T above the
 //! cricondentherm, at P above the cricondenbar, or for a feed that is too close to a pure
 //! component (one component present: use [`super::saturation`]).
 
+use super::envelope::{self, EnvelopeOptions, EnvelopePoint};
 use super::phase_eval::{ln_phi_tp, MAX_COMPONENTS};
 use super::sat_system::{is_trivial, Densities, Side, System, MAX_VARS};
 use super::{saturation, stability, wilson};
@@ -116,8 +126,29 @@ fn attempt(sys: &System, x: &mut [f64], spec: usize, value: f64) -> Result<Satur
             "the point found has the incipient phase on the wrong side of the feed".into(),
         ));
     }
+    // The equations also hold where the incipient phase is only a stationary point of the
+    // tangent-plane distance inside the two-phase region; at a true saturation point the feed
+    // is on the edge of stability, so no trial phase lies clearly below its tangent plane.
+    let n = sys.z.len();
+    let (t, p) = (x[n].exp(), x[n + 1].exp());
+    let mut w = [0.0; MAX_COMPONENTS];
+    if let Ok(st) = stability::analyse(sys.model, t, p, sys.z, &mut w[..n]) {
+        if st.tm < SPURIOUS_TM {
+            return Err(Error::NoSolution(format!(
+                "the point found at T = {t} K, P = {p} Pa lies inside the two-phase region \
+                 (tangent-plane distance {:.3e})",
+                st.tm
+            )));
+        }
+    }
     Ok(build(sys, x, d, it))
 }
+
+/// A stability test of the feed at a solution of the saturation equations that finds a trial
+/// phase this far below the tangent plane shows the solution is not on the phase boundary
+/// (at the boundary the lowest tm is zero; rounding and the test's own tolerance keep it
+/// within about 1e-10).
+const SPURIOUS_TM: f64 = -1e-6;
 
 /// Substitution on K with the free variable moved so that sum w -> 1.
 fn substitute(sys: &System, x: &mut [f64], spec_t: bool) -> Option<()> {
@@ -156,11 +187,92 @@ fn substitute(sys: &System, x: &mut [f64], spec_t: bool) -> Option<()> {
     Some(())
 }
 
+/// A bubble or dew point from the direct starts, then from the phase envelope.
 pub(crate) fn point(
     model: &dyn Model,
     z: &[f64],
     side: Side,
     given: Given,
+) -> Result<SaturationPoint> {
+    point_with(model, z, side, given, true)
+}
+
+/// A bubble or dew point from the direct starts only (the envelope's own first point).
+pub(crate) fn point_direct(
+    model: &dyn Model,
+    z: &[f64],
+    side: Side,
+    given: Given,
+) -> Result<SaturationPoint> {
+    point_with(model, z, side, given, false)
+}
+
+/// Starts from the traced phase envelope ([`super::envelope`]): on each pair of consecutive
+/// points of the wanted branch that brackets the given T or P (in trace order, so the dew
+/// point of the rising dew curve comes before the retrograde one), the unknowns are
+/// interpolated linearly in the given variable and corrected by Newton's method.
+fn from_envelope(
+    model: &dyn Model,
+    sys: &System,
+    given: Given,
+    spec: usize,
+    value: f64,
+) -> Option<SaturationPoint> {
+    let z = sys.z;
+    let n = z.len();
+    let m = n + 2;
+    let env = envelope::trace(model, z, EnvelopeOptions::default()).ok()?;
+    let bubble = sys.side == Side::Bubble;
+    let on_side = |pt: &EnvelopePoint| (pt.vapor_fraction < 0.5) == bubble;
+    let coord = |pt: &EnvelopePoint| match given {
+        Given::T(_) => pt.t.ln(),
+        Given::P(_) => pt.p.ln(),
+    };
+    let unknowns = |pt: &EnvelopePoint| {
+        let mut x = [0.0; MAX_VARS];
+        for i in 0..n {
+            if z[i] > 0.0 && pt.incipient[i] > 0.0 {
+                let r = (pt.incipient[i] / z[i]).ln();
+                x[i] = if bubble { r } else { -r };
+            }
+        }
+        x[n] = pt.t.ln();
+        x[n + 1] = pt.p.ln();
+        x
+    };
+    for pair in env.points.windows(2) {
+        let (a, b) = (&pair[0], &pair[1]);
+        if !(on_side(a) && on_side(b)) {
+            continue;
+        }
+        let (ca, cb) = (coord(a), coord(b));
+        if (value - ca) * (value - cb) > 0.0 {
+            continue;
+        }
+        let span = cb - ca;
+        let s = if span.abs() > 0.0 {
+            (value - ca) / span
+        } else {
+            0.0
+        };
+        let (xa, xb) = (unknowns(a), unknowns(b));
+        let mut x = [0.0; MAX_VARS];
+        for i in 0..m {
+            x[i] = xa[i] + s * (xb[i] - xa[i]);
+        }
+        if let Ok(r) = attempt(sys, &mut x[..m], spec, value) {
+            return Some(r);
+        }
+    }
+    None
+}
+
+fn point_with(
+    model: &dyn Model,
+    z: &[f64],
+    side: Side,
+    given: Given,
+    use_envelope: bool,
 ) -> Result<SaturationPoint> {
     let (t0, p0) = match given {
         Given::T(t) => (t, 1e5),
@@ -257,6 +369,11 @@ pub(crate) fn point(
         }
         let mut xx = x;
         if let Ok(r) = attempt(&sys, &mut xx[..m], spec, value) {
+            return Ok(r);
+        }
+    }
+    if use_envelope {
+        if let Some(r) = from_envelope(model, &sys, given, spec, value) {
             return Ok(r);
         }
     }

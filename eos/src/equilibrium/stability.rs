@@ -20,10 +20,11 @@
 //! 0 proves instability and ends the test. A trial that does not settle after 20
 //! substitutions switches to Newton's method in Michelsen's variables alpha_i = 2 sqrt(W_i),
 //! where the Hessian of tm is H_ij = delta_ij (1 + s_i / 2) + sqrt(W_i W_j) d ln phi_i / d n_j
-//! with s_i = ln W_i + ln phi_i - d_i, with a halving line search on tm. A trial that
+//! with s_i = ln W_i + ln phi_i - d_i, with a halving line search on tm (twelve halvings for
+//! a step that points downhill, three for one that does not). A trial that
 //! approaches the feed composition (the trivial solution) is dropped.
 
-use super::phase_eval::{dlnphi_dn, ln_phi_tp, RootSel, MAX_COMPONENTS};
+use super::phase_eval::{dlnphi_dn, ln_phi_tp, RootSel, MAX_COMPONENTS, SMALL_COMPONENTS};
 use super::{dense, wilson};
 use crate::composition;
 use crate::error::{positive, Error, Result};
@@ -320,11 +321,16 @@ fn run_trial(
             };
         }
     }
-    newton(model, t, p, z, d, w, its)
+    if n <= SMALL_COMPONENTS {
+        newton::<{ SMALL_COMPONENTS * SMALL_COMPONENTS }>(model, t, p, z, d, w, its)
+    } else {
+        newton::<{ MAX_COMPONENTS * MAX_COMPONENTS }>(model, t, p, z, d, w, its)
+    }
 }
 
-/// Newton's method on tm in alpha_i = 2 sqrt(W_i), with a halving line search.
-fn newton(
+/// Newton's method on tm in alpha_i = 2 sqrt(W_i), with a halving line search; `NN` >= n^2
+/// is the size of the matrix work arrays.
+fn newton<const NN: usize>(
     model: &dyn Model,
     t: f64,
     p: f64,
@@ -343,9 +349,10 @@ fn newton(
         }
     }
     let mut lnphi = [0.0; MAX_COMPONENTS];
-    let mut jac = [0.0; MAX_COMPONENTS * MAX_COMPONENTS];
-    let mut h = [0.0; MAX_COMPONENTS * MAX_COMPONENTS];
+    let mut jac = [0.0; NN];
+    let mut h = [0.0; NN];
     let mut g = [0.0; MAX_COMPONENTS];
+    let mut gt = [0.0; MAX_COMPONENTS];
     let mut wt = [0.0; MAX_COMPONENTS];
     let mut lt = [0.0; MAX_COMPONENTS];
     let fail = |its| TrialResult {
@@ -381,12 +388,18 @@ fn newton(
                 iterations: its,
             };
         }
+        gt[..m].copy_from_slice(&g[..m]);
         if !dense::solve(&mut h[..m * m], &mut g[..m], m) {
             return fail(its);
         }
+        // Where the Hessian is not positive definite along the gradient the Newton step does
+        // not point downhill, and small steps only raise tm: a few long ones are tried, not
+        // twelve halvings.
+        let slope: f64 = (0..m).map(|a| -gt[a] * g[a]).sum();
+        let halvings = if slope < 0.0 { 12 } else { 3 };
         let mut step = 1.0;
         let mut accepted = false;
-        for _ in 0..12 {
+        for _ in 0..halvings {
             wt[..n].copy_from_slice(w);
             for a in 0..m {
                 let i = idx[a];

@@ -26,7 +26,9 @@
 //!    one phase, since the stability test showed the feed unstable.
 
 use super::result::{FlashResult, SinglePhase, TwoPhase};
-use crate::equilibrium::phase_eval::{dlnphi_dn, ln_phi_tp, RootSel, MAX_COMPONENTS};
+use crate::equilibrium::phase_eval::{
+    dlnphi_dn, ln_phi_tp, RootSel, MAX_COMPONENTS, SMALL_COMPONENTS,
+};
 use crate::equilibrium::rachford_rice::{self, RrOutcome};
 use crate::equilibrium::{dense, gdem, stability, wilson};
 use crate::error::{Error, Result};
@@ -226,7 +228,11 @@ fn split(model: &dyn Model, t: f64, p: f64, z: &[f64], lnk: &mut [f64]) -> Resul
     if !(e.beta > 0.0 && e.beta < 1.0) {
         return Err(not_converged(its, e.residual));
     }
-    newton(model, t, p, z, &e, its)
+    if n <= SMALL_COMPONENTS {
+        newton::<{ SMALL_COMPONENTS * SMALL_COMPONENTS }>(model, t, p, z, &e, its)
+    } else {
+        newton::<{ MAX_COMPONENTS * MAX_COMPONENTS }>(model, t, p, z, &e, its)
+    }
 }
 
 /// G/RT of the split and the fugacity residual, from mole numbers v (vapour) and l (liquid).
@@ -273,7 +279,9 @@ fn point(
     })
 }
 
-fn newton(
+/// Newton's method on the vapour mole numbers; `NN` >= n^2 is the size of the matrix work
+/// arrays.
+fn newton<const NN: usize>(
     model: &dyn Model,
     t: f64,
     p: f64,
@@ -304,9 +312,9 @@ fn newton(
     let mut lpv = [0.0; MAX_COMPONENTS];
     let mut lpl = [0.0; MAX_COMPONENTS];
     let mut gv = [0.0; MAX_COMPONENTS];
-    let mut jv = [0.0; MAX_COMPONENTS * MAX_COMPONENTS];
-    let mut jl = [0.0; MAX_COMPONENTS * MAX_COMPONENTS];
-    let mut a = [0.0; MAX_COMPONENTS * MAX_COMPONENTS];
+    let mut jv = [0.0; NN];
+    let mut jl = [0.0; NN];
+    let mut a = [0.0; NN];
     let mut b = [0.0; MAX_COMPONENTS];
     let mut vt = [0.0; MAX_COMPONENTS];
     let mut lt = [0.0; MAX_COMPONENTS];
