@@ -65,8 +65,8 @@ const DENSITY_UNITS: &str = "a number with kg/m3, g/cm3, g/L, lb/ft3 (mass) or m
 kmol/m3, lbmol/ft3 (molar), for example \"50 kg/m3\"";
 const VOLUME_UNITS: &str = "a number with m3, L, cm3, ft3 or USgal, for example \"1 m3\"";
 
-/// Splits "12.5 kPa" into (12.5, "kPa"). The number must be finite.
-fn split(
+/// Splits "12.5 kPa" into (12.5, "kPa"). The number must be finite and the unit present.
+pub fn split(
     input: &str,
     quantity: &'static str,
     accepted: &'static str,
@@ -351,84 +351,6 @@ pub fn volume(input: &str) -> Result<f64, UnitError> {
     Ok(m3)
 }
 
-const ENTHALPY_UNITS: &str =
-    "a number with J/kg, kJ/kg, J/mol or kJ/mol, for example \"2800 kJ/kg\"";
-const ENTROPY_UNITS: &str = "a number with J/(kg K), kJ/(kg K), J/(mol K) or kJ/(mol K) \
-(also written kJ/kg/K), for example \"6.5 kJ/(kg K)\"";
-
-/// A specific or molar quantity as entered (enthalpy, entropy).
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub enum Specific {
-    /// Per kilogram.
-    PerMass(f64),
-    /// Per mole.
-    PerMole(f64),
-}
-
-impl Specific {
-    /// The molar value for a fluid of molar mass `m` (kg/mol).
-    pub fn molar(self, m: f64) -> f64 {
-        match self {
-            Specific::PerMass(v) => v * m,
-            Specific::PerMole(v) => v,
-        }
-    }
-}
-
-fn specific(
-    input: &str,
-    quantity: &'static str,
-    accepted: &'static str,
-    per_kelvin: bool,
-) -> Result<Specific, UnitError> {
-    let (v, unit) = split(input, quantity, accepted)?;
-    let mut u: String = unit
-        .chars()
-        .filter(|c| !c.is_whitespace() && *c != '(' && *c != ')' && *c != '.' && *c != '*')
-        .collect::<String>()
-        .to_ascii_lowercase();
-    if per_kelvin {
-        // "kJ/(kg K)", "kJ/kgK", "kJ/kg/K" all end in "k" after the cleaning above.
-        match u.strip_suffix("/k").or_else(|| u.strip_suffix('k')) {
-            Some(base) => u = base.to_string(),
-            None => {
-                return Err(UnitError {
-                    input: input.to_string(),
-                    quantity,
-                    problem: format!("unknown unit \"{unit}\""),
-                    accepted,
-                })
-            }
-        }
-    }
-    let value = match u.as_str() {
-        "j/kg" => Specific::PerMass(v),
-        "kj/kg" => Specific::PerMass(v * 1e3),
-        "j/mol" => Specific::PerMole(v),
-        "kj/mol" | "j/mmol" => Specific::PerMole(v * 1e3),
-        "kj/kmol" => Specific::PerMole(v),
-        _ => {
-            return Err(UnitError {
-                input: input.to_string(),
-                quantity,
-                problem: format!("unknown unit \"{unit}\""),
-                accepted,
-            })
-        }
-    };
-    Ok(value)
-}
-
-/// Reads an enthalpy (any sign; the zero is the model's).
-pub fn enthalpy(input: &str) -> Result<Specific, UnitError> {
-    specific(input, "enthalpy", ENTHALPY_UNITS, false)
-}
-
-/// Reads an entropy (any sign; the zero is the model's).
-pub fn entropy(input: &str) -> Result<Specific, UnitError> {
-    specific(input, "entropy", ENTROPY_UNITS, true)
-}
-
 /// Reads a vapour quality: a fraction from 0 to 1, or a percentage with %.
 pub fn quality(input: &str) -> Result<f64, UnitError> {
     let err = |problem: String| UnitError {
@@ -526,15 +448,9 @@ mod tests {
     }
 
     #[test]
-    fn enthalpies_entropies_and_qualities() {
-        assert_eq!(enthalpy("2800 kJ/kg").unwrap(), Specific::PerMass(2.8e6));
-        assert_eq!(enthalpy("-5 kJ/mol").unwrap(), Specific::PerMole(-5e3));
-        assert_eq!(entropy("6.5 kJ/(kg K)").unwrap(), Specific::PerMass(6.5e3));
-        assert_eq!(entropy("6.5 kJ/kg/K").unwrap(), Specific::PerMass(6.5e3));
-        assert_eq!(entropy("100 J/(mol K)").unwrap(), Specific::PerMole(100.0));
-        assert!(entropy("6.5 kJ/kg").is_err());
-        assert!(enthalpy("6.5 kJ").is_err());
+    fn qualities() {
         assert!((quality("25%").unwrap() - 0.25).abs() < 1e-15);
+        assert!((quality("0.4").unwrap() - 0.4).abs() < 1e-15);
         assert!(quality("1.2").is_err());
         assert!(quality("abc").is_err());
     }

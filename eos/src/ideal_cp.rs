@@ -141,6 +141,26 @@ impl IdealGasCp {
     }
 }
 
+/// Mole-fraction average of the components' cp0/R, h0/R and s0/R at T (no mixing term).
+pub fn mixture_values<'a>(
+    cps: impl IntoIterator<Item = &'a IdealGasCp>,
+    x: &[f64],
+    t: f64,
+) -> IdealGasValues {
+    let mut sum = IdealGasValues {
+        cp_r: 0.0,
+        h_r: 0.0,
+        s_r: 0.0,
+    };
+    for (cp, &xi) in cps.into_iter().zip(x) {
+        let v = cp.values(t);
+        sum.cp_r += xi * v.cp_r;
+        sum.h_r += xi * v.h_r;
+        sum.s_r += xi * v.s_r;
+    }
+    sum
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

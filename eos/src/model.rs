@@ -102,18 +102,7 @@ pub trait Model: Send + Sync {
     /// entropy; that is added by the property layer). Default: mole-fraction average of the
     /// components' heat capacities.
     fn ideal_gas(&self, t: f64, x: &[f64]) -> IdealGasValues {
-        let mut sum = IdealGasValues {
-            cp_r: 0.0,
-            h_r: 0.0,
-            s_r: 0.0,
-        };
-        for (c, &xi) in self.components().iter().zip(x) {
-            let v = c.cp.values(t);
-            sum.cp_r += xi * v.cp_r;
-            sum.h_r += xi * v.h_r;
-            sum.s_r += xi * v.s_r;
-        }
-        sum
+        crate::ideal_cp::mixture_values(self.components().iter().map(|c| &c.cp), x, t)
     }
 
     /// A pseudo-critical point (T, P) of composition x used to name phases of single-phase

@@ -31,37 +31,17 @@ pub fn temperature(text: &str) -> Result<f64, CliError> {
 }
 
 /// Splits "12 kg/h" into the number and the unit; the message names the option.
-fn number_unit(text: &str, option: &str, accepted: &str) -> Result<(f64, String), CliError> {
-    let s = text.trim();
-    let end = s
-        .char_indices()
-        .find(|&(i, c)| {
-            !(c.is_ascii_digit()
-                || c == '.'
-                || c == '+'
-                || c == '-'
-                || ((c == 'e' || c == 'E')
-                    && s[i + 1..]
-                        .chars()
-                        .next()
-                        .is_some_and(|n| n.is_ascii_digit() || n == '-' || n == '+')))
-        })
-        .map_or(s.len(), |(i, _)| i);
-    let (num, unit) = s.split_at(end);
-    let bad = |what: &str| {
-        CliError::BadInput(format!("{option} \"{text}\": {what}; accepted: {accepted}"))
-    };
-    let v: f64 = num
-        .parse()
-        .map_err(|_| bad("it does not start with a number"))?;
-    if !v.is_finite() {
-        return Err(bad("the number is not finite"));
-    }
-    let unit = unit.trim();
-    if unit.is_empty() {
-        return Err(bad("the unit is missing"));
-    }
-    Ok((v, unit.to_string()))
+fn number_unit(
+    text: &str,
+    option: &str,
+    accepted: &'static str,
+) -> Result<(f64, String), CliError> {
+    units::split(text, "quantity", accepted).map_err(|e| {
+        CliError::BadInput(format!(
+            "{option} \"{text}\": {}; accepted: {accepted}",
+            e.problem
+        ))
+    })
 }
 
 const MASS_UNITS: &str = "a number with kg, g, t or lb, for example \"120 kg\"";

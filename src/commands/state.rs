@@ -72,8 +72,19 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
         .transpose()?
         .map(|d: Density| d.molar(feed.molar_mass()));
     let m = feed.molar_mass();
-    let h = args.enthalpy.as_deref().map(units::enthalpy).transpose()?;
-    let s_in = args.entropy.as_deref().map(units::entropy).transpose()?;
+    let energy = |e: crate::energy_units::EnergyUnitError| CliError::BadInput(e.to_string());
+    let h = args
+        .enthalpy
+        .as_deref()
+        .map(crate::energy_units::enthalpy)
+        .transpose()
+        .map_err(energy)?;
+    let s_in = args
+        .entropy
+        .as_deref()
+        .map(crate::energy_units::entropy)
+        .transpose()
+        .map_err(energy)?;
     let x_in = args.quality.as_deref().map(units::quality).transpose()?;
     let given = match (t, p.map(|p| p.0), rho, h, s_in, x_in) {
         (Some(t), Some(p), None, None, None, None) => Given::Tp(t, p),

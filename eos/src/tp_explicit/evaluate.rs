@@ -30,18 +30,7 @@ fn ideal_part(
     own: Option<IdealGasValues>,
 ) -> IdealGasValues {
     own.unwrap_or_else(|| {
-        let mut sum = IdealGasValues {
-            cp_r: 0.0,
-            h_r: 0.0,
-            s_r: 0.0,
-        };
-        for (c, &xi) in model.components().iter().zip(x) {
-            let v = c.cp.values(t);
-            sum.cp_r += xi * v.cp_r;
-            sum.h_r += xi * v.h_r;
-            sum.s_r += xi * v.s_r;
-        }
-        sum
+        crate::ideal_cp::mixture_values(model.components().iter().map(|c| &c.cp), x, t)
     })
 }
 
