@@ -171,7 +171,11 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
     }
     let mut source = Source::open(&args.file, args.sheet.as_deref())?;
     let headers = source.headers().to_vec();
-    let mut map: Mapping = audit_row::map_headers(&headers, &overrides(args.columns.as_deref())?)?;
+    let mut map: Mapping = audit_row::map_headers(&headers, &overrides(args.columns.as_deref())?)
+        .map_err(|e| match e {
+        CliError::BadInput(m) => CliError::BadInput(format!("{}: {m}", args.file.display())),
+        other => other,
+    })?;
     map.prepare_units(ambient);
     let defaults = Defaults {
         quantity,
