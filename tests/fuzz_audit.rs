@@ -4,6 +4,7 @@
 //! - hostile files: a 4 MB cell, 5,000 columns, binary garbage, unbalanced quotes, a header
 //!   only, an empty file, a byte-order mark with CRLF line ends; .xlsx files that are not
 //!   zip archives, truncated archives and a zip with no workbook in it.
+//!
 //! The property: no panic, no hang; a file that can be read is audited with every row counted
 //! (audited, or bad with its row and column); one that cannot is refused with exit code 2 and
 //! a message naming it; the input is never modified.
