@@ -251,10 +251,13 @@ pub const ALL: &[ModelInfo] = &[
         good_at: &[
             "water and steam for industrial calculation, fast and consistent with \
                     IAPWS-95 within the release's tolerances (IAPWS R7-97)",
+            "density within 0.057 % of IAPWS-95 away from the critical point, enthalpy \
+                    within 3.9 kJ/kg (measured over its range in eos/tests/if97_vs_iapws95.rs)",
         ],
         poor_at: &[
             "anything but pure water; the immediate critical point (region 3 is less \
-                    accurate there, IAPWS R7-97)",
+                    accurate there, IAPWS R7-97; up to 0.86 % in density from IAPWS-95 within \
+                    5 % of Tc, measured)",
         ],
     },
     ModelInfo {

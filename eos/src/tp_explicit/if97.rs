@@ -4,6 +4,11 @@
 //! (ideal gas at T_REF, P_REF). The molar mass and gas constant are the release's
 //! (M R_IF97 = 8.31448 J/(mol K) against the CODATA 8.314463): the entropy carries a
 //! difference of 2e-5 ln(P/P_REF) J/(mol K) from that, far below the formulation's accuracy.
+//!
+//! Departure from IAPWS-95 over IF97's range, measured on a 41 x 41 grid from 273.16 K to
+//! 1073.15 K and 1 kPa to 100 MPa (eos/tests/if97_vs_iapws95.rs): density within 0.057 %
+//! away from the critical point and within 0.86 % within 5 % of Tc and 30 % of Pc; enthalpy
+//! within 3.9 kJ/kg (the largest near the critical point).
 
 use super::{TpModel, TpPoint};
 use crate::component::Component;
