@@ -1,0 +1,56 @@
+//! Lee-Kesler Z against the reference equations of state, as an independent check of the
+//! simple-fluid part (argon, omega close to zero, against Tegeler, Span & Wagner 1999) and of
+//! the acentric interpolation (carbon dioxide, omega = 0.225, against Span & Wagner 1996;
+//! methane, against Setzmann & Wagner 1991). Lee-Kesler is a two-reference-fluid correlation;
+//! Poling, Prausnitz & O'Connell, *The Properties of Gases and Liquids*, 5th ed. (2001), ch. 4
+//! (from memory) give its errors for non-polar gases as typically within 1-2 % outside the
+//! critical region; the test allows 2 % there for the simple non-polar fluids (argon, methane)
+//! and prints the figures (--nocapture). Carbon dioxide (quadrupolar) is printed, not held to
+//! that claim: it measured 2.5 % at Tr = 2, Pr = 5 when this test was written.
+
+use eos::state::{RootChoice, State};
+use eos::tp_explicit::{self, LeeKeslerModel};
+use eos::Component;
+
+/// (name, Tc K, Pc Pa, omega, M kg/mol): from memory of Poling et al. (2001) App. A.
+const FLUIDS: [(&str, f64, f64, f64, f64); 3] = [
+    ("argon", 150.86, 48.98e5, -0.002, 0.039948),
+    ("methane", 190.56, 45.99e5, 0.011, 0.016043),
+    ("carbon dioxide", 304.12, 73.74e5, 0.225, 0.044010),
+];
+
+#[test]
+fn lee_kesler_z_against_reference_equations() {
+    for (name, tc, pc, omega, m) in FLUIDS {
+        let c = Component::new(name, m, tc, pc, omega);
+        let lk = LeeKeslerModel::new(&[c], None).unwrap();
+        let reference = eos::helmholtz::reference_for(name).unwrap();
+        let mut worst = (0.0f64, 0.0, 0.0);
+        let mut n = 0;
+        for tr in [1.2, 1.5, 2.0, 3.0] {
+            for pr in [0.2, 0.5, 1.0, 2.0, 5.0] {
+                let (t, p) = (tr * tc, pr * pc);
+                let z_lk = tp_explicit::state_tp(&lk, t, p, &[1.0], RootChoice::LowestGibbs)
+                    .unwrap()
+                    .props
+                    .z;
+                let z_ref = State::at_tp(&reference, t, p, &[1.0], RootChoice::LowestGibbs)
+                    .unwrap()
+                    .props
+                    .z;
+                let d = 100.0 * (z_lk / z_ref - 1.0).abs();
+                n += 1;
+                if d > worst.0 {
+                    worst = (d, tr, pr);
+                }
+            }
+        }
+        println!(
+            "{name}: Lee-Kesler vs reference over {n} states, max |dZ/Z| {:.3} % at Tr {}, Pr {}",
+            worst.0, worst.1, worst.2
+        );
+        if name != "carbon dioxide" {
+            assert!(worst.0 < 2.0, "{name}: {worst:?}");
+        }
+    }
+}
