@@ -54,3 +54,26 @@ fn lee_kesler_z_against_reference_equations() {
         }
     }
 }
+
+#[test]
+fn lee_kesler_reproduces_a_textbook_worked_example() {
+    // n-butane at 510 K and 25 bar: Tr = 1.200, Pr = 0.659; the Lee-Kesler tables give
+    // Z0 = 0.865 and Z1 = 0.038, Z = 0.873 (from memory of Smith, Van Ness & Abbott,
+    // *Introduction to Chemical Engineering Thermodynamics*, 7th ed. (2005), Example 3.12,
+    // values read from their Appendix E tables to three decimals; hence the 1.5e-3 allowance).
+    let (tc, pc) = (425.1, 37.96e5);
+    let z_at = |omega: f64| {
+        let c = Component::new("test", 0.058, tc, pc, omega);
+        let m = LeeKeslerModel::new(&[c], None).unwrap();
+        tp_explicit::state_tp(&m, 1.2 * tc, 0.659 * pc, &[1.0], RootChoice::Vapor)
+            .unwrap()
+            .props
+            .z
+    };
+    let omega_r = 0.3978;
+    let z0 = z_at(0.0);
+    let z1 = (z_at(omega_r) - z0) / omega_r;
+    assert!((z0 - 0.865).abs() < 1.5e-3, "Z0 = {z0}");
+    assert!((z1 - 0.038).abs() < 1.5e-3, "Z1 = {z1}");
+    assert!((z_at(0.200) - 0.873).abs() < 1.5e-3);
+}
