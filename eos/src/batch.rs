@@ -4,18 +4,32 @@
 //! Everything that depends only on the composition is folded once into a [`ZBatch`]:
 //! x_i x_j (1 - k_ij) sqrt(a_ci a_cj) for the attraction term and b_mix. For the Soave-type
 //! alpha functions (SRK, PR 1976 and 1978) sqrt(a_i(T)) = sqrt(a_ci)(1 + m_i) -
-//! sqrt(a_ci) m_i sqrt(T/Tc_i) is linear in sqrt(T), so each state costs one square root, n
-//! multiply-adds for the sqrt(a_i) and n(n+1)/2 for the quadratic mixing sum: a(T) is
-//! recomputed in full for every state.
+//! sqrt(a_ci) m_i sqrt(T/Tc_i) is linear in sqrt(T), so a(T) costs one square root, n
+//! multiply-adds for the sqrt(a_i) and n(n+1)/2 for the quadratic mixing sum,
+//!
+//! a(T) = sum_i sum_{j >= i} w_ij s_i(T) s_j(T),  s_i(T) = sqrt(a_i(T)),
+//! w_ij = (2 - delta_ij) x_i x_j (1 - k_ij).
+//!
+//! Two entry points share one kernel:
+//! - per state, [`ZBatch::z_tp`]: any list of (T, P) pairs; a(T) is recomputed for every state;
+//! - temperature repeated, [`ZBatch::z_isotherm`] and [`ZBatch::z_grid`]: a(T) is computed once
+//!   per temperature and reused for every pressure of that isotherm. For a 10-component
+//!   mixture that removes about two thirds of the per-state work.
+//!
+//! Both evaluate a(T) in the same order of operations and hand every state to the same lane
+//! code (a short final block is padded rather than sent to a scalar path), so a state's Z is
+//! the same bit for bit whichever entry point, block position or thread computed it.
 //!
 //! The cubic in Z is not solved in closed form here: every physical root satisfies
 //! B < Z <= 1 + B (the attractive term is positive for v > b, so P <= RT/(v - b)), and the
 //! cubic is increasing and convex to the right of its inflection point, so Newton's method
-//! started at 1 + B descends monotonically onto the largest root. The other two roots, where
-//! they exist, come from the deflated quadratic. Whenever that path cannot be trusted (an
-//! iterate falls left of the inflection point, a vanishing slope, the iteration cap near a
-//! double root), the state falls back to the closed form of
-//! [`crate::cubic::roots::solve_cubic`]; both give the same roots to rounding.
+//! started at 1 + B descends monotonically onto the largest root. Each lane stops (keeps its
+//! value) once its Newton step falls below 1e-13 Z, so what a lane returns depends on its own
+//! state only; a block stops when all its lanes have. The other two roots, where they exist,
+//! come from the deflated quadratic. Whenever that path cannot be trusted (an iterate falls
+//! left of the inflection point, a vanishing slope, the step cap near a double root), the
+//! state falls back to the closed form of [`crate::cubic::roots::solve_cubic`]; both give the
+//! same roots to rounding.
 
 use crate::composition;
 use crate::constants::R;
@@ -33,12 +47,18 @@ pub enum BatchRoot {
     LowestGibbs,
 }
 
-/// States evaluated together in [`ZBatch::z_tp`].
+/// States evaluated together by the lane kernel.
 const LANES: usize = 8;
 
-/// Newton steps taken by every lane before its result is checked; from 1 + B the descent
-/// reaches machine precision in five to seven steps for states away from a spinodal.
+/// Most Newton steps a lane takes before its result is checked; from 1 + B the descent
+/// reaches machine precision in three to seven steps for states away from a spinodal.
 const NEWTON_STEPS: usize = 8;
+
+/// A lane has converged when its Newton step is below this fraction of Z.
+const STEP_TOL: f64 = 1e-13;
+
+/// States per task in the parallel entry points (whole lane blocks).
+const CHUNK: usize = LANES * 2048;
 
 /// Largest root of Z^3 + c2 Z^2 + c1 Z + c0 by Newton's method from `start`, an upper bound
 /// of every root; `None` where the monotone descent cannot be guaranteed.
@@ -95,6 +115,22 @@ fn smallest_other_root(c2: f64, c1: f64, c0: f64, zl: f64) -> Option<f64> {
         z -= f / df;
     }
     Some(z)
+}
+
+/// Refuses slices of unequal length and states that are not finite and positive.
+fn check_states(t: &[f64], p: &[f64]) -> Result<()> {
+    if let Some(bad) = t.iter().chain(p).find(|v| !(v.is_finite() && **v > 0.0)) {
+        return Err(Error::invalid(
+            "state in batch",
+            *bad,
+            "finite, positive temperatures (K) and pressures (Pa)",
+        ));
+    }
+    Ok(())
+}
+
+fn length_error(got: usize, want: &'static str) -> Error {
+    Error::invalid("batch length", got as f64, want)
 }
 
 /// A cubic model bound to one composition, ready to evaluate Z at many states.
@@ -156,22 +192,71 @@ impl ZBatch {
         })
     }
 
-    /// a_mix at T.
+    /// Number of components.
+    pub fn len(&self) -> usize {
+        self.n
+    }
+
+    /// Always false: a batch has at least one component.
+    pub fn is_empty(&self) -> bool {
+        self.n == 0
+    }
+
+    /// a_mix at T, in the order of operations of [`ZBatch::a_lanes`].
     #[inline]
-    fn a_mix(&self, t: f64, s: &mut [f64]) -> f64 {
+    fn a_mix(&self, t: f64) -> f64 {
         let st = t.sqrt();
+        if self.n == 1 {
+            let si = self.c0[0] + self.c1[0] * st;
+            return self.w[0] * si * si;
+        }
+        let mut s = [0.0; crate::cubic::MAX_COMPONENTS];
         for ((si, c0), c1) in s.iter_mut().zip(&self.c0).zip(&self.c1) {
             *si = c0 + c1 * st;
         }
         let mut a = 0.0;
         let mut k = 0;
         for i in 0..self.n {
-            let mut row = 0.0;
-            for sj in &s[i..self.n] {
-                row += self.w[k] * sj;
+            for j in i..self.n {
+                a += self.w[k] * s[i] * s[j];
                 k += 1;
             }
-            a += s[i] * row;
+        }
+        a
+    }
+
+    /// a_mix at LANES temperatures; `s` is scratch of n rows.
+    // Lane loops index several arrays by the same lane number; iterator chains would hide
+    // that structure from the reader and from the vectoriser alike.
+    #[allow(clippy::needless_range_loop)]
+    #[inline]
+    fn a_lanes(&self, t: &[f64; LANES], s: &mut [[f64; LANES]]) -> [f64; LANES] {
+        let mut st = [0.0; LANES];
+        for l in 0..LANES {
+            st[l] = t[l].sqrt();
+        }
+        let mut a = [0.0; LANES];
+        if self.n == 1 {
+            for l in 0..LANES {
+                let si = self.c0[0] + self.c1[0] * st[l];
+                a[l] = self.w[0] * si * si;
+            }
+            return a;
+        }
+        for ((row, c0), c1) in s.iter_mut().zip(&self.c0).zip(&self.c1) {
+            for l in 0..LANES {
+                row[l] = c0 + c1 * st[l];
+            }
+        }
+        let mut k = 0;
+        for i in 0..self.n {
+            for j in i..self.n {
+                let w = self.w[k];
+                k += 1;
+                for l in 0..LANES {
+                    a[l] += w * s[i][l] * s[j][l];
+                }
+            }
         }
         a
     }
@@ -187,10 +272,21 @@ impl ZBatch {
         z - 1.0 - (z - bb).ln() - conf
     }
 
-    /// Z of one state.
+    /// The root `root` asks for, given the largest root `zl`.
     #[inline]
-    fn z_one(&self, t: f64, p: f64, root: BatchRoot, s: &mut [f64]) -> f64 {
-        let a = self.a_mix(t, s);
+    fn choose(&self, root: BatchRoot, zl: f64, zs: Option<f64>, aa: f64, bb: f64) -> f64 {
+        match (root, zs) {
+            (BatchRoot::LowestGibbs, Some(zs))
+                if zs > bb && self.g_res(zs, aa, bb) < self.g_res(zl, aa, bb) =>
+            {
+                zs
+            }
+            _ => zl,
+        }
+    }
+
+    /// Z of one state from its a(T), by the scalar path (the fallback of the lane kernel).
+    fn z_scalar(&self, a: f64, t: f64, p: f64, root: BatchRoot) -> f64 {
         let rt = R * t;
         let aa = a * p / (rt * rt);
         let bb = self.b * p / rt;
@@ -206,102 +302,21 @@ impl ZBatch {
                 (r.largest(), (zs < r.largest()).then_some(zs))
             }
         };
-        match (root, zs) {
-            (BatchRoot::LowestGibbs, Some(zs))
-                if zs > bb && self.g_res(zs, aa, bb) < self.g_res(zl, aa, bb) =>
-            {
-                zs
-            }
-            _ => zl,
-        }
+        self.choose(root, zl, zs, aa, bb)
     }
 
-    /// Z at each (t[k], p[k]) into `out[k]`. The slices must have equal lengths; every T and
-    /// P must be finite and positive. States are independent, so any split of the slices
-    /// (for example across threads) gives identical results.
-    pub fn z_tp(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
-        if t.len() != p.len() || t.len() != out.len() {
-            return Err(Error::invalid(
-                "batch length",
-                t.len() as f64,
-                "equal lengths of temperatures, pressures and output",
-            ));
-        }
-        if let Some(bad) = t.iter().chain(p).find(|v| !(v.is_finite() && **v > 0.0)) {
-            return Err(Error::invalid(
-                "state in batch",
-                *bad,
-                "finite, positive temperatures (K) and pressures (Pa)",
-            ));
-        }
-        let mut tc = t.chunks_exact(LANES);
-        let mut pc = p.chunks_exact(LANES);
-        let mut oc = out.chunks_exact_mut(LANES);
-        for ((tb, pb), ob) in (&mut tc).zip(&mut pc).zip(&mut oc) {
-            self.block(tb, pb, ob, root);
-        }
-        let mut s = [0.0; crate::cubic::MAX_COMPONENTS];
-        for ((&tk, &pk), o) in tc
-            .remainder()
-            .iter()
-            .zip(pc.remainder())
-            .zip(oc.into_remainder())
-        {
-            *o = self.z_one(tk, pk, root, &mut s[..self.n]);
-        }
-        Ok(())
-    }
-
-    /// Like [`ZBatch::z_tp`], split across all cores (rayon) in chunks of whole lane blocks.
-    /// Every state is computed exactly as in the single-threaded call, so the results are
-    /// identical, in the same order.
-    pub fn z_tp_par(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
-        use rayon::prelude::*;
-        if t.len() != p.len() || t.len() != out.len() {
-            return self.z_tp(t, p, root, out);
-        }
-        const CHUNK: usize = LANES * 2048;
-        out.par_chunks_mut(CHUNK)
-            .zip(t.par_chunks(CHUNK).zip(p.par_chunks(CHUNK)))
-            .try_for_each(|(o, (tc, pc))| self.z_tp(tc, pc, root, o))
-    }
-
-    /// Z of LANES states at once: every loop runs across the lanes, so the compiler can keep
-    /// the lanes in vector registers. Lanes whose Newton descent is not certified fall back
-    /// to the scalar path.
-    // Lane loops index several arrays by the same lane number; iterator chains would hide
-    // that structure from the reader and from the vectoriser alike.
+    /// Z of LANES states from their a(T), T and P. Every loop runs across the lanes, so the
+    /// compiler can keep the lanes in vector registers. Lanes whose Newton descent is not
+    /// certified fall back to the scalar path.
     #[allow(clippy::needless_range_loop)]
     #[inline]
-    fn block(&self, t: &[f64], p: &[f64], out: &mut [f64], root: BatchRoot) {
-        let mut st = [0.0; LANES];
-        for l in 0..LANES {
-            st[l] = t[l].sqrt();
-        }
-        let mut a = [0.0; LANES];
-        if self.n == 1 {
-            for l in 0..LANES {
-                let si = self.c0[0] + self.c1[0] * st[l];
-                a[l] = self.w[0] * si * si;
-            }
-        } else {
-            let mut s = [[0.0; LANES]; crate::cubic::MAX_COMPONENTS];
-            for i in 0..self.n {
-                for l in 0..LANES {
-                    s[i][l] = self.c0[i] + self.c1[i] * st[l];
-                }
-            }
-            let mut k = 0;
-            for i in 0..self.n {
-                for j in i..self.n {
-                    let w = self.w[k];
-                    k += 1;
-                    for l in 0..LANES {
-                        a[l] += w * s[i][l] * s[j][l];
-                    }
-                }
-            }
-        }
+    fn lanes(
+        &self,
+        a: &[f64; LANES],
+        t: &[f64; LANES],
+        p: &[f64; LANES],
+        root: BatchRoot,
+    ) -> [f64; LANES] {
         let (u, w) = (self.d1 + self.d2, self.d1 * self.d2);
         let (mut aa, mut bb) = ([0.0; LANES], [0.0; LANES]);
         let (mut c2, mut c1, mut c0) = ([0.0; LANES], [0.0; LANES], [0.0; LANES]);
@@ -315,40 +330,173 @@ impl ZBatch {
             c0[l] = -(aa[l] * bb[l] + w * bb[l] * bb[l] + w * bb[l] * bb[l] * bb[l]);
             z[l] = 1.0 + bb[l];
         }
+        // ok: the descent stayed right of the inflection point with a positive slope;
+        // done: the lane's last step was below STEP_TOL Z and its value is frozen.
         let mut ok = [true; LANES];
-        let mut step = [0.0; LANES];
+        let mut done = [false; LANES];
         for _ in 0..NEWTON_STEPS {
             for l in 0..LANES {
                 let zl = z[l];
                 let f = ((zl + c2[l]) * zl + c1[l]) * zl + c0[l];
                 let df = (3.0 * zl + 2.0 * c2[l]) * zl + c1[l];
-                step[l] = f / df;
-                z[l] = zl - step[l];
-                ok[l] &= df > 0.0 && 3.0 * z[l] > -c2[l];
+                let step = f / df;
+                let zn = zl - step;
+                let live = !done[l];
+                ok[l] &= done[l] | ((df > 0.0) & (3.0 * zn > -c2[l]));
+                done[l] |= step.abs() <= STEP_TOL * zn;
+                z[l] = if live { zn } else { zl };
+            }
+            if done.iter().all(|d| *d) {
+                break;
             }
         }
+        let mut out = [0.0; LANES];
         for l in 0..LANES {
-            let certified = ok[l] && step[l].abs() <= 1e-13 * z[l];
-            out[l] = if !certified {
-                let mut s = [0.0; crate::cubic::MAX_COMPONENTS];
-                self.z_one(t[l], p[l], root, &mut s[..self.n])
+            out[l] = if !(ok[l] && done[l]) {
+                self.z_scalar(a[l], t[l], p[l], root)
             } else {
-                match root {
-                    BatchRoot::Largest => z[l],
-                    BatchRoot::LowestGibbs => {
-                        match smallest_other_root(c2[l], c1[l], c0[l], z[l]) {
-                            Some(zs)
-                                if zs > bb[l]
-                                    && self.g_res(zs, aa[l], bb[l])
-                                        < self.g_res(z[l], aa[l], bb[l]) =>
-                            {
-                                zs
-                            }
-                            _ => z[l],
-                        }
-                    }
-                }
+                let zs = match root {
+                    BatchRoot::Largest => None,
+                    BatchRoot::LowestGibbs => smallest_other_root(c2[l], c1[l], c0[l], z[l]),
+                };
+                self.choose(root, z[l], zs, aa[l], bb[l])
             };
         }
+        out
+    }
+
+    /// Z at each (t[k], p[k]) into `out[k]`. The slices must have equal lengths; every T and
+    /// P must be finite and positive. States are independent and every one goes through the
+    /// same arithmetic, so any split of the slices (for example across threads) gives
+    /// identical results.
+    pub fn z_tp(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        if t.len() != p.len() || t.len() != out.len() {
+            return Err(length_error(
+                t.len(),
+                "equal lengths of temperatures, pressures and output",
+            ));
+        }
+        check_states(t, p)?;
+        self.z_tp_unchecked(t, p, root, out);
+        Ok(())
+    }
+
+    fn z_tp_unchecked(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        // Scratch for the sqrt(a_i) of a block: one allocation per call, none per state.
+        let mut s = vec![[0.0; LANES]; if self.n == 1 { 0 } else { self.n }];
+        let mut tc = t.chunks_exact(LANES);
+        let mut pc = p.chunks_exact(LANES);
+        let mut oc = out.chunks_exact_mut(LANES);
+        for ((tb, pb), ob) in (&mut tc).zip(&mut pc).zip(&mut oc) {
+            let tb: &[f64; LANES] = tb.try_into().unwrap_or(&[1.0; LANES]);
+            let pb: &[f64; LANES] = pb.try_into().unwrap_or(&[1.0; LANES]);
+            let a = self.a_lanes(tb, &mut s);
+            ob.copy_from_slice(&self.lanes(&a, tb, pb, root));
+        }
+        let (tr, pr, or) = (tc.remainder(), pc.remainder(), oc.into_remainder());
+        if !tr.is_empty() {
+            // Pad the short block with copies of its last state.
+            let (mut tb, mut pb) = ([tr[tr.len() - 1]; LANES], [pr[pr.len() - 1]; LANES]);
+            tb[..tr.len()].copy_from_slice(tr);
+            pb[..pr.len()].copy_from_slice(pr);
+            let a = self.a_lanes(&tb, &mut s);
+            let z = self.lanes(&a, &tb, &pb, root);
+            or.copy_from_slice(&z[..or.len()]);
+        }
+    }
+
+    /// Like [`ZBatch::z_tp`], split across all cores (rayon) in chunks of whole lane blocks.
+    /// Every state is computed exactly as in the single-threaded call, so the results are
+    /// identical, in the same order.
+    pub fn z_tp_par(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        use rayon::prelude::*;
+        if t.len() != p.len() || t.len() != out.len() {
+            return self.z_tp(t, p, root, out);
+        }
+        check_states(t, p)?;
+        out.par_chunks_mut(CHUNK)
+            .zip(t.par_chunks(CHUNK).zip(p.par_chunks(CHUNK)))
+            .for_each(|(o, (tc, pc))| self.z_tp_unchecked(tc, pc, root, o));
+        Ok(())
+    }
+
+    /// Z along one isotherm: at temperature `t` and each pressure `p[k]` into `out[k]`.
+    /// a(T) is computed once. The result is bit for bit that of [`ZBatch::z_tp`] on the same
+    /// states.
+    pub fn z_isotherm(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        if p.len() != out.len() {
+            return Err(length_error(
+                p.len(),
+                "equal lengths of pressures and output",
+            ));
+        }
+        check_states(&[t], p)?;
+        self.isotherm_unchecked(t, p, root, out);
+        Ok(())
+    }
+
+    fn isotherm_unchecked(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        let a = [self.a_mix(t); LANES];
+        let tb = [t; LANES];
+        let mut pc = p.chunks_exact(LANES);
+        let mut oc = out.chunks_exact_mut(LANES);
+        for (pb, ob) in (&mut pc).zip(&mut oc) {
+            let pb: &[f64; LANES] = pb.try_into().unwrap_or(&[1.0; LANES]);
+            ob.copy_from_slice(&self.lanes(&a, &tb, pb, root));
+        }
+        let (pr, or) = (pc.remainder(), oc.into_remainder());
+        if !pr.is_empty() {
+            let mut pb = [pr[pr.len() - 1]; LANES];
+            pb[..pr.len()].copy_from_slice(pr);
+            let z = self.lanes(&a, &tb, &pb, root);
+            or.copy_from_slice(&z[..or.len()]);
+        }
+    }
+
+    /// Z over the grid of every temperature `t[i]` with every pressure `p[j]`, into
+    /// `out[i * p.len() + j]` (temperature outer, pressure inner). a(T) is computed once per
+    /// temperature; the result is bit for bit that of [`ZBatch::z_tp`] on the flattened grid.
+    pub fn z_grid(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        self.check_grid(t, p, out)?;
+        if p.is_empty() {
+            return Ok(());
+        }
+        for (row, &ti) in out.chunks_exact_mut(p.len()).zip(t) {
+            self.isotherm_unchecked(ti, p, root, row);
+        }
+        Ok(())
+    }
+
+    /// Like [`ZBatch::z_grid`], split across all cores (rayon): isotherms are shared out, and
+    /// long isotherms are cut into chunks of whole lane blocks. The results are identical to
+    /// the single-threaded call, in the same order.
+    pub fn z_grid_par(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        use rayon::prelude::*;
+        self.check_grid(t, p, out)?;
+        if p.is_empty() {
+            return Ok(());
+        }
+        out.par_chunks_mut(p.len())
+            .zip(t.par_iter())
+            .for_each(|(row, &ti)| {
+                if row.len() <= CHUNK {
+                    self.isotherm_unchecked(ti, p, root, row);
+                } else {
+                    row.par_chunks_mut(CHUNK)
+                        .zip(p.par_chunks(CHUNK))
+                        .for_each(|(o, pc)| self.isotherm_unchecked(ti, pc, root, o));
+                }
+            });
+        Ok(())
+    }
+
+    fn check_grid(&self, t: &[f64], p: &[f64], out: &[f64]) -> Result<()> {
+        if t.len().checked_mul(p.len()) != Some(out.len()) {
+            return Err(length_error(
+                out.len(),
+                "an output of (number of temperatures) x (number of pressures)",
+            ));
+        }
+        check_states(t, p)
     }
 }
