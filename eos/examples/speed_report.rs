@@ -14,7 +14,9 @@
 //!
 //! `zfactor workload=pure kernel=per-state threads=1 states=1000000 median_s=... states_per_s=... runs=7 checksum=...`
 //!
-//! Run: `cargo run --release -p eos --example speed_report -- [--runs N]`.
+//! Run: `cargo run --release -p eos --example speed_report -- [--runs N] [--case W/K/T]`;
+//! `--case pure/isotherm/1` (workload, kernel, 1 or all threads) times that case alone, for
+//! profiling or CPU-time comparisons.
 
 #[path = "../tests/support/yardstick.rs"]
 mod yardstick;
@@ -29,6 +31,15 @@ const N: usize = 1000;
 enum Kernel {
     PerState,
     Isotherm,
+}
+
+impl Kernel {
+    fn name(self) -> &'static str {
+        match self {
+            Kernel::PerState => "per-state",
+            Kernel::Isotherm => "isotherm",
+        }
+    }
 }
 
 struct Case {
@@ -70,22 +81,41 @@ fn median(v: &[f64]) -> f64 {
     }
 }
 
-fn parse_runs() -> Result<usize, String> {
-    let args: Vec<String> = std::env::args().skip(1).collect();
-    match args.as_slice() {
-        [] => Ok(7),
-        [flag, n] if flag == "--runs" => n
-            .parse::<usize>()
-            .ok()
-            .filter(|n| *n > 0)
-            .ok_or_else(|| format!("--runs takes a positive whole number, got '{n}'")),
-        _ => Err(format!("usage: speed_report [--runs N]; got {args:?}")),
+struct Options {
+    runs: usize,
+    case: Option<String>,
+}
+
+fn parse_options() -> Result<Options, String> {
+    let mut o = Options {
+        runs: 7,
+        case: None,
+    };
+    let mut args = std::env::args().skip(1);
+    while let Some(flag) = args.next() {
+        let value = args.next().ok_or_else(|| format!("{flag} needs a value"))?;
+        match flag.as_str() {
+            "--runs" => {
+                o.runs = value
+                    .parse::<usize>()
+                    .ok()
+                    .filter(|n| *n > 0)
+                    .ok_or_else(|| format!("--runs takes a positive whole number, got '{value}'"))?
+            }
+            "--case" => o.case = Some(value),
+            _ => {
+                return Err(format!(
+                    "usage: speed_report [--runs N] [--case W/K/T]; got {flag}"
+                ))
+            }
+        }
     }
+    Ok(o)
 }
 
 fn main() {
-    let runs = match parse_runs() {
-        Ok(r) => r,
+    let (runs, only) = match parse_options() {
+        Ok(o) => (o.runs, o.case),
         Err(e) => {
             eprintln!("{e}");
             std::process::exit(2);
@@ -106,6 +136,14 @@ fn main() {
         let batch = ZBatch::new(&m, &x).expect("the yardstick's fluids are valid");
         for kernel in [Kernel::PerState, Kernel::Isotherm] {
             for parallel in [false, true] {
+                let name = format!(
+                    "{workload}/{}/{}",
+                    kernel.name(),
+                    if parallel { "all" } else { "1" }
+                );
+                if only.as_ref().is_some_and(|o| *o != name) {
+                    continue;
+                }
                 cases.push(Case {
                     workload,
                     kernel,
@@ -116,6 +154,10 @@ fn main() {
                 });
             }
         }
+    }
+    if cases.is_empty() {
+        eprintln!("no case matches; cases are W/K/T with W pure or mix10, K per-state or isotherm, T 1 or all");
+        std::process::exit(2);
     }
     let mut z = vec![0.0; g.t.len()];
     // Checksums first (this also starts rayon's thread pool before any timing).
@@ -149,10 +191,7 @@ fn main() {
     let all = rayon::current_num_threads();
     for (c, sum) in cases.iter().zip(sums) {
         let med = median(&c.times);
-        let kernel = match c.kernel {
-            Kernel::PerState => "per-state",
-            Kernel::Isotherm => "isotherm",
-        };
+        let kernel = c.kernel.name();
         println!(
             "zfactor workload={} kernel={kernel} threads={} states={} median_s={med:.6e} \
              states_per_s={:.0} runs={runs} checksum={sum:.10}",

@@ -179,3 +179,33 @@ fn bad_grids_are_refused() {
         .z_isotherm(300.0, &[1e5, 2e5], BatchRoot::Largest, &mut out[..1])
         .is_err());
 }
+
+#[test]
+fn every_kind_of_bad_state_is_refused_wherever_it_sits() {
+    // Zero, negative zero, negatives, infinities and NaN, in T or in P, in a full block or in
+    // the short tail; the smallest positive subnormal is a valid (if absurd) input.
+    let (m, x) = y::pure();
+    let b = ZBatch::new(&m, &x).unwrap();
+    let n = 37;
+    let mut out = vec![0.0; n];
+    for bad in [0.0, -0.0, -1.0, f64::INFINITY, f64::NEG_INFINITY, f64::NAN] {
+        for at in [0, 9, n - 1] {
+            let (mut t, mut p) = (vec![300.0; n], vec![1e5; n]);
+            t[at] = bad;
+            assert!(b.z_tp(&t, &p, BatchRoot::Largest, &mut out).is_err());
+            assert!(b.z_tp_par(&t, &p, BatchRoot::Largest, &mut out).is_err());
+            t[at] = 300.0;
+            p[at] = bad;
+            assert!(b.z_tp(&t, &p, BatchRoot::Largest, &mut out).is_err());
+            assert!(b
+                .z_isotherm(300.0, &p, BatchRoot::Largest, &mut out)
+                .is_err());
+        }
+    }
+    let p = vec![f64::from_bits(1); n];
+    assert!(b
+        .z_tp(&vec![300.0; n], &p, BatchRoot::Largest, &mut out)
+        .is_ok());
+    // Ideal-gas limit: Z -> 1 as P -> 0.
+    assert!(out.iter().all(|z| (z - 1.0).abs() < 1e-12));
+}
