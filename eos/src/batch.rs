@@ -60,7 +60,7 @@ const NEWTON_STEPS: usize = 12;
 const STEP_TOL: f64 = 1e-13;
 
 /// States per task in the parallel entry points (whole lane blocks).
-const CHUNK: usize = LANES * 2048;
+const CHUNK: usize = LANES * 512;
 
 /// Largest root of Z^3 + c2 Z^2 + c1 Z + c0 by Newton's method from `start`, an upper bound
 /// of every root; `None` where the monotone descent cannot be guaranteed.
