@@ -1,22 +1,28 @@
 //! Batch evaluation: Z of many (T, P) states of one cubic model and one composition, with no
 //! allocation per state.
 //!
-//! Everything that depends only on the composition is folded once into a [`ZBatch`]:
-//! x_i x_j (1 - k_ij) sqrt(a_ci a_cj) for the attraction term and b_mix. For the Soave-type
-//! alpha functions (SRK, PR 1976 and 1978) sqrt(a_i(T)) = sqrt(a_ci)(1 + m_i) -
-//! sqrt(a_ci) m_i sqrt(T/Tc_i) is linear in sqrt(T), so a(T) costs one square root, n
-//! multiply-adds for the sqrt(a_i) and n(n+1)/2 for the quadratic mixing sum,
+//! Everything that depends only on the composition is folded once into a [`ZBatch`]. For the
+//! Soave-type alpha functions (SRK, PR 1976 and 1978; van der Waals with alpha = 1)
+//! s_i(T) = sqrt(a_i(T)) = sqrt(a_ci)(1 + m_i) - sqrt(a_ci) m_i sqrt(T/Tc_i) = c0_i + c1_i sqrt(T)
+//! is linear in sqrt(T), so the van der Waals one-fluid mixing sum is a quadratic in sqrt(T):
 //!
-//! a(T) = sum_i sum_{j >= i} w_ij s_i(T) s_j(T),  s_i(T) = sqrt(a_i(T)),
-//! w_ij = (2 - delta_ij) x_i x_j (1 - k_ij).
+//! a(T) = sum_i sum_{j >= i} w_ij s_i(T) s_j(T),  w_ij = (2 - delta_ij) x_i x_j (1 - k_ij),
+//!      = q0 + q1 sqrt(T) + q2 T,
+//! q0 = sum w_ij c0_i c0_j,  q1 = sum w_ij (c0_i c1_j + c1_i c0_j),  q2 = sum w_ij c1_i c1_j.
+//!
+//! q0, q1, q2 and b_mix = sum_i x_i b_i are computed once, so a(T) costs one square root and
+//! two multiply-adds whatever the number of components (the O(n^2) mixing rule is paid once
+//! per batch, not per state). The rounding of a(T) grows with the cancellation between the
+//! three terms, to a few units in the last place at the highest reduced temperatures.
 //!
 //! Two entry points share one kernel:
-//! - per state, [`ZBatch::z_tp`]: any list of (T, P) pairs; a(T) is recomputed for every state;
-//! - temperature repeated, [`ZBatch::z_isotherm`] and [`ZBatch::z_grid`]: a(T) is computed once
-//!   per temperature and reused for every pressure of that isotherm. For a 10-component
-//!   mixture that removes about two thirds of the per-state work.
+//! - per state, [`ZBatch::z_tp`]: any list of (T, P) pairs; a(T), a/(RT)^2 and b/(RT) are
+//!   computed for every state;
+//! - temperature repeated, [`ZBatch::z_isotherm`] and [`ZBatch::z_grid`]: a/(RT)^2 and b/(RT)
+//!   are computed once per temperature (a square root and two divisions saved per state), and
+//!   A = P a/(RT)^2, B = P b/(RT) for every pressure of the isotherm.
 //!
-//! Both evaluate a(T) in the same order of operations and hand every state to the same lane
+//! Both evaluate these in the same order of operations and hand every state to the same lane
 //! code (a short final block is padded rather than sent to a scalar path), so a state's Z is
 //! the same bit for bit whichever entry point, block position or thread computed it.
 //!
@@ -25,10 +31,12 @@
 //! cubic is increasing and convex to the right of its inflection point, so Newton's method
 //! started at 1 + B descends monotonically onto the largest root. Each lane stops (keeps its
 //! value) once its Newton step falls below 1e-13 Z, so what a lane returns depends on its own
-//! state only; a block stops when all its lanes have. The other two roots, where they exist,
-//! come from the deflated quadratic. Whenever that path cannot be trusted (an iterate falls
-//! left of the inflection point, a vanishing slope, the step cap near a double root), the
-//! state falls back to the closed form of [`crate::cubic::roots::solve_cubic`]; both give the
+//! state only; a block stops when all its lanes have. The result is then certified: Z is the
+//! largest root when the slope is positive there and the quadratic left after dividing it out
+//! has no real root above it (complex roots, or a vertex at or below Z). The other two roots,
+//! where they exist, come from that quadratic. A state that is not certified (a descent that
+//! strayed onto another root, or did not settle within the step cap, as next to a double
+//! root) falls back to the closed form of [`crate::cubic::roots::solve_cubic`]; both give the
 //! same roots to rounding.
 
 use crate::composition;
@@ -172,11 +180,8 @@ fn length_error(got: usize, want: &'static str) -> Error {
 /// A cubic model bound to one composition, ready to evaluate Z at many states.
 #[derive(Debug, Clone)]
 pub struct ZBatch {
-    /// Constant and sqrt(T) parts of sqrt(a_i(T)), one per component.
-    c0: Vec<f64>,
-    c1: Vec<f64>,
-    /// Packed upper triangle of x_i x_j (1 - k_ij), with the off-diagonal terms doubled.
-    w: Vec<f64>,
+    /// a(T) = q0 + q1 sqrt(T) + q2 T (the mixing sum folded at construction).
+    q: [f64; 3],
     n: usize,
     b: f64,
     d1: f64,
@@ -209,18 +214,19 @@ impl ZBatch {
             }
         };
         let omk = model.one_minus_kij();
-        let mut w = Vec::with_capacity(n * (n + 1) / 2);
+        let mut q = [0.0; 3];
         for i in 0..n {
             for j in i..n {
                 let f = if i == j { 1.0 } else { 2.0 };
-                w.push(f * x[i] * x[j] * omk[i * n + j]);
+                let w = f * x[i] * x[j] * omk[i * n + j];
+                q[0] += w * c0[i] * c0[j];
+                q[1] += w * (c0[i] * c1[j] + c1[i] * c0[j]);
+                q[2] += w * c1[i] * c1[j];
             }
         }
         let b = x.iter().zip(model.covolumes()).map(|(x, b)| x * b).sum();
         Ok(ZBatch {
-            c0,
-            c1,
-            w,
+            q,
             n,
             b,
             d1: spec.d1,
@@ -238,74 +244,24 @@ impl ZBatch {
         self.n == 0
     }
 
-    /// a_mix at T, in the order of operations of [`ZBatch::a_lanes`].
+    /// a_mix at T: q0 + sqrt(T) (q1 + q2 sqrt(T)).
     #[inline]
     fn a_mix(&self, t: f64) -> f64 {
         let st = t.sqrt();
-        if self.n == 1 {
-            let si = self.c0[0] + self.c1[0] * st;
-            return self.w[0] * si * si;
-        }
-        let mut s = [0.0; crate::cubic::MAX_COMPONENTS];
-        for ((si, c0), c1) in s.iter_mut().zip(&self.c0).zip(&self.c1) {
-            *si = c0 + c1 * st;
-        }
-        let mut a = 0.0;
-        let mut k = 0;
-        for i in 0..self.n {
-            for j in i..self.n {
-                a += self.w[k] * s[i] * s[j];
-                k += 1;
-            }
-        }
-        a
+        self.q[0] + st * (self.q[1] + self.q[2] * st)
     }
 
-    /// a_mix at LANES temperatures; `s` is scratch of n rows.
-    // Lane loops index several arrays by the same lane number; iterator chains would hide
-    // that structure from the reader and from the vectoriser alike.
+    /// ka = a/(RT)^2 and kb = b/(RT) at LANES temperatures, in the order of operations of
+    /// [`ZBatch::a_mix`] and [`ZBatch::reduced`].
     #[allow(clippy::needless_range_loop)]
     #[inline]
-    fn a_lanes(&self, t: &[f64; LANES], s: &mut [[f64; LANES]]) -> [f64; LANES] {
-        let mut st = [0.0; LANES];
-        for l in 0..LANES {
-            st[l] = t[l].sqrt();
-        }
-        let mut a = [0.0; LANES];
-        if self.n == 1 {
-            for l in 0..LANES {
-                let si = self.c0[0] + self.c1[0] * st[l];
-                a[l] = self.w[0] * si * si;
-            }
-            return a;
-        }
-        for ((row, c0), c1) in s.iter_mut().zip(&self.c0).zip(&self.c1) {
-            for l in 0..LANES {
-                row[l] = c0 + c1 * st[l];
-            }
-        }
-        let mut k = 0;
-        for i in 0..self.n {
-            for j in i..self.n {
-                let w = self.w[k];
-                k += 1;
-                for l in 0..LANES {
-                    a[l] += w * s[i][l] * s[j][l];
-                }
-            }
-        }
-        a
-    }
-
-    /// ka = a/(RT)^2 and kb = b/(RT) at LANES temperatures, as [`ZBatch::reduced`] does.
-    #[allow(clippy::needless_range_loop)]
-    #[inline]
-    fn k_lanes(&self, t: &[f64; LANES], s: &mut [[f64; LANES]]) -> ([f64; LANES], [f64; LANES]) {
-        let a = self.a_lanes(t, s);
+    fn k_lanes(&self, t: &[f64; LANES]) -> ([f64; LANES], [f64; LANES]) {
         let (mut ka, mut kb) = ([0.0; LANES], [0.0; LANES]);
         for l in 0..LANES {
+            let st = t[l].sqrt();
+            let a = self.q[0] + st * (self.q[1] + self.q[2] * st);
             let rt = R * t[l];
-            ka[l] = a[l] / (rt * rt);
+            ka[l] = a / (rt * rt);
             kb[l] = self.b / rt;
         }
         (ka, kb)
@@ -386,12 +342,9 @@ impl ZBatch {
             c0[l] = -(aa[l] * bb[l] + w * bb[l] * bb[l] + w * bb[l] * bb[l] * bb[l]);
             z[l] = 1.0 + bb[l];
         }
-        // Lane flags as 0/1 words of the lanes' width (measured faster here than bool flags):
-        // bad: the descent left the region where it is certified (a non-positive slope, an
-        // iterate left of the inflection point); done: the last step was below STEP_TOL Z and
-        // the lane's value is frozen.
-        let mut bad = [0_u64; LANES];
-        let mut done = [0_u64; LANES];
+        // done: 1.0 once the lane's step fell below STEP_TOL Z; its value is then frozen. The
+        // flags are f64 and the loop holds no other state, so that it vectorises.
+        let mut done = [0.0_f64; LANES];
         for _ in 0..NEWTON_STEPS {
             for l in 0..LANES {
                 let zl = z[l];
@@ -399,19 +352,38 @@ impl ZBatch {
                 let df = (3.0 * zl + 2.0 * c2[l]) * zl + c1[l];
                 let step = f / df;
                 let zn = zl - step;
-                let live = 1 - done[l];
-                let certified = (df > 0.0) & (3.0 * zn > -c2[l]);
-                bad[l] |= live & u64::from(!certified);
-                done[l] |= u64::from(step.abs() <= STEP_TOL * zn);
-                z[l] = if live == 1 { zn } else { zl };
+                let d = done[l];
+                done[l] = if step.abs() <= STEP_TOL * zn { 1.0 } else { d };
+                z[l] = if d > 0.5 { zl } else { zn };
             }
-            if done.iter().all(|d| *d == 1) {
+            let mut n = 0.0;
+            for d in &done {
+                n += d;
+            }
+            if n > LANES as f64 - 0.5 {
                 break;
             }
         }
+        // Certification after the fact: z is the largest root when the slope there is positive
+        // and the quadratic left after dividing it out, Z^2 + e1 Z + e0, has no real root
+        // above z (complex roots, or its vertex -e1/2 at or below z). A descent that strayed
+        // onto another root, or did not settle, fails and goes to the closed form.
+        let mut certified = [0.0_f64; LANES];
+        for l in 0..LANES {
+            let zl = z[l];
+            let df = (3.0 * zl + 2.0 * c2[l]) * zl + c1[l];
+            let e1 = c2[l] + zl;
+            let e0 = c1[l] + zl * e1;
+            let top = (e1 * e1 < 4.0 * e0) | (-e1 <= 2.0 * zl);
+            certified[l] = if (done[l] > 0.5) & (df > 0.0) & top {
+                1.0
+            } else {
+                0.0
+            };
+        }
         let mut out = [0.0; LANES];
         for l in 0..LANES {
-            out[l] = if bad[l] == 1 || done[l] == 0 {
+            out[l] = if certified[l] < 0.5 {
                 self.z_scalar(ka[l], kb[l], p[l], root)
             } else {
                 let zs = match root {
@@ -436,34 +408,25 @@ impl ZBatch {
                 "equal lengths of temperatures, pressures and output",
             ));
         }
-        // Scratch for the sqrt(a_i) of a block: one allocation per call, none per state.
-        let mut s = vec![[0.0; LANES]; if self.n == 1 { 0 } else { self.n }];
         for ((tc, pc), oc) in t
             .chunks(PIECE)
             .zip(p.chunks(PIECE))
             .zip(out.chunks_mut(PIECE))
         {
             check_states(tc, pc)?;
-            self.z_tp_piece(tc, pc, root, oc, &mut s);
+            self.z_tp_piece(tc, pc, root, oc);
         }
         Ok(())
     }
 
-    fn z_tp_piece(
-        &self,
-        t: &[f64],
-        p: &[f64],
-        root: BatchRoot,
-        out: &mut [f64],
-        s: &mut [[f64; LANES]],
-    ) {
+    fn z_tp_piece(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
         let mut tc = t.chunks_exact(LANES);
         let mut pc = p.chunks_exact(LANES);
         let mut oc = out.chunks_exact_mut(LANES);
         for ((tb, pb), ob) in (&mut tc).zip(&mut pc).zip(&mut oc) {
             let tb: &[f64; LANES] = tb.try_into().unwrap_or(&[1.0; LANES]);
             let pb: &[f64; LANES] = pb.try_into().unwrap_or(&[1.0; LANES]);
-            let (ka, kb) = self.k_lanes(tb, s);
+            let (ka, kb) = self.k_lanes(tb);
             ob.copy_from_slice(&self.lanes(&ka, &kb, pb, root));
         }
         let (tr, pr, or) = (tc.remainder(), pc.remainder(), oc.into_remainder());
@@ -472,7 +435,7 @@ impl ZBatch {
             let (mut tb, mut pb) = ([tr[tr.len() - 1]; LANES], [pr[pr.len() - 1]; LANES]);
             tb[..tr.len()].copy_from_slice(tr);
             pb[..pr.len()].copy_from_slice(pr);
-            let (ka, kb) = self.k_lanes(&tb, s);
+            let (ka, kb) = self.k_lanes(&tb);
             let z = self.lanes(&ka, &kb, &pb, root);
             or.copy_from_slice(&z[..or.len()]);
         }
