@@ -12,9 +12,11 @@
 //! interleaved so that a change of machine load touches them alike, and the median of the
 //! runs is reported. One line per case, `key=value` separated by spaces:
 //!
-//! `zfactor workload=pure kernel=per-state threads=1 states=1000000 median_s=... states_per_s=... runs=7 checksum=...`
+//! `zfactor build=release workload=pure kernel=per-state threads=1 states=1000000 median_s=...
+//! states_per_s=... runs=7 checksum=...` (`--build LABEL` names the build in the lines).
 //!
-//! Run: `cargo run --release -p eos --example speed_report -- [--runs N] [--case W/K/T]`;
+//! Run: `cargo run --release -p eos --example speed_report -- [--runs N] [--case W/K/T]
+//! [--build LABEL]`;
 //! `--case pure/isotherm/1` (workload, kernel, 1 or all threads) times that case alone, for
 //! profiling or CPU-time comparisons.
 
@@ -84,12 +86,14 @@ fn median(v: &[f64]) -> f64 {
 struct Options {
     runs: usize,
     case: Option<String>,
+    build: String,
 }
 
 fn parse_options() -> Result<Options, String> {
     let mut o = Options {
         runs: 7,
         case: None,
+        build: "release".to_string(),
     };
     let mut args = std::env::args().skip(1);
     while let Some(flag) = args.next() {
@@ -103,9 +107,10 @@ fn parse_options() -> Result<Options, String> {
                     .ok_or_else(|| format!("--runs takes a positive whole number, got '{value}'"))?
             }
             "--case" => o.case = Some(value),
+            "--build" => o.build = value,
             _ => {
                 return Err(format!(
-                    "usage: speed_report [--runs N] [--case W/K/T]; got {flag}"
+                    "usage: speed_report [--runs N] [--case W/K/T] [--build LABEL]; got {flag}"
                 ))
             }
         }
@@ -114,8 +119,8 @@ fn parse_options() -> Result<Options, String> {
 }
 
 fn main() {
-    let (runs, only) = match parse_options() {
-        Ok(o) => (o.runs, o.case),
+    let (runs, only, build) = match parse_options() {
+        Ok(o) => (o.runs, o.case, o.build),
         Err(e) => {
             eprintln!("{e}");
             std::process::exit(2);
@@ -193,8 +198,8 @@ fn main() {
         let med = median(&c.times);
         let kernel = c.kernel.name();
         println!(
-            "zfactor workload={} kernel={kernel} threads={} states={} median_s={med:.6e} \
-             states_per_s={:.0} runs={runs} checksum={sum:.10}",
+            "zfactor build={build} workload={} kernel={kernel} threads={} states={} \
+             median_s={med:.6e} states_per_s={:.0} runs={runs} checksum={sum:.10}",
             c.workload,
             if c.parallel { all } else { 1 },
             g.t.len(),
