@@ -8,12 +8,13 @@
 //!
 //! each on one core (the plain call, no thread pool) and on all cores (`z_tp_par`,
 //! `z_grid_par`, rayon's global pool). Every case is checked against the yardstick's
-//! checksum (sum of Z, 1e-9 relative) before anything is timed; the runs of the cases are
-//! interleaved so that a change of machine load touches them alike, and the median of the
-//! runs is reported. One line per case, `key=value` separated by spaces:
+//! checksum (sum of Z, 1e-9 relative) before anything is timed; each case then has one
+//! untimed call (after 50 ms idle, reported as `cold_s`: it includes waking the pool's
+//! threads) and its timed runs back to back, of which the median is reported. One line per
+//! case, `key=value` separated by spaces:
 //!
 //! `zfactor build=release workload=pure kernel=per-state threads=1 states=1000000 median_s=...
-//! states_per_s=... runs=7 checksum=...` (`--build LABEL` names the build in the lines).
+//! states_per_s=... runs=7 cold_s=... checksum=...` (`--build LABEL` names the build).
 //!
 //! Run: `cargo run --release -p eos --example speed_report -- [--runs N] [--case W/K/T]
 //! [--build LABEL]`;
@@ -50,6 +51,7 @@ struct Case {
     parallel: bool,
     batch: ZBatch,
     want: f64,
+    cold: f64,
     times: Vec<f64>,
 }
 
@@ -155,6 +157,7 @@ fn main() {
                     parallel,
                     batch: batch.clone(),
                     want,
+                    cold: 0.0,
                     times: Vec::with_capacity(runs),
                 });
             }
@@ -182,8 +185,18 @@ fn main() {
         }
         sums.push(sum);
     }
-    for _ in 0..runs {
-        for c in &mut cases {
+    // Each case: one untimed call, then its timed runs back to back. The untimed call wakes
+    // the thread pool's workers (an idle virtual CPU can take a millisecond or more to
+    // resume), so the runs measure steady throughput; one cold call is reported apart.
+    for c in &mut cases {
+        std::thread::sleep(std::time::Duration::from_millis(50));
+        let start = Instant::now();
+        let cold = c.run(&g, &mut z);
+        c.cold = start.elapsed().as_secs_f64();
+        if cold.is_err() {
+            std::process::exit(1);
+        }
+        for _ in 0..runs {
             let start = Instant::now();
             let r = c.run(&g, &mut z);
             let dt = start.elapsed().as_secs_f64();
@@ -199,11 +212,12 @@ fn main() {
         let kernel = c.kernel.name();
         println!(
             "zfactor build={build} workload={} kernel={kernel} threads={} states={} \
-             median_s={med:.6e} states_per_s={:.0} runs={runs} checksum={sum:.10}",
+             median_s={med:.6e} states_per_s={:.0} runs={runs} cold_s={:.6e} checksum={sum:.10}",
             c.workload,
             if c.parallel { all } else { 1 },
             g.t.len(),
             g.t.len() as f64 / med,
+            c.cold,
         );
     }
 }
