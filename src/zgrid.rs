@@ -1,10 +1,10 @@
 //! Z over a whole T-P grid for one cubic model and one composition, on all cores.
 //!
-//! Each temperature row of the grid is handed to `eos::batch::ZBatch::z_tp` (lowest Gibbs
-//! energy root), rows are spread over the cores with rayon, and every state is independent of
-//! the others, so the result is identical, bit for bit and in the same order, to a
-//! single-threaded run ([`z_grid_serial`]). The batch kernel serves the members whose
-//! sqrt(alpha) is linear in sqrt(T) (vdw, srk, pr, pr78); [`batch_model`] says which ids
+//! Each temperature row of the grid is handed to `eos::batch::ZBatch::z_isotherm` (lowest
+//! Gibbs energy root; a(T) once per row), rows are spread over the cores with rayon, and every
+//! state is independent of the others, so the result is identical, bit for bit and in the same
+//! order, to a single-threaded run ([`z_grid_serial`]). The batch kernel serves the members
+//! whose sqrt(alpha) is linear in sqrt(T) (vdw, srk, pr, pr78); [`batch_model`] says which ids
 //! qualify and builds the model with the k_ij of [`crate::models::kij_for`], as
 //! [`crate::models::build`] does.
 
@@ -37,8 +37,7 @@ where
     out.par_chunks_mut(np)
         .zip(t.par_iter())
         .try_for_each(|(row, &ti)| {
-            let tv = vec![ti; np];
-            let r = batch.z_tp(&tv, p, BatchRoot::LowestGibbs, row);
+            let r = batch.z_isotherm(ti, p, BatchRoot::LowestGibbs, row);
             tick(np as u64);
             r
         })?;
@@ -53,8 +52,7 @@ pub fn z_grid_serial(batch: &ZBatch, t: &[f64], p: &[f64]) -> eos::Result<Vec<f6
         return Ok(out);
     }
     for (row, &ti) in out.chunks_mut(np).zip(t) {
-        let tv = vec![ti; np];
-        batch.z_tp(&tv, p, BatchRoot::LowestGibbs, row)?;
+        batch.z_isotherm(ti, p, BatchRoot::LowestGibbs, row)?;
     }
     Ok(out)
 }

@@ -1,6 +1,8 @@
 //! Peng-Robinson Z at (T, P) over the yardstick's two 1000 x 1000 workloads
-//! (shared/bench/yardstick_pr.py), one core, a(T) recomputed for every state.
-//! The checksums are verified before timing. Run: `cargo bench -p eos --bench z_batch`.
+//! (shared/bench/yardstick_pr.py): per state (a(T) recomputed for every state, as the
+//! yardstick does) and temperature repeated (`ZBatch::z_grid`, a(T) once per isotherm), on one
+//! core and on all cores. The checksums are verified before timing.
+//! Run: `cargo bench -p eos --bench z_batch`.
 
 #[path = "../tests/support/yardstick.rs"]
 mod yardstick;
@@ -88,4 +90,53 @@ fn mix10_largest_all_cores(bencher: Bencher) {
         bencher,
         true,
     );
+}
+
+/// Temperature repeated: the same grid as axes, a(T) once per isotherm.
+fn run_grid(model: &eos::cubic::Cubic, x: &[f64], want: f64, bencher: Bencher, parallel: bool) {
+    let (t, p) = y::grid(N, N);
+    let t_axis: Vec<f64> = t.iter().step_by(N).copied().collect();
+    let p_axis = &p[..N];
+    let batch = ZBatch::new(model, x).unwrap();
+    let mut z = vec![0.0; t.len()];
+    batch
+        .z_grid(&t_axis, p_axis, BatchRoot::Largest, &mut z)
+        .unwrap();
+    let sum = y::fsum(&z);
+    assert!(
+        ((sum - want) / want).abs() < 1e-9,
+        "checksum {sum} vs yardstick {want}"
+    );
+    bencher.counter(ItemsCount::new(t.len())).bench_local(|| {
+        if parallel {
+            batch.z_grid_par(&t_axis, p_axis, BatchRoot::Largest, &mut z)
+        } else {
+            batch.z_grid(&t_axis, p_axis, BatchRoot::Largest, &mut z)
+        }
+        .unwrap()
+    });
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn pure_grid_largest(bencher: Bencher) {
+    let (m, x) = y::pure();
+    run_grid(&m, &x, y::SUM_PURE, bencher, false);
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn mix10_grid_largest(bencher: Bencher) {
+    let (m, x) = y::mix();
+    run_grid(&m, &x, y::SUM_MIX_LARGEST, bencher, false);
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn pure_grid_largest_all_cores(bencher: Bencher) {
+    let (m, x) = y::pure();
+    run_grid(&m, &x, y::SUM_PURE, bencher, true);
+}
+
+#[divan::bench(sample_count = 10, sample_size = 1)]
+fn mix10_grid_largest_all_cores(bencher: Bencher) {
+    let (m, x) = y::mix();
+    run_grid(&m, &x, y::SUM_MIX_LARGEST, bencher, true);
 }

@@ -1,21 +1,43 @@
 //! Batch evaluation: Z of many (T, P) states of one cubic model and one composition, with no
 //! allocation per state.
 //!
-//! Everything that depends only on the composition is folded once into a [`ZBatch`]:
-//! x_i x_j (1 - k_ij) sqrt(a_ci a_cj) for the attraction term and b_mix. For the Soave-type
-//! alpha functions (SRK, PR 1976 and 1978) sqrt(a_i(T)) = sqrt(a_ci)(1 + m_i) -
-//! sqrt(a_ci) m_i sqrt(T/Tc_i) is linear in sqrt(T), so each state costs one square root, n
-//! multiply-adds for the sqrt(a_i) and n(n+1)/2 for the quadratic mixing sum: a(T) is
-//! recomputed in full for every state.
+//! Everything that depends only on the composition is folded once into a [`ZBatch`]. For the
+//! Soave-type alpha functions (SRK, PR 1976 and 1978; van der Waals with alpha = 1)
+//! s_i(T) = sqrt(a_i(T)) = sqrt(a_ci)(1 + m_i) - sqrt(a_ci) m_i sqrt(T/Tc_i) = c0_i + c1_i sqrt(T)
+//! is linear in sqrt(T), so the van der Waals one-fluid mixing sum is a quadratic in sqrt(T):
+//!
+//! a(T) = sum_i sum_{j >= i} w_ij s_i(T) s_j(T),  w_ij = (2 - delta_ij) x_i x_j (1 - k_ij),
+//!      = q0 + q1 sqrt(T) + q2 T,
+//! q0 = sum w_ij c0_i c0_j,  q1 = sum w_ij (c0_i c1_j + c1_i c0_j),  q2 = sum w_ij c1_i c1_j.
+//!
+//! q0, q1, q2 and b_mix = sum_i x_i b_i are computed once, so a(T) costs one square root and
+//! two multiply-adds whatever the number of components (the O(n^2) mixing rule is paid once
+//! per batch, not per state). The rounding of a(T) grows with the cancellation between the
+//! three terms, to a few units in the last place at the highest reduced temperatures.
+//!
+//! Two entry points share one kernel:
+//! - per state, [`ZBatch::z_tp`]: any list of (T, P) pairs; a(T), a/(RT)^2 and b/(RT) are
+//!   computed for every state;
+//! - temperature repeated, [`ZBatch::z_isotherm`] and [`ZBatch::z_grid`]: a/(RT)^2 and b/(RT)
+//!   are computed once per temperature (a square root and two divisions saved per state), and
+//!   A = P a/(RT)^2, B = P b/(RT) for every pressure of the isotherm.
+//!
+//! Both evaluate these in the same order of operations and hand every state to the same lane
+//! code (a short final block is padded rather than sent to a scalar path), so a state's Z is
+//! the same bit for bit whichever entry point, block position or thread computed it.
 //!
 //! The cubic in Z is not solved in closed form here: every physical root satisfies
 //! B < Z <= 1 + B (the attractive term is positive for v > b, so P <= RT/(v - b)), and the
 //! cubic is increasing and convex to the right of its inflection point, so Newton's method
-//! started at 1 + B descends monotonically onto the largest root. The other two roots, where
-//! they exist, come from the deflated quadratic. Whenever that path cannot be trusted (an
-//! iterate falls left of the inflection point, a vanishing slope, the iteration cap near a
-//! double root), the state falls back to the closed form of
-//! [`crate::cubic::roots::solve_cubic`]; both give the same roots to rounding.
+//! started at 1 + B descends monotonically onto the largest root. Each lane stops (keeps its
+//! value) once its Newton step falls below 1e-13 Z, so what a lane returns depends on its own
+//! state only; a block stops when all its lanes have. The result is then certified: Z is the
+//! largest root when the slope is positive there and the quadratic left after dividing it out
+//! has no real root above it (complex roots, or a vertex at or below Z). The other two roots,
+//! where they exist, come from that quadratic. A state that is not certified (a descent that
+//! strayed onto another root, or did not settle within the step cap, as next to a double
+//! root) falls back to the closed form of [`crate::cubic::roots::solve_cubic`]; both give the
+//! same roots to rounding.
 
 use crate::composition;
 use crate::constants::R;
@@ -33,12 +55,20 @@ pub enum BatchRoot {
     LowestGibbs,
 }
 
-/// States evaluated together in [`ZBatch::z_tp`].
-const LANES: usize = 8;
+/// States evaluated together by the lane kernel.
+const LANES: usize = 16;
 
-/// Newton steps taken by every lane before its result is checked; from 1 + B the descent
-/// reaches machine precision in five to seven steps for states away from a spinodal.
-const NEWTON_STEPS: usize = 8;
+/// Most Newton steps a lane takes before it falls back to the closed form; from 1 + B the
+/// descent reaches machine precision in four to eight steps for states away from a spinodal
+/// (over the yardstick's grids about 1 % of the pure-fluid states and 2 % of the
+/// 10-component ones need more than eight).
+const NEWTON_STEPS: usize = 12;
+
+/// A lane has converged when its Newton step is below this fraction of Z.
+const STEP_TOL: f64 = 1e-13;
+
+/// States per task in the parallel entry points (whole lane blocks).
+const CHUNK: usize = LANES * 512;
 
 /// Largest root of Z^3 + c2 Z^2 + c1 Z + c0 by Newton's method from `start`, an upper bound
 /// of every root; `None` where the monotone descent cannot be guaranteed.
@@ -97,14 +127,61 @@ fn smallest_other_root(c2: f64, c1: f64, c0: f64, zl: f64) -> Option<f64> {
     Some(z)
 }
 
+/// States validated and then computed together, so that the input is read from memory once
+/// (a multiple of LANES).
+const PIECE: usize = LANES * 256;
+
+/// True when every value is finite and positive. Written with eight independent
+/// accumulators so that it vectorises: the smallest value must be above zero, and x * 0 is
+/// NaN exactly when x is infinite or NaN (a NaN never replaces the minimum, but it does
+/// poison the product sum).
+#[allow(clippy::needless_range_loop)]
+#[inline]
+fn all_valid(v: &[f64]) -> bool {
+    const W: usize = 8;
+    let mut lo = [f64::INFINITY; W];
+    let mut poison = [0.0; W];
+    let mut chunks = v.chunks_exact(W);
+    for c in &mut chunks {
+        for l in 0..W {
+            lo[l] = if c[l] < lo[l] { c[l] } else { lo[l] };
+            poison[l] += c[l] * 0.0;
+        }
+    }
+    for (l, &x) in chunks.remainder().iter().enumerate() {
+        lo[l] = if x < lo[l] { x } else { lo[l] };
+        poison[l] += x * 0.0;
+    }
+    lo.iter().all(|m| *m > 0.0) && poison.iter().all(|q| *q == 0.0)
+}
+
+/// Refuses states that are not finite and positive.
+fn check_states(t: &[f64], p: &[f64]) -> Result<()> {
+    if all_valid(t) && all_valid(p) {
+        return Ok(());
+    }
+    let bad = t
+        .iter()
+        .chain(p)
+        .copied()
+        .find(|v| !(v.is_finite() && *v > 0.0))
+        .unwrap_or(f64::NAN);
+    Err(Error::invalid(
+        "state in batch",
+        bad,
+        "finite, positive temperatures (K) and pressures (Pa)",
+    ))
+}
+
+fn length_error(got: usize, want: &'static str) -> Error {
+    Error::invalid("batch length", got as f64, want)
+}
+
 /// A cubic model bound to one composition, ready to evaluate Z at many states.
 #[derive(Debug, Clone)]
 pub struct ZBatch {
-    /// Constant and sqrt(T) parts of sqrt(a_i(T)), one per component.
-    c0: Vec<f64>,
-    c1: Vec<f64>,
-    /// Packed upper triangle of x_i x_j (1 - k_ij), with the off-diagonal terms doubled.
-    w: Vec<f64>,
+    /// a(T) = q0 + q1 sqrt(T) + q2 T (the mixing sum folded at construction).
+    q: [f64; 3],
     n: usize,
     b: f64,
     d1: f64,
@@ -137,18 +214,19 @@ impl ZBatch {
             }
         };
         let omk = model.one_minus_kij();
-        let mut w = Vec::with_capacity(n * (n + 1) / 2);
+        let mut q = [0.0; 3];
         for i in 0..n {
             for j in i..n {
                 let f = if i == j { 1.0 } else { 2.0 };
-                w.push(f * x[i] * x[j] * omk[i * n + j]);
+                let w = f * x[i] * x[j] * omk[i * n + j];
+                q[0] += w * c0[i] * c0[j];
+                q[1] += w * (c0[i] * c1[j] + c1[i] * c0[j]);
+                q[2] += w * c1[i] * c1[j];
             }
         }
         let b = x.iter().zip(model.covolumes()).map(|(x, b)| x * b).sum();
         Ok(ZBatch {
-            c0,
-            c1,
-            w,
+            q,
             n,
             b,
             d1: spec.d1,
@@ -156,24 +234,37 @@ impl ZBatch {
         })
     }
 
-    /// a_mix at T.
+    /// Number of components.
+    pub fn len(&self) -> usize {
+        self.n
+    }
+
+    /// Always false: a batch has at least one component.
+    pub fn is_empty(&self) -> bool {
+        self.n == 0
+    }
+
+    /// a_mix at T: q0 + sqrt(T) (q1 + q2 sqrt(T)).
     #[inline]
-    fn a_mix(&self, t: f64, s: &mut [f64]) -> f64 {
+    fn a_mix(&self, t: f64) -> f64 {
         let st = t.sqrt();
-        for ((si, c0), c1) in s.iter_mut().zip(&self.c0).zip(&self.c1) {
-            *si = c0 + c1 * st;
+        self.q[0] + st * (self.q[1] + self.q[2] * st)
+    }
+
+    /// ka = a/(RT)^2 and kb = b/(RT) at LANES temperatures, in the order of operations of
+    /// [`ZBatch::a_mix`] and [`ZBatch::reduced`].
+    #[allow(clippy::needless_range_loop)]
+    #[inline]
+    fn k_lanes(&self, t: &[f64; LANES]) -> ([f64; LANES], [f64; LANES]) {
+        let (mut ka, mut kb) = ([0.0; LANES], [0.0; LANES]);
+        for l in 0..LANES {
+            let st = t[l].sqrt();
+            let a = self.q[0] + st * (self.q[1] + self.q[2] * st);
+            let rt = R * t[l];
+            ka[l] = a / (rt * rt);
+            kb[l] = self.b / rt;
         }
-        let mut a = 0.0;
-        let mut k = 0;
-        for i in 0..self.n {
-            let mut row = 0.0;
-            for sj in &s[i..self.n] {
-                row += self.w[k] * sj;
-                k += 1;
-            }
-            a += s[i] * row;
-        }
-        a
+        (ka, kb)
     }
 
     /// Residual Gibbs energy over RT of root z (composition terms left out).
@@ -187,13 +278,31 @@ impl ZBatch {
         z - 1.0 - (z - bb).ln() - conf
     }
 
-    /// Z of one state.
+    /// The root `root` asks for, given the largest root `zl`.
     #[inline]
-    fn z_one(&self, t: f64, p: f64, root: BatchRoot, s: &mut [f64]) -> f64 {
-        let a = self.a_mix(t, s);
+    fn choose(&self, root: BatchRoot, zl: f64, zs: Option<f64>, aa: f64, bb: f64) -> f64 {
+        match (root, zs) {
+            (BatchRoot::LowestGibbs, Some(zs))
+                if zs > bb && self.g_res(zs, aa, bb) < self.g_res(zl, aa, bb) =>
+            {
+                zs
+            }
+            _ => zl,
+        }
+    }
+
+    /// a/(RT)^2 and b/(RT) at T, given a(T): A = ka P and B = kb P along the isotherm.
+    #[inline]
+    fn reduced(&self, a: f64, t: f64) -> (f64, f64) {
         let rt = R * t;
-        let aa = a * p / (rt * rt);
-        let bb = self.b * p / rt;
+        (a / (rt * rt), self.b / rt)
+    }
+
+    /// Z of one state from ka = a/(RT)^2 and kb = b/(RT), by the scalar path (the fallback
+    /// of the lane kernel).
+    fn z_scalar(&self, ka: f64, kb: f64, p: f64, root: BatchRoot) -> f64 {
+        let aa = ka * p;
+        let bb = kb * p;
         let (u, w) = (self.d1 + self.d2, self.d1 * self.d2);
         let c2 = (u - 1.0) * bb - 1.0;
         let c1 = aa + (w - u) * bb * bb - u * bb;
@@ -206,50 +315,130 @@ impl ZBatch {
                 (r.largest(), (zs < r.largest()).then_some(zs))
             }
         };
-        match (root, zs) {
-            (BatchRoot::LowestGibbs, Some(zs))
-                if zs > bb && self.g_res(zs, aa, bb) < self.g_res(zl, aa, bb) =>
-            {
-                zs
-            }
-            _ => zl,
+        self.choose(root, zl, zs, aa, bb)
+    }
+
+    /// Z of LANES states from their ka = a/(RT)^2, kb = b/(RT) and P. Every loop runs across
+    /// the lanes, so the compiler can keep the lanes in vector registers. Lanes whose Newton
+    /// descent is not certified fall back to the scalar path.
+    #[allow(clippy::needless_range_loop)]
+    #[inline]
+    fn lanes(
+        &self,
+        ka: &[f64; LANES],
+        kb: &[f64; LANES],
+        p: &[f64; LANES],
+        root: BatchRoot,
+    ) -> [f64; LANES] {
+        let (u, w) = (self.d1 + self.d2, self.d1 * self.d2);
+        let (mut aa, mut bb) = ([0.0; LANES], [0.0; LANES]);
+        let (mut c2, mut c1, mut c0) = ([0.0; LANES], [0.0; LANES], [0.0; LANES]);
+        let mut z = [0.0; LANES];
+        for l in 0..LANES {
+            aa[l] = ka[l] * p[l];
+            bb[l] = kb[l] * p[l];
+            c2[l] = (u - 1.0) * bb[l] - 1.0;
+            c1[l] = aa[l] + (w - u) * bb[l] * bb[l] - u * bb[l];
+            c0[l] = -(aa[l] * bb[l] + w * bb[l] * bb[l] + w * bb[l] * bb[l] * bb[l]);
+            z[l] = 1.0 + bb[l];
         }
+        // done: 1.0 once the lane's step fell below STEP_TOL Z; its value is then frozen. The
+        // flags are f64 and the loop holds no other state, so that it vectorises.
+        let mut done = [0.0_f64; LANES];
+        for _ in 0..NEWTON_STEPS {
+            for l in 0..LANES {
+                let zl = z[l];
+                let f = ((zl + c2[l]) * zl + c1[l]) * zl + c0[l];
+                let df = (3.0 * zl + 2.0 * c2[l]) * zl + c1[l];
+                let step = f / df;
+                let zn = zl - step;
+                let d = done[l];
+                done[l] = if step.abs() <= STEP_TOL * zn { 1.0 } else { d };
+                z[l] = if d > 0.5 { zl } else { zn };
+            }
+            let mut n = 0.0;
+            for d in &done {
+                n += d;
+            }
+            if n > LANES as f64 - 0.5 {
+                break;
+            }
+        }
+        // Certification after the fact: z is the largest root when the slope there is positive
+        // and the quadratic left after dividing it out, Z^2 + e1 Z + e0, has no real root
+        // above z (complex roots, or its vertex -e1/2 at or below z). A descent that strayed
+        // onto another root, or did not settle, fails and goes to the closed form.
+        let mut certified = [0.0_f64; LANES];
+        for l in 0..LANES {
+            let zl = z[l];
+            let df = (3.0 * zl + 2.0 * c2[l]) * zl + c1[l];
+            let e1 = c2[l] + zl;
+            let e0 = c1[l] + zl * e1;
+            let top = (e1 * e1 < 4.0 * e0) | (-e1 <= 2.0 * zl);
+            certified[l] = if (done[l] > 0.5) & (df > 0.0) & top {
+                1.0
+            } else {
+                0.0
+            };
+        }
+        let mut out = [0.0; LANES];
+        for l in 0..LANES {
+            out[l] = if certified[l] < 0.5 {
+                self.z_scalar(ka[l], kb[l], p[l], root)
+            } else {
+                let zs = match root {
+                    BatchRoot::Largest => None,
+                    BatchRoot::LowestGibbs => smallest_other_root(c2[l], c1[l], c0[l], z[l]),
+                };
+                self.choose(root, z[l], zs, aa[l], bb[l])
+            };
+        }
+        out
     }
 
     /// Z at each (t[k], p[k]) into `out[k]`. The slices must have equal lengths; every T and
-    /// P must be finite and positive. States are independent, so any split of the slices
-    /// (for example across threads) gives identical results.
+    /// P must be finite and positive (on an invalid state the error is returned and `out` is
+    /// left partly written). States are independent and every one goes through the same
+    /// arithmetic, so any split of the slices (for example across threads) gives identical
+    /// results.
     pub fn z_tp(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
         if t.len() != p.len() || t.len() != out.len() {
-            return Err(Error::invalid(
-                "batch length",
-                t.len() as f64,
+            return Err(length_error(
+                t.len(),
                 "equal lengths of temperatures, pressures and output",
             ));
         }
-        if let Some(bad) = t.iter().chain(p).find(|v| !(v.is_finite() && **v > 0.0)) {
-            return Err(Error::invalid(
-                "state in batch",
-                *bad,
-                "finite, positive temperatures (K) and pressures (Pa)",
-            ));
+        for ((tc, pc), oc) in t
+            .chunks(PIECE)
+            .zip(p.chunks(PIECE))
+            .zip(out.chunks_mut(PIECE))
+        {
+            check_states(tc, pc)?;
+            self.z_tp_piece(tc, pc, root, oc);
         }
+        Ok(())
+    }
+
+    fn z_tp_piece(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
         let mut tc = t.chunks_exact(LANES);
         let mut pc = p.chunks_exact(LANES);
         let mut oc = out.chunks_exact_mut(LANES);
         for ((tb, pb), ob) in (&mut tc).zip(&mut pc).zip(&mut oc) {
-            self.block(tb, pb, ob, root);
+            let tb: &[f64; LANES] = tb.try_into().unwrap_or(&[1.0; LANES]);
+            let pb: &[f64; LANES] = pb.try_into().unwrap_or(&[1.0; LANES]);
+            let (ka, kb) = self.k_lanes(tb);
+            ob.copy_from_slice(&self.lanes(&ka, &kb, pb, root));
         }
-        let mut s = [0.0; crate::cubic::MAX_COMPONENTS];
-        for ((&tk, &pk), o) in tc
-            .remainder()
-            .iter()
-            .zip(pc.remainder())
-            .zip(oc.into_remainder())
-        {
-            *o = self.z_one(tk, pk, root, &mut s[..self.n]);
+        let (tr, pr, or) = (tc.remainder(), pc.remainder(), oc.into_remainder());
+        if !tr.is_empty() {
+            // Pad the short block with copies of its last state.
+            let (mut tb, mut pb) = ([tr[tr.len() - 1]; LANES], [pr[pr.len() - 1]; LANES]);
+            tb[..tr.len()].copy_from_slice(tr);
+            pb[..pr.len()].copy_from_slice(pr);
+            let (ka, kb) = self.k_lanes(&tb);
+            let z = self.lanes(&ka, &kb, &pb, root);
+            or.copy_from_slice(&z[..or.len()]);
         }
-        Ok(())
     }
 
     /// Like [`ZBatch::z_tp`], split across all cores (rayon) in chunks of whole lane blocks.
@@ -260,95 +449,88 @@ impl ZBatch {
         if t.len() != p.len() || t.len() != out.len() {
             return self.z_tp(t, p, root, out);
         }
-        const CHUNK: usize = LANES * 2048;
         out.par_chunks_mut(CHUNK)
             .zip(t.par_chunks(CHUNK).zip(p.par_chunks(CHUNK)))
             .try_for_each(|(o, (tc, pc))| self.z_tp(tc, pc, root, o))
     }
 
-    /// Z of LANES states at once: every loop runs across the lanes, so the compiler can keep
-    /// the lanes in vector registers. Lanes whose Newton descent is not certified fall back
-    /// to the scalar path.
-    // Lane loops index several arrays by the same lane number; iterator chains would hide
-    // that structure from the reader and from the vectoriser alike.
-    #[allow(clippy::needless_range_loop)]
-    #[inline]
-    fn block(&self, t: &[f64], p: &[f64], out: &mut [f64], root: BatchRoot) {
-        let mut st = [0.0; LANES];
-        for l in 0..LANES {
-            st[l] = t[l].sqrt();
+    /// Z along one isotherm: at temperature `t` and each pressure `p[k]` into `out[k]`.
+    /// a(T) is computed once. The result is bit for bit that of [`ZBatch::z_tp`] on the same
+    /// states.
+    pub fn z_isotherm(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        if p.len() != out.len() {
+            return Err(length_error(
+                p.len(),
+                "equal lengths of pressures and output",
+            ));
         }
-        let mut a = [0.0; LANES];
-        if self.n == 1 {
-            for l in 0..LANES {
-                let si = self.c0[0] + self.c1[0] * st[l];
-                a[l] = self.w[0] * si * si;
-            }
-        } else {
-            let mut s = [[0.0; LANES]; crate::cubic::MAX_COMPONENTS];
-            for i in 0..self.n {
-                for l in 0..LANES {
-                    s[i][l] = self.c0[i] + self.c1[i] * st[l];
+        check_states(&[t], p)?;
+        self.isotherm_unchecked(t, p, root, out);
+        Ok(())
+    }
+
+    fn isotherm_unchecked(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        let (ka, kb) = self.reduced(self.a_mix(t), t);
+        let (ka, kb) = ([ka; LANES], [kb; LANES]);
+        let mut pc = p.chunks_exact(LANES);
+        let mut oc = out.chunks_exact_mut(LANES);
+        for (pb, ob) in (&mut pc).zip(&mut oc) {
+            let pb: &[f64; LANES] = pb.try_into().unwrap_or(&[1.0; LANES]);
+            ob.copy_from_slice(&self.lanes(&ka, &kb, pb, root));
+        }
+        let (pr, or) = (pc.remainder(), oc.into_remainder());
+        if !pr.is_empty() {
+            let mut pb = [pr[pr.len() - 1]; LANES];
+            pb[..pr.len()].copy_from_slice(pr);
+            let z = self.lanes(&ka, &kb, &pb, root);
+            or.copy_from_slice(&z[..or.len()]);
+        }
+    }
+
+    /// Z over the grid of every temperature `t[i]` with every pressure `p[j]`, into
+    /// `out[i * p.len() + j]` (temperature outer, pressure inner). a(T) is computed once per
+    /// temperature; the result is bit for bit that of [`ZBatch::z_tp`] on the flattened grid.
+    pub fn z_grid(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        self.check_grid(t, p, out)?;
+        if p.is_empty() {
+            return Ok(());
+        }
+        for (row, &ti) in out.chunks_exact_mut(p.len()).zip(t) {
+            self.isotherm_unchecked(ti, p, root, row);
+        }
+        Ok(())
+    }
+
+    /// Like [`ZBatch::z_grid`], split across all cores (rayon): isotherms are shared out, and
+    /// long isotherms are cut into chunks of whole lane blocks. The results are identical to
+    /// the single-threaded call, in the same order.
+    pub fn z_grid_par(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
+        use rayon::prelude::*;
+        self.check_grid(t, p, out)?;
+        if p.is_empty() {
+            return Ok(());
+        }
+        out.par_chunks_mut(p.len())
+            .zip(t.par_iter())
+            .for_each(|(row, &ti)| {
+                if row.len() <= CHUNK {
+                    self.isotherm_unchecked(ti, p, root, row);
+                } else {
+                    row.par_chunks_mut(CHUNK)
+                        .zip(p.par_chunks(CHUNK))
+                        .for_each(|(o, pc)| self.isotherm_unchecked(ti, pc, root, o));
                 }
-            }
-            let mut k = 0;
-            for i in 0..self.n {
-                for j in i..self.n {
-                    let w = self.w[k];
-                    k += 1;
-                    for l in 0..LANES {
-                        a[l] += w * s[i][l] * s[j][l];
-                    }
-                }
-            }
+            });
+        Ok(())
+    }
+
+    fn check_grid(&self, t: &[f64], p: &[f64], out: &[f64]) -> Result<()> {
+        if t.len().checked_mul(p.len()) != Some(out.len()) {
+            return Err(length_error(
+                out.len(),
+                "an output of (number of temperatures) x (number of pressures)",
+            ));
         }
-        let (u, w) = (self.d1 + self.d2, self.d1 * self.d2);
-        let (mut aa, mut bb) = ([0.0; LANES], [0.0; LANES]);
-        let (mut c2, mut c1, mut c0) = ([0.0; LANES], [0.0; LANES], [0.0; LANES]);
-        let mut z = [0.0; LANES];
-        for l in 0..LANES {
-            let rt = R * t[l];
-            aa[l] = a[l] * p[l] / (rt * rt);
-            bb[l] = self.b * p[l] / rt;
-            c2[l] = (u - 1.0) * bb[l] - 1.0;
-            c1[l] = aa[l] + (w - u) * bb[l] * bb[l] - u * bb[l];
-            c0[l] = -(aa[l] * bb[l] + w * bb[l] * bb[l] + w * bb[l] * bb[l] * bb[l]);
-            z[l] = 1.0 + bb[l];
-        }
-        let mut ok = [true; LANES];
-        let mut step = [0.0; LANES];
-        for _ in 0..NEWTON_STEPS {
-            for l in 0..LANES {
-                let zl = z[l];
-                let f = ((zl + c2[l]) * zl + c1[l]) * zl + c0[l];
-                let df = (3.0 * zl + 2.0 * c2[l]) * zl + c1[l];
-                step[l] = f / df;
-                z[l] = zl - step[l];
-                ok[l] &= df > 0.0 && 3.0 * z[l] > -c2[l];
-            }
-        }
-        for l in 0..LANES {
-            let certified = ok[l] && step[l].abs() <= 1e-13 * z[l];
-            out[l] = if !certified {
-                let mut s = [0.0; crate::cubic::MAX_COMPONENTS];
-                self.z_one(t[l], p[l], root, &mut s[..self.n])
-            } else {
-                match root {
-                    BatchRoot::Largest => z[l],
-                    BatchRoot::LowestGibbs => {
-                        match smallest_other_root(c2[l], c1[l], c0[l], z[l]) {
-                            Some(zs)
-                                if zs > bb[l]
-                                    && self.g_res(zs, aa[l], bb[l])
-                                        < self.g_res(z[l], aa[l], bb[l]) =>
-                            {
-                                zs
-                            }
-                            _ => z[l],
-                        }
-                    }
-                }
-            };
-        }
+        check_states(t, p)
     }
 }

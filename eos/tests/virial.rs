@@ -196,3 +196,23 @@ fn dense_states_are_refused_with_a_typed_error() {
     // and accepts the dilute gas
     assert!(m.state_tp(300.0, 1e6, &[1.0]).is_ok());
 }
+
+#[test]
+fn z_only_path_agrees_with_the_full_mixture_sum() {
+    // Identity: Z = 1 + B P/(RT) with B = sum_ij x_i x_j B_ij; the Z-only path sums the
+    // symmetric matrix over i <= j, `second_virial` over every (i, j) with derivatives.
+    let names = ["nitrogen", "methane", "carbon dioxide", "ethane", "argon"];
+    let comps: Vec<Component> = names.iter().map(|n| comp(n)).collect();
+    let mut kij = vec![0.0; 25];
+    kij[1] = 0.03;
+    kij[5] = 0.03;
+    kij[2 * 5 + 3] = 0.12;
+    kij[3 * 5 + 2] = 0.12;
+    let m = Virial::new(&comps, Correlation::Tsonopoulos, Some(&kij)).unwrap();
+    let x = [0.05, 0.80, 0.03, 0.10, 0.02];
+    for (t, p) in [(250.0, 5e5), (300.0, 20e5), (400.0, 40e5)] {
+        let b = m.second_virial(t, &x, None).b;
+        let z = m.z_pressure_explicit(t, p, &x).unwrap();
+        assert_relative_eq!(z, 1.0 + b * p / (R * t), max_relative = 1e-14);
+    }
+}

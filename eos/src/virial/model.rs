@@ -244,12 +244,11 @@ impl Virial {
         positive("temperature (K)", t)?;
         positive("pressure (Pa)", p)?;
         composition::check(x, self.n)?;
-        let b = self.second_virial(t, x, None).b;
+        let b = self.b_mix(t, x);
         let z = 1.0 + b * p / (R * t);
         // One validity test for both forms: the density of the volume-explicit form, which is
         // the higher of the two estimates when B < 0.
-        let rho = self
-            .gas_density(t, p, x)
+        let rho = gas_density_of(b, t, p)
             .filter(|_| z > 0.0)
             .ok_or_else(|| Error::OutOfRange {
                 model: ID.into(),
@@ -288,11 +287,31 @@ impl Virial {
 
     /// The root of B rho^2 + rho - p/(RT) = 0 that tends to the ideal gas as B -> 0.
     fn gas_density(&self, t: f64, p: f64, x: &[f64]) -> Option<f64> {
-        let b = self.second_virial(t, x, None).b;
-        let q = p / (R * t);
-        let disc = 1.0 + 4.0 * b * q;
-        (disc >= 0.0).then(|| 2.0 * q / (1.0 + disc.sqrt()))
+        gas_density_of(self.b_mix(t, x), t, p)
     }
+
+    /// B of composition x at T alone: the symmetric sum over i <= j, one correlation
+    /// evaluation per pair (the Z-only path).
+    fn b_mix(&self, t: f64, x: &[f64]) -> f64 {
+        let n = self.n;
+        let mut b = 0.0;
+        for i in 0..n {
+            let k = i * n + i;
+            b += x[i] * x[i] * self.b_ij(t, k).b;
+            for j in i + 1..n {
+                b += 2.0 * x[i] * x[j] * self.b_ij(t, i * n + j).b;
+            }
+        }
+        b
+    }
+}
+
+/// The root of B rho^2 + rho - p/(RT) = 0 that tends to the ideal gas as B -> 0, written
+/// 2q/(1 + sqrt(1 + 4 B q)) with q = p/(RT) (no cancellation as B -> 0).
+fn gas_density_of(b: f64, t: f64, p: f64) -> Option<f64> {
+    let q = p / (R * t);
+    let disc = 1.0 + 4.0 * b * q;
+    (disc >= 0.0).then(|| 2.0 * q / (1.0 + disc.sqrt()))
 }
 
 impl Model for Virial {
