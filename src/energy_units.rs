@@ -11,7 +11,6 @@
 //! component at 298.15 K and 101.325 kPa.
 
 use crate::units::KG_PER_LB;
-use std::fmt;
 
 /// Joules per international table Btu.
 pub const J_PER_BTU: f64 = 1_055.055_852_62;
@@ -22,36 +21,8 @@ const ENTROPY_UNITS: &str = "a number with J/(mol K), kJ/(kmol K) (molar), J/(kg
 kJ/(kg K) (mass) or Btu/(lb R), Btu/(lbmol R), for example \"-12 J/(mol K)\" or \
 \"1.2 kJ/(kg K)\"";
 
-/// A specific enthalpy or entropy that could not be read.
-#[derive(Debug, Clone, PartialEq)]
-pub struct EnergyUnitError {
-    /// The text as given.
-    pub input: String,
-    /// "enthalpy" or "entropy".
-    pub quantity: &'static str,
-    /// What is wrong.
-    pub problem: String,
-    /// What would be accepted.
-    pub accepted: &'static str,
-}
-
-impl fmt::Display for EnergyUnitError {
-    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        write!(
-            f,
-            "cannot read \"{}\" as an {}: {}; accepted: {}",
-            self.input, self.quantity, self.problem, self.accepted
-        )
-    }
-}
-
-impl std::error::Error for EnergyUnitError {}
-
-impl From<EnergyUnitError> for crate::error::CliError {
-    fn from(e: EnergyUnitError) -> Self {
-        crate::error::CliError::BadInput(e.to_string())
-    }
-}
+/// A specific enthalpy or entropy that could not be read: the tool's one unit error.
+pub type EnergyUnitError = crate::units::UnitError;
 
 /// A value per mole or per kilogram, in SI (J/mol, J/kg, J/(mol K) or J/(kg K)).
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -78,43 +49,7 @@ fn split(
     quantity: &'static str,
     accepted: &'static str,
 ) -> Result<(f64, String), EnergyUnitError> {
-    let err = |problem: String| EnergyUnitError {
-        input: input.to_string(),
-        quantity,
-        problem,
-        accepted,
-    };
-    let s = input.trim();
-    let bytes = s.as_bytes();
-    let mut end = 0;
-    while end < bytes.len() {
-        let c = bytes[end] as char;
-        let exp = (c == 'e' || c == 'E')
-            && end > 0
-            && bytes
-                .get(end + 1)
-                .is_some_and(|&n| n.is_ascii_digit() || n == b'-' || n == b'+');
-        if c.is_ascii_digit() || c == '.' || c == '+' || c == '-' || exp {
-            end += 1;
-        } else {
-            break;
-        }
-    }
-    let (num, unit) = s.split_at(end);
-    if num.is_empty() {
-        return Err(err("it does not start with a number".to_string()));
-    }
-    let value: f64 = num
-        .parse()
-        .map_err(|_| err(format!("\"{num}\" is not a number")))?;
-    if !value.is_finite() {
-        return Err(err("the number is not finite".to_string()));
-    }
-    let unit = unit.trim();
-    if unit.is_empty() {
-        return Err(err("the unit is missing".to_string()));
-    }
-    Ok((value, unit.to_string()))
+    crate::units::split(input, quantity, accepted)
 }
 
 /// The unit in a canonical spelling: lower case, no spaces, parentheses or product signs,

@@ -46,9 +46,13 @@ pub struct UnitError {
 
 impl fmt::Display for UnitError {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        let article = match self.quantity.chars().next() {
+            Some('a' | 'e' | 'i' | 'o' | 'u') => "an",
+            _ => "a",
+        };
         write!(
             f,
-            "cannot read \"{}\" as a {}: {}; accepted: {}",
+            "cannot read \"{}\" as {article} {}: {}; accepted: {}",
             self.input, self.quantity, self.problem, self.accepted
         )
     }
