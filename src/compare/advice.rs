@@ -27,13 +27,20 @@ use serde::Serialize;
 pub fn rank(id: &str) -> (u32, &'static str) {
     match id {
         "ideal" => (0, "ideal gas"),
+        "virial" => (5, "virial equation"),
+        "dak" | "hy" => (6, "gas-gravity correlation"),
         "vdw" => (10, "cubic"),
         "rk" => (11, "cubic"),
         "srk" => (12, "cubic"),
         "pr" => (13, "cubic"),
         "pr78" => (14, "cubic"),
-        "lk" | "lee-kesler" | "pitzer" | "cs" => (20, "corresponding states"),
-        "reference" | "iapws95" | "gerg2008" | "helmholtz" => (30, "reference formulation"),
+        "srk-pen" => (15, "cubic, volume-translated"),
+        "pr-pen" => (16, "cubic, volume-translated"),
+        "pr78-pen" => (17, "cubic, volume-translated"),
+        "lk" => (20, "corresponding states"),
+        "sw12" => (25, "technical Helmholtz equation"),
+        "if97" => (28, "industrial formulation"),
+        "reference" => (30, "reference formulation"),
         _ => (40, "other"),
     }
 }
@@ -147,7 +154,7 @@ const POLAR: [&str; 5] = ["water", "ammonia", "methanol", "ethanol", "hcl"];
 /// Weaknesses of the compared models for these components (ids as in `fluids`) over the
 /// regions that occur.
 pub fn weaknesses(components: &[&str], models: &[&str], regions: &[Region]) -> Vec<Weakness> {
-    let cubic = models.iter().any(|m| rank(m).1 == "cubic");
+    let cubic = models.iter().any(|m| rank(m).1.starts_with("cubic"));
     let mut out = Vec::new();
     if !cubic {
         return out;
