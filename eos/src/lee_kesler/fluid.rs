@@ -56,6 +56,8 @@ pub enum Branch {
 const D_MAX: f64 = 25.0;
 /// Scan step in reduced density.
 const D_STEP: f64 = 0.02;
+/// Reduced temperature above which the isotherms are monotonic (a margin above Tr = 1).
+const MONOTONIC_TR: f64 = 1.001;
 /// Iteration cap of the root polish.
 const MAX_ITER: usize = 100;
 
@@ -95,6 +97,26 @@ impl FluidConstants {
     pub fn roots(&self, tr: f64, pr: f64) -> Result<Roots> {
         let mut out = Roots::default();
         let f = |d: f64| self.pr(tr, d).0 - pr;
+        // Above the critical temperature (Tr = 1 for both fluids) every isotherm rises
+        // monotonically with density up to D_MAX (checked over 1 < Tr <= 4 by the test
+        // `isotherms_above_the_critical_temperature_rise_monotonically`), so there is one root:
+        // bracket it by doubling from the ideal-gas density and polish it.
+        if tr > MONOTONIC_TR {
+            let mut hi = (pr / tr).clamp(1e-6, D_MAX);
+            let mut k = 0;
+            while f(hi) < 0.0 {
+                hi = (2.0 * hi).min(D_MAX);
+                k += 1;
+                if hi >= D_MAX || k > 60 {
+                    break;
+                }
+            }
+            if f(hi) >= 0.0 {
+                out.d[0] = self.polish(tr, pr, 0.0, hi, true)?;
+                out.len = 1;
+                return Ok(out);
+            }
+        }
         let mut lo = 0.0;
         let mut f_lo = -pr;
         let mut k = 1;
@@ -199,5 +221,27 @@ impl FluidConstants {
                 .unwrap_or(r[0]),
         };
         Ok((self.point(tr, d), roots.len))
+    }
+}
+
+#[cfg(test)]
+mod monotonic_tests {
+    use super::*;
+    use crate::lee_kesler::constants::{REFERENCE, SIMPLE};
+
+    #[test]
+    fn isotherms_above_the_critical_temperature_rise_monotonically() {
+        // The fast path of `roots` rests on this: dPr/dd > 0 for Tr > MONOTONIC_TR and
+        // 0 < d <= D_MAX, for both the simple and the reference fluid (dense scan).
+        for fluid in [&SIMPLE, &REFERENCE] {
+            for i in 0..=600 {
+                let tr = MONOTONIC_TR + (4.0 - MONOTONIC_TR) * i as f64 / 600.0;
+                for k in 1..=5000 {
+                    let d = D_MAX * k as f64 / 5000.0;
+                    let (_, dp) = fluid.pr(tr, d);
+                    assert!(dp > 0.0, "Tr {tr}, d {d}: dPr/dd = {dp}");
+                }
+            }
+        }
     }
 }
