@@ -17,6 +17,17 @@ fn pending() -> std::sync::MutexGuard<'static, Vec<PathBuf>> {
         .unwrap_or_else(|poisoned| poisoned.into_inner())
 }
 
+/// Registers a temporary file written outside [`write_with`] (for example the audit's
+/// streamed copy), so that an interrupt removes it.
+pub fn track(path: &Path) {
+    pending().push(path.to_path_buf());
+}
+
+/// Forgets a temporary file registered with [`track`] (renamed into place, or removed).
+pub fn untrack(path: &Path) {
+    pending().retain(|p| p != path);
+}
+
 /// Installs (once) the Ctrl-C handler that removes every temporary output file and exits with
 /// status 130, so an interrupted run leaves no partial file behind.
 pub fn clean_up_on_interrupt() {

@@ -245,12 +245,34 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
                     (row, outcome, out)
                 })
                 .collect();
-            for (row, outcome, out) in done {
-                tally(&mut report, row, &outcome, &out, value_col);
-                if let Err(e) = sink.write(&out, false) {
-                    sink.abandon();
-                    return Err(e);
-                }
+            // A CSV copy is serialised on all cores, a slice at a time, and written in one
+            // call per chunk; a workbook takes its rows one by one.
+            let bytes: Option<Vec<Vec<u8>>> = sink.takes_bytes().then(|| {
+                done.par_chunks(1024)
+                    .map(|part| {
+                        let mut w = csv::WriterBuilder::new()
+                            .flexible(true)
+                            .from_writer(Vec::with_capacity(part.len() * 96));
+                        for (_, _, out) in part {
+                            // Writing into memory cannot fail.
+                            let _ = w.write_record(out);
+                        }
+                        w.into_inner().unwrap_or_default()
+                    })
+                    .collect()
+            });
+            for (row, outcome, out) in &done {
+                tally(&mut report, *row, outcome, out, value_col);
+            }
+            let written = match &bytes {
+                Some(parts) => parts.iter().try_for_each(|b| sink.write_csv_bytes(b)),
+                None => done
+                    .iter()
+                    .try_for_each(|(_, _, out)| sink.write(out, false)),
+            };
+            if let Err(e) = written {
+                sink.abandon();
+                return Err(e);
             }
         }
         Ok(sink)

@@ -209,7 +209,7 @@ fn cell_text(d: &Data) -> String {
 /// The annotated copy being written to a temporary file.
 pub enum Sink {
     Csv {
-        writer: Box<csv::Writer<std::io::BufWriter<File>>>,
+        file: Box<std::io::BufWriter<File>>,
         tmp: PathBuf,
         dest: PathBuf,
     },
@@ -260,17 +260,14 @@ impl Sink {
     /// Starts the copy of kind `kind` bound for `dest`.
     pub fn create(dest: &Path, kind: Kind) -> Result<Sink, CliError> {
         let tmp = tmp_path(dest);
+        crate::output_file::track(&tmp);
         Ok(match kind {
             Kind::Csv => {
                 let f = File::create(&tmp).map_err(|e| {
                     CliError::Output(format!("cannot create \"{}\": {e}", tmp.display()))
                 })?;
                 Sink::Csv {
-                    writer: Box::new(
-                        csv::WriterBuilder::new()
-                            .flexible(true)
-                            .from_writer(std::io::BufWriter::with_capacity(1 << 20, f)),
-                    ),
+                    file: Box::new(std::io::BufWriter::with_capacity(1 << 20, f)),
                     tmp,
                     dest: dest.to_path_buf(),
                 }
@@ -284,10 +281,33 @@ impl Sink {
         })
     }
 
+    /// True when rows can be handed over as CSV bytes ([`Sink::write_csv_bytes`]).
+    pub fn takes_bytes(&self) -> bool {
+        matches!(self, Sink::Csv { .. })
+    }
+
+    /// Writes rows already serialised as CSV (a CSV sink only; a workbook refuses).
+    pub fn write_csv_bytes(&mut self, bytes: &[u8]) -> Result<(), CliError> {
+        use std::io::Write;
+        match self {
+            Sink::Csv { file, .. } => file.write_all(bytes).map_err(out_err),
+            Sink::Xlsx { .. } => Err(CliError::Output(
+                "a workbook copy takes rows, not CSV text".to_string(),
+            )),
+        }
+    }
+
     /// Writes one row (numbers as numbers in a workbook; `emphasis` in bold).
     pub fn write(&mut self, cells: &csv::StringRecord, emphasis: bool) -> Result<(), CliError> {
         match self {
-            Sink::Csv { writer, .. } => writer.write_record(cells).map_err(out_err),
+            Sink::Csv { .. } => {
+                let mut w = csv::WriterBuilder::new()
+                    .flexible(true)
+                    .from_writer(Vec::new());
+                w.write_record(cells).map_err(out_err)?;
+                let bytes = w.into_inner().map_err(out_err)?;
+                self.write_csv_bytes(&bytes)
+            }
             Sink::Xlsx { sheet, row, .. } => {
                 let bold = rust_xlsxwriter::Format::new().set_bold();
                 for (c, text) in cells.iter().enumerate() {
@@ -309,10 +329,8 @@ impl Sink {
     /// Completes the file and renames it over the destination.
     pub fn finish(self) -> Result<PathBuf, CliError> {
         let (tmp, dest) = match self {
-            Sink::Csv { writer, tmp, dest } => {
-                let inner = writer.into_inner().map_err(out_err)?;
-                inner
-                    .into_inner()
+            Sink::Csv { file, tmp, dest } => {
+                file.into_inner()
                     .map_err(out_err)?
                     .sync_all()
                     .map_err(out_err)?;
@@ -330,10 +348,12 @@ impl Sink {
                 (tmp, dest)
             }
         };
-        std::fs::rename(&tmp, &dest).map_err(|e| {
+        let renamed = std::fs::rename(&tmp, &dest).map_err(|e| {
             let _ = std::fs::remove_file(&tmp);
             CliError::Output(format!("cannot rename to \"{}\": {e}", dest.display()))
-        })?;
+        });
+        crate::output_file::untrack(&tmp);
+        renamed?;
         Ok(dest)
     }
 
@@ -342,6 +362,7 @@ impl Sink {
         let tmp = match self {
             Sink::Csv { tmp, .. } | Sink::Xlsx { tmp, .. } => tmp,
         };
-        let _ = std::fs::remove_file(tmp);
+        let _ = std::fs::remove_file(&tmp);
+        crate::output_file::untrack(&tmp);
     }
 }
