@@ -248,6 +248,20 @@ pub fn absolute_pressure(input: &str, p: Pressure, ambient_pa: f64) -> Result<f6
     }
 }
 
+/// The ambient pressure that gauge readings are referred to, Pa (itself absolute).
+pub fn ambient_pressure(input: &str) -> Result<f64, UnitError> {
+    pressure(input).and_then(|p| absolute_pressure(input, p, 0.0))
+}
+
+/// An absolute pressure in Pa from a reading that may be gauge, with the gauge flag.
+pub fn pressure_reading(input: &str, ambient_pa: f64) -> Result<(f64, bool), UnitError> {
+    let reading = pressure(input)?;
+    Ok((
+        absolute_pressure(input, reading, ambient_pa)?,
+        reading.is_gauge(),
+    ))
+}
+
 /// A density as entered.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub enum Density {

@@ -41,6 +41,7 @@ pub mod if97;
 pub mod jobs;
 pub mod lee_kesler;
 pub mod model;
+pub mod pair_matrix;
 pub mod phase;
 pub mod properties;
 pub mod pure;

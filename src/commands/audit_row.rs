@@ -167,9 +167,7 @@ impl Mapping {
         };
         add(Field::Temperature, &|t| units::temperature(t).ok());
         add(Field::Pressure, &|t| {
-            units::pressure(t)
-                .and_then(|r| units::absolute_pressure(t, r, ambient))
-                .ok()
+            units::pressure_reading(t, ambient).map(|r| r.0).ok()
         });
         add(Field::Value, &|t| match units::density(t).ok()? {
             units::Density::Mass(v) => Some(v),
@@ -483,8 +481,8 @@ fn read_and_compute(
         Some(p) => p,
         None => {
             let ptext = with_unit(pc, None)?;
-            units::pressure(&ptext)
-                .and_then(|r| units::absolute_pressure(&ptext, r, d.ambient))
+            units::pressure_reading(&ptext, d.ambient)
+                .map(|r| r.0)
                 .map_err(|e| bad(pc, e.to_string()))?
         }
     };

@@ -139,10 +139,8 @@ fn states_of(args: &CompareArgs, feed: &Feed, ambient: f64) -> Result<States, Cl
     };
     let t = grid::parse_axis(tt, units::temperature)
         .map_err(|e| CliError::BadInput(format!("--temperatures: {e}")))?;
-    let p = grid::parse_axis(pp, |s| {
-        units::pressure(s).and_then(|r| units::absolute_pressure(s, r, ambient))
-    })
-    .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
+    let p = grid::parse_axis(pp, |s| units::pressure_reading(s, ambient).map(|r| r.0))
+        .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
     grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;
     let mut points = Vec::with_capacity(t.len() * p.len());
     for &ti in &t {
@@ -328,8 +326,7 @@ pub fn dispatch(args: &CompareArgs) -> Result<crate::exit::Exit, CliError> {
 /// Runs the comparison.
 pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
     let feed = feed::read(&args.fluid)?;
-    let ambient = units::pressure(&args.ambient)
-        .and_then(|p| units::absolute_pressure(&args.ambient, p, 0.0))?;
+    let ambient = units::ambient_pressure(&args.ambient)?;
     let tolerances = parse_tolerances(&args.tolerance)?;
     let (reference, mut states) = reference_and_states(args, &feed, ambient)?;
     let mut warnings = Vec::new();

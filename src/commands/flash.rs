@@ -131,14 +131,11 @@ fn spec(args: &FlashArgs, feed: &Feed, ambient: f64) -> Result<Spec, CliError> {
         .as_deref()
         .map(units::temperature)
         .transpose()?;
-    let p = match args.pressure.as_deref() {
-        Some(text) => Some(units::absolute_pressure(
-            text,
-            units::pressure(text)?,
-            ambient,
-        )?),
-        None => None,
-    };
+    let p = args
+        .pressure
+        .as_deref()
+        .map(|text| units::pressure_reading(text, ambient).map(|r| r.0))
+        .transpose()?;
     let mm = feed.molar_mass();
     let h = args
         .enthalpy
@@ -193,8 +190,7 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
     if feed.is_pure() {
         return Err(pure_fluid(&feed));
     }
-    let ambient = units::pressure(&args.ambient)
-        .and_then(|p| units::absolute_pressure(&args.ambient, p, 0.0))?;
+    let ambient = units::ambient_pressure(&args.ambient)?;
     let spec = spec(args, &feed, ambient)?;
     if let Spec::Tp(t, _) | Spec::PointAtT(_, t) = spec {
         check_triple_points(&feed, t, "the temperature")?;

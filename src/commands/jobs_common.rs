@@ -16,13 +16,12 @@ const S_PER_D: f64 = 86_400.0;
 
 /// The ambient pressure of gauge readings, Pa.
 pub fn ambient(text: &str) -> Result<f64, CliError> {
-    Ok(units::pressure(text).and_then(|p| units::absolute_pressure(text, p, 0.0))?)
+    Ok(units::ambient_pressure(text)?)
 }
 
 /// An absolute pressure in Pa from a reading that may be gauge.
 pub fn pressure(text: &str, ambient: f64) -> Result<f64, CliError> {
-    let reading = units::pressure(text)?;
-    Ok(units::absolute_pressure(text, reading, ambient)?)
+    Ok(units::pressure_reading(text, ambient)?.0)
 }
 
 /// A temperature in K.

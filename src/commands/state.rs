@@ -48,23 +48,17 @@ impl Given {
 /// Computes the state with every requested model.
 pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
     let feed = feed::read(&args.fluid)?;
-    let ambient = units::pressure(&args.ambient)
-        .and_then(|p| units::absolute_pressure(&args.ambient, p, 0.0))?;
+    let ambient = units::ambient_pressure(&args.ambient)?;
     let t = args
         .temperature
         .as_deref()
         .map(units::temperature)
         .transpose()?;
-    let p = match args.pressure.as_deref() {
-        Some(text) => {
-            let reading = units::pressure(text)?;
-            Some((
-                units::absolute_pressure(text, reading, ambient)?,
-                reading.is_gauge(),
-            ))
-        }
-        None => None,
-    };
+    let p = args
+        .pressure
+        .as_deref()
+        .map(|text| units::pressure_reading(text, ambient))
+        .transpose()?;
     let rho = args
         .density
         .as_deref()

@@ -50,8 +50,7 @@ pub fn run(args: &TableArgs) -> Result<Exit, CliError> {
 /// Computes the table.
 pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
     let feed = feed::read(&args.fluid)?;
-    let ambient = units::pressure(&args.ambient)
-        .and_then(|p| units::absolute_pressure(&args.ambient, p, 0.0))?;
+    let ambient = units::ambient_pressure(&args.ambient)?;
     let sel = table_property::parse(&args.properties)?;
     let ids = models::resolve_ids(&args.model, &feed)?;
     if ids.len() != 1 || args.model.trim().eq_ignore_ascii_case("all") {
@@ -65,7 +64,7 @@ pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
     let t = grid::parse_axis(&args.temperatures, units::temperature)
         .map_err(|e| CliError::BadInput(format!("--temperatures: {e}")))?;
     let p = grid::parse_axis(&args.pressures, |s| {
-        units::pressure(s).and_then(|r| units::absolute_pressure(s, r, ambient))
+        units::pressure_reading(s, ambient).map(|r| r.0)
     })
     .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
     grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;

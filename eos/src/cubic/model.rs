@@ -73,25 +73,17 @@ impl Cubic {
         let one_minus_k = match kij {
             None => vec![1.0; n * n],
             Some(k) => {
-                if k.len() != n * n {
-                    return Err(Error::invalid(
-                        "k_ij matrix size",
-                        k.len() as f64,
-                        format!("{} entries for {n} components", n * n),
-                    ));
-                }
-                for i in 0..n {
-                    for j in 0..n {
-                        let (kij, kji) = (k[i * n + j], k[j * n + i]);
-                        if !kij.is_finite() || (kij - kji).abs() > 1e-12 || (i == j && kij != 0.0) {
-                            return Err(Error::invalid(
-                                "k_ij",
-                                kij,
-                                "finite, symmetric, zero on the diagonal",
-                            ));
-                        }
-                    }
-                }
+                crate::pair_matrix::check(
+                    k,
+                    n,
+                    &crate::pair_matrix::PairRule {
+                        name: "k_ij",
+                        diagonal: 0.0,
+                        positive: false,
+                        below: f64::INFINITY,
+                        accepted: "finite, symmetric, zero on the diagonal",
+                    },
+                )?;
                 k.iter().map(|k| 1.0 - k).collect()
             }
         };

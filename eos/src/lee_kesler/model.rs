@@ -95,28 +95,17 @@ impl LeeKesler {
         let kstar = match kstar {
             None => vec![1.0; n * n],
             Some(k) => {
-                if k.len() != n * n {
-                    return Err(Error::invalid(
-                        "k*_jk matrix size",
-                        k.len() as f64,
-                        format!("{} entries for {n} components", n * n),
-                    ));
-                }
-                for i in 0..n {
-                    for j in 0..n {
-                        let (a, b) = (k[i * n + j], k[j * n + i]);
-                        if !(a.is_finite() && a > 0.0)
-                            || (a - b).abs() > 1e-12
-                            || (i == j && (a - 1.0).abs() > 1e-12)
-                        {
-                            return Err(Error::invalid(
-                                "k*_jk",
-                                a,
-                                "positive, symmetric, one on the diagonal",
-                            ));
-                        }
-                    }
-                }
+                crate::pair_matrix::check(
+                    k,
+                    n,
+                    &crate::pair_matrix::PairRule {
+                        name: "k*_jk",
+                        diagonal: 1.0,
+                        positive: true,
+                        below: f64::INFINITY,
+                        accepted: "positive, symmetric, one on the diagonal",
+                    },
+                )?;
                 k.to_vec()
             }
         };

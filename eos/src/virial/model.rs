@@ -91,25 +91,17 @@ impl Virial {
             }
         }
         if let Some(k) = kij {
-            if k.len() != n * n {
-                return Err(Error::invalid(
-                    "k_ij matrix size",
-                    k.len() as f64,
-                    format!("{} entries for {n} components", n * n),
-                ));
-            }
-            for i in 0..n {
-                for j in 0..n {
-                    let (a, b) = (k[i * n + j], k[j * n + i]);
-                    if !a.is_finite() || a >= 1.0 || (a - b).abs() > 1e-12 || (i == j && a != 0.0) {
-                        return Err(Error::invalid(
-                            "k_ij",
-                            a,
-                            "finite, below 1, symmetric, zero on the diagonal",
-                        ));
-                    }
-                }
-            }
+            crate::pair_matrix::check(
+                k,
+                n,
+                &crate::pair_matrix::PairRule {
+                    name: "k_ij",
+                    diagonal: 0.0,
+                    positive: false,
+                    below: 1.0,
+                    accepted: "finite, below 1, symmetric, zero on the diagonal",
+                },
+            )?;
         }
         let vc_i: Vec<f64> = comps
             .iter()
