@@ -2,6 +2,8 @@
 //! pure-fluid limit of a binary.
 
 mod common;
+#[path = "support/yardstick.rs"]
+mod yardstick;
 
 use common::{demo_gas, pr_model};
 use eos::equilibrium::{envelope, flash, saturation, EnvelopeOptions, EnvelopeStop};
@@ -82,4 +84,61 @@ fn binary_envelope_collapses_onto_the_pure_curve() {
         assert!(dev < 0.6 * last_dev && crit < 0.6 * last_crit, "eps {eps}");
         (last_dev, last_crit) = (dev, crit);
     }
+}
+
+/// The stability test agrees with the envelope, which is found by a different method
+/// (Newton continuation of the saturation equations, Michelsen 1980): along isotherms
+/// across the envelope of the demo gas and of the yardstick's 10-component gas, a feed 4 %
+/// in pressure outside the envelope is stable and 4 % inside is unstable. States within 10 %
+/// of the critical pressure or 3 K of the cricondentherm are skipped (there the envelope's
+/// straight-line interpolation between traced points is not that accurate).
+#[test]
+fn stability_test_agrees_with_the_envelope() {
+    use eos::equilibrium::stability;
+    let (names, z) = demo_gas();
+    let cases = [(pr_model(&names), z), yardstick::mix()];
+    let mut checked = 0;
+    for (m, z) in &cases {
+        let e = envelope::trace(m, z, EnvelopeOptions::default()).unwrap();
+        assert_eq!(e.stop, EnvelopeStop::Complete);
+        let crit = e.critical.expect("critical point passed");
+        // Above both ends of the trace, every isotherm crosses it an even number of times.
+        let ends = [&e.points[0], &e.points[e.points.len() - 1]];
+        let t_min = ends[0].t.max(ends[1].t);
+        let t_max = e.cricondentherm.t - 3.0;
+        for k in 0..25 {
+            let t = t_min + 5.0 + (t_max - t_min - 5.0) * k as f64 / 24.0;
+            // Every crossing of the traced envelope with this isotherm, in ln P.
+            let mut ps: Vec<f64> = e
+                .points
+                .windows(2)
+                .filter(|w| (w[0].t - t) * (w[1].t - t) <= 0.0 && (w[1].t - w[0].t).abs() > 1e-9)
+                .map(|w| {
+                    let f = (t - w[0].t) / (w[1].t - w[0].t);
+                    (w[0].p.ln() + f * (w[1].p.ln() - w[0].p.ln())).exp()
+                })
+                .collect();
+            ps.sort_by(f64::total_cmp);
+            ps.dedup_by(|a, b| (*a / *b - 1.0).abs() < 1e-6);
+            assert_eq!(ps.len() % 2, 0, "{t} K: {ps:?}");
+            for pair in ps.chunks(2) {
+                let (lo, hi) = (pair[0], pair[1]);
+                for (p, inside) in [
+                    (lo * 0.96, false),
+                    (lo * 1.04, true),
+                    (hi * 0.96, true),
+                    (hi * 1.04, false),
+                ] {
+                    if (p / crit.p - 1.0).abs() < 0.1 || (inside && lo * 1.04 >= hi * 0.96) {
+                        continue;
+                    }
+                    let s = stability::test(m, t, p, z).unwrap();
+                    assert_eq!(s.stable, !inside, "{t} K, {} bar: tm {}", p / 1e5, s.tm);
+                    checked += 1;
+                }
+            }
+        }
+    }
+    println!("stability against the envelope: {checked} states");
+    assert!(checked >= 60, "{checked}");
 }

@@ -31,9 +31,11 @@ impl Alpha {
         }
     }
 
-    /// sqrt(alpha) and its derivatives at reduced temperature `tr`, for parameter `m`.
+    /// sqrt(alpha) and its derivatives at reduced temperature `tr`, for parameter `m`;
+    /// `sqrt_tr` is sqrt(tr), which the caller can form for every component of a mixture
+    /// from one square root (sqrt(T) / sqrt(Tc,i)).
     #[inline]
-    pub fn sqrt_alpha(&self, tr: f64, m: f64) -> SqrtAlpha {
+    pub fn sqrt_alpha(&self, tr: f64, sqrt_tr: f64, m: f64) -> SqrtAlpha {
         match self {
             Alpha::Constant => SqrtAlpha {
                 s: 1.0,
@@ -49,7 +51,7 @@ impl Alpha {
                 }
             }
             Alpha::Soave(_) => {
-                let r = tr.sqrt();
+                let r = sqrt_tr;
                 SqrtAlpha {
                     s: 1.0 + m * (1.0 - r),
                     s_t: -0.5 * m * r,

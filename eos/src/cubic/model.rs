@@ -30,6 +30,10 @@ pub struct Cubic {
     m: Vec<f64>,
     /// 1 - k_ij, row-major n x n.
     one_minus_k: Vec<f64>,
+    /// 1 / Tc,i and 1 / sqrt(Tc,i), so that Tr and sqrt(Tr) of every component come from
+    /// one square root per temperature.
+    inv_tc: Vec<f64>,
+    inv_sqrt_tc: Vec<f64>,
 }
 
 /// The mixture parameters at one (T, x): a, T da/dT, T^2 d2a/dT2 and b.
@@ -106,6 +110,8 @@ impl Cubic {
                 .map(|c| spec.alpha.parameter(c.omega))
                 .collect(),
             one_minus_k,
+            inv_tc: comps.iter().map(|c| 1.0 / c.tc).collect(),
+            inv_sqrt_tc: comps.iter().map(|c| 1.0 / c.tc.sqrt()).collect(),
             comps: comps.to_vec(),
         })
     }
@@ -166,9 +172,15 @@ impl Cubic {
         &self.m
     }
 
+    /// sqrt(a_i(T)) of every component with its scaled T derivatives.
     fn sqrt_alphas(&self, t: f64, out: &mut [SqrtAlpha]) {
+        let sqrt_t = t.sqrt();
         for (i, o) in out.iter_mut().enumerate() {
-            let sa = self.spec.alpha.sqrt_alpha(t / self.comps[i].tc, self.m[i]);
+            let sa = self.spec.alpha.sqrt_alpha(
+                t * self.inv_tc[i],
+                sqrt_t * self.inv_sqrt_tc[i],
+                self.m[i],
+            );
             let k = self.sqrt_ac[i];
             *o = SqrtAlpha {
                 s: k * sa.s,
@@ -188,25 +200,33 @@ impl Cubic {
             s_tt: 0.0,
         }; MAX_COMPONENTS];
         self.sqrt_alphas(t, &mut sa[..n]);
+        // ra_i = sum_j (1-k_ij) x_j s_j and its T derivatives, summed column by column (the
+        // matrix is symmetric) so that the inner loop runs over independent rows.
+        let (mut ra, mut ra_t, mut ra_tt) = (
+            [0.0; MAX_COMPONENTS],
+            [0.0; MAX_COMPONENTS],
+            [0.0; MAX_COMPONENTS],
+        );
+        for j in 0..n {
+            let col = &self.one_minus_k[j * n..(j + 1) * n];
+            let (c, c_t, c_tt) = (x[j] * sa[j].s, x[j] * sa[j].s_t, x[j] * sa[j].s_tt);
+            for i in 0..n {
+                ra[i] += col[i] * c;
+                ra_t[i] += col[i] * c_t;
+                ra_tt[i] += col[i] * c_tt;
+            }
+        }
         let (mut a, mut a_t, mut a_tt, mut b) = (0.0, 0.0, 0.0, 0.0);
         for i in 0..n {
-            let row = &self.one_minus_k[i * n..(i + 1) * n];
-            let (mut ra, mut ra_t, mut ra_tt) = (0.0, 0.0, 0.0);
-            for j in 0..n {
-                let w = x[j] * row[j];
-                ra += w * sa[j].s;
-                ra_t += w * sa[j].s_t;
-                ra_tt += w * sa[j].s_tt;
-            }
             // sum_j x_j a_ij = s_i sum_j x_j (1-k_ij) s_j and its T derivatives.
             let si = sa[i];
-            let ai = si.s * ra;
+            let ai = si.s * ra[i];
             if let Some(out) = sum_a.as_deref_mut() {
                 out[i] = ai;
             }
             a += x[i] * ai;
-            a_t += x[i] * (si.s_t * ra + si.s * ra_t);
-            a_tt += x[i] * (si.s_tt * ra + 2.0 * si.s_t * ra_t + si.s * ra_tt);
+            a_t += x[i] * (si.s_t * ra[i] + si.s * ra_t[i]);
+            a_tt += x[i] * (si.s_tt * ra[i] + 2.0 * si.s_t * ra_t[i] + si.s * ra_tt[i]);
             b += x[i] * self.b[i];
         }
         MixParams { a, a_t, a_tt, b }
@@ -217,25 +237,40 @@ impl Cubic {
     /// a and b of the mixture at T without their temperature derivatives (for the density
     /// roots and ln phi, which need none): the same operations in the same order as
     /// [`Cubic::mix`], so the values are identical, at a third of the inner-loop work.
-    fn mix_ab(&self, t: f64, x: &[f64], mut sum_a: Option<&mut [f64]>) -> (f64, f64) {
+    fn mix_ab(&self, t: f64, x: &[f64], sum_a: Option<&mut [f64]>) -> (f64, f64) {
         let n = self.comps.len();
         let mut s = [0.0; MAX_COMPONENTS];
-        for (i, si) in s[..n].iter_mut().enumerate() {
+        self.sqrt_a(t, &mut s[..n]);
+        self.mix_ab_from(&s[..n], x, sum_a)
+    }
+
+    /// sqrt(a_i(T)) of every component (the `s` of [`Cubic::sqrt_alphas`]).
+    fn sqrt_a(&self, t: f64, s: &mut [f64]) {
+        let sqrt_t = t.sqrt();
+        for (i, si) in s.iter_mut().enumerate() {
             *si = self.sqrt_ac[i]
                 * self
                     .spec
                     .alpha
-                    .sqrt_alpha(t / self.comps[i].tc, self.m[i])
+                    .sqrt_alpha(t * self.inv_tc[i], sqrt_t * self.inv_sqrt_tc[i], self.m[i])
                     .s;
+        }
+    }
+
+    /// [`Cubic::mix_ab`] with sqrt(a_i(T)) given in `s`.
+    fn mix_ab_from(&self, s: &[f64], x: &[f64], mut sum_a: Option<&mut [f64]>) -> (f64, f64) {
+        let n = self.comps.len();
+        let mut ra = [0.0; MAX_COMPONENTS];
+        for j in 0..n {
+            let col = &self.one_minus_k[j * n..(j + 1) * n];
+            let c = x[j] * s[j];
+            for (r, k) in ra[..n].iter_mut().zip(col) {
+                *r += k * c;
+            }
         }
         let (mut a, mut b) = (0.0, 0.0);
         for i in 0..n {
-            let row = &self.one_minus_k[i * n..(i + 1) * n];
-            let mut ra = 0.0;
-            for j in 0..n {
-                ra += x[j] * row[j] * s[j];
-            }
-            let ai = s[i] * ra;
+            let ai = s[i] * ra[i];
             if let Some(out) = sum_a.as_deref_mut() {
                 out[i] = ai;
             }
@@ -307,15 +342,8 @@ impl Cubic {
         let n = self.comps.len();
         let mut sum_a = [0.0; MAX_COMPONENTS];
         let mut s = [0.0; MAX_COMPONENTS];
-        for (i, si) in s[..n].iter_mut().enumerate() {
-            *si = self.sqrt_ac[i]
-                * self
-                    .spec
-                    .alpha
-                    .sqrt_alpha(t / self.comps[i].tc, self.m[i])
-                    .s;
-        }
-        let (d, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
+        self.sqrt_a(t, &mut s[..n]);
+        let (d, b) = self.mix_ab_from(&s[..n], x, Some(&mut sum_a[..n]));
         let rt = R * t;
         let v = 1.0 / rho;
         let (d1, d2) = (self.spec.d1, self.spec.d2);
@@ -439,13 +467,31 @@ impl Model for Cubic {
         let mut sum_a = [0.0; MAX_COMPONENTS];
         let (a, b) = self.mix_ab(t, x, Some(&mut sum_a[..n]));
         let roots = self.roots_from(a, b, t, p);
+        let f = a / (R * t);
         select_root(
             t,
             p,
             roots.as_slice(),
             sel,
-            |rho| self.alpha_z_from(a, b, t, rho),
-            |rho, out| self.ln_phi_from(a, b, &sum_a[..n], t, rho, out),
+            |rho| {
+                let eta = b * rho;
+                let (d, rd1, _) = self.d_integral(b, rho);
+                let one_eta = 1.0 - eta;
+                let ln_one_eta = one_eta.ln();
+                let alpha = -ln_one_eta - f * d;
+                let z_model = 1.0 + (eta / one_eta - f * rd1);
+                (alpha, z_model, (d, ln_one_eta))
+            },
+            |_, &(d, ln_one_eta), z_model, ln_z, out| {
+                // ln phi_i = (b_i/b)(Z - 1) - ln(1 - b rho) - ln Z - (a/RT) D (2 sum_j x_j
+                // a_ij / a - b_i/b), the ln phi of `ln_phi_from` with ln Z from the pressure.
+                let (inv_b, two_over_a, fd) = (1.0 / b, 2.0 / a, f * d);
+                let base = -ln_one_eta - ln_z;
+                for (i, o) in out.iter_mut().enumerate().take(n) {
+                    let bi_b = self.b[i] * inv_b;
+                    *o = bi_b * (z_model - 1.0) + base - fd * (two_over_a * sum_a[i] - bi_b);
+                }
+            },
             out,
         )
     }

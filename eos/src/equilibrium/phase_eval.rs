@@ -66,8 +66,9 @@ pub fn normalise(n: &[f64], x: &mut [f64]) -> Option<f64> {
     if !(total.is_finite() && total > 0.0) {
         return None;
     }
+    let inv = 1.0 / total;
     for (xi, ni) in x.iter_mut().zip(n) {
-        *xi = ni.max(0.0) / total;
+        *xi = ni.max(0.0) * inv;
     }
     Some(total)
 }
@@ -106,42 +107,56 @@ pub fn ln_phi_at_tp_generic<M: Model + ?Sized>(
         p,
         roots.as_slice(),
         sel,
-        |rho| model.alpha_z(t, rho, x),
-        |rho, out| model.ln_phi(t, rho, x, out),
+        |rho| {
+            let (alpha, z_model) = model.alpha_z(t, rho, x);
+            (alpha, z_model, ())
+        },
+        |rho, _, z_model, ln_z, out| {
+            model.ln_phi(t, rho, x, out);
+            // ln phi_i = mu_res_i/RT - ln Z: replace the model's ln Z by ln(P/(rho R T)).
+            let corr = z_model.ln() - ln_z;
+            for o in out.iter_mut() {
+                *o += corr;
+            }
+        },
         out,
     )
 }
 
 /// Chooses the root `sel` among the density roots `r` at (T, P), then fills `out` with ln
-/// phi there. `alpha_z(rho)` gives the model's alpha and Z, `ln_phi(rho, out)` its ln phi at
-/// (T, rho); the Gibbs energy of a root is g_res/RT = alpha + Z - 1 - ln Z with Z =
-/// P/(rho R T) taken from the given pressure (not from the model's Z, which for a dense
-/// liquid at low pressure is a small difference of large terms).
-pub fn select_root(
+/// phi there.
+///
+/// `eval(rho)` gives the model's alpha and Z at (T, rho) and whatever pieces of that work
+/// ln phi can reuse; `ln_phi(rho, pieces, z_model, ln_z, out)` gives ln phi_i = mu_res_i/RT -
+/// ln Z with ln Z = `ln_z` = ln(P/(rho R T)) taken from the given pressure (not from the
+/// model's Z, which for a dense liquid at low pressure is a small difference of large
+/// terms). The Gibbs energy of a root is g_res/RT = alpha + Z - 1 - ln Z with that Z.
+pub fn select_root<P>(
     t: f64,
     p: f64,
     r: &[f64],
     sel: RootSel,
-    alpha_z: impl Fn(f64) -> (f64, f64),
-    ln_phi: impl FnOnce(f64, &mut [f64]),
+    eval: impl Fn(f64) -> (f64, f64, P),
+    ln_phi: impl FnOnce(f64, &P, f64, f64, &mut [f64]),
     out: &mut [f64],
 ) -> Option<PhaseAt> {
     if r.is_empty() {
         return None;
     }
     let pick = |rho: f64| {
-        let (a, z_model) = alpha_z(rho);
+        let (a, z_model, pieces) = eval(rho);
         let z = p / (rho * R * t);
-        (rho, z, a + z - 1.0 - z.ln(), z_model)
+        let ln_z = z.ln();
+        (rho, z, ln_z, a + z - 1.0 - ln_z, z_model, pieces)
     };
-    let (rho, z, g, z_model) = match sel {
+    let (rho, z, ln_z, g, z_model, pieces) = match sel {
         RootSel::Vapor => pick(r[0]),
         RootSel::Liquid => pick(r[r.len() - 1]),
         RootSel::LowestGibbs => {
             let mut best = pick(r[0]);
             for &rho in &r[1..] {
                 let c = pick(rho);
-                if c.2 < best.2 {
+                if c.3 < best.3 {
                     best = c;
                 }
             }
@@ -157,12 +172,7 @@ pub fn select_root(
     if !(rho.is_finite() && z.is_finite() && z > 0.0 && z_model > 0.0 && g.is_finite()) {
         return None;
     }
-    ln_phi(rho, out);
-    // ln phi_i = mu_res_i/RT - ln Z: replace the model's ln Z by ln(P/(rho R T)).
-    let corr = (z_model / z).ln();
-    for o in out.iter_mut() {
-        *o += corr;
-    }
+    ln_phi(rho, &pieces, z_model, ln_z, out);
     if out.iter().any(|v| !v.is_finite()) {
         return None;
     }
