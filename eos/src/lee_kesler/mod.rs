@@ -14,8 +14,12 @@
 
 pub mod constants;
 pub mod fluid;
+pub mod isotherm;
 pub mod mixing;
 mod model;
+pub mod roots;
+#[cfg(test)]
+mod scan_reference;
 
 pub use constants::{FluidConstants, OMEGA_R, REFERENCE, SIMPLE};
 pub use fluid::{Branch, FluidPoint};
