@@ -17,7 +17,7 @@
 //! The departures are at the same T and P; the ideal-gas entropy is at the same P.
 
 use super::constants::FluidConstants;
-use super::isotherm::Isotherm;
+use super::isotherm::{Isotherm, Sample};
 use super::roots::roots;
 pub use super::roots::Roots;
 use crate::error::Result;
@@ -62,7 +62,8 @@ impl FluidConstants {
 
     /// Z, departures and ln(f/P) at (Tr, d).
     pub fn point(&self, tr: f64, d: f64) -> FluidPoint {
-        point(&Isotherm::new(self, tr), d)
+        let iso = Isotherm::new(self, tr);
+        point(&iso, d, &iso.sample(d))
     }
 
     /// The fluid's state at (Tr, Pr) on the chosen branch, with the number of roots.
@@ -70,14 +71,15 @@ impl FluidConstants {
         let iso = Isotherm::new(self, tr);
         let found = roots(&iso, pr)?;
         let r = found.as_slice();
+        let at = |i: usize| point(&iso, r[i], &found.sample(i).unwrap_or_default());
         let chosen = match branch {
-            Branch::Vapor => point(&iso, r[0]),
-            Branch::Liquid => point(&iso, r[r.len() - 1]),
+            Branch::Vapor => at(0),
+            Branch::Liquid => at(r.len() - 1),
             Branch::Stable => {
                 // the first root of lowest ln(f/P), each root evaluated once
-                let mut best = point(&iso, r[0]);
-                for &d in &r[1..] {
-                    let p = point(&iso, d);
+                let mut best = at(0);
+                for i in 1..r.len() {
+                    let p = at(i);
                     if p.ln_phi.total_cmp(&best.ln_phi).is_lt() {
                         best = p;
                     }
@@ -89,28 +91,31 @@ impl FluidConstants {
     }
 }
 
-/// Z, departures and ln(f/P) at density `d` on the isotherm `iso` (module docs).
-fn point(iso: &Isotherm, d: f64) -> FluidPoint {
+/// Z, departures and ln(f/P) at density `d` on the isotherm `iso`, sampled there as `s`
+/// (module docs).
+fn point(iso: &Isotherm, d: f64, s: &Sample) -> FluidPoint {
     let f = iso.fluid;
     let tr = iso.tr;
     let (b, c, dd) = (iso.b, iso.c, iso.d);
-    let (z, _) = iso.z(d);
+    let z = s.z;
     let g = f.gamma;
+    let it = 1.0 / tr;
+    let (it2, it3) = (it * it, it * it * it);
     let (d2, d5) = (d * d, d.powi(5));
-    let e =
-        f.c4 / (2.0 * tr.powi(3) * g) * (f.beta + 1.0 - (f.beta + 1.0 + g * d2) * (-g * d2).exp());
+    let e = 0.5 * iso.k / g * (f.beta + 1.0 - (f.beta + 1.0 + g * d2) * s.e);
+    let ln_z = z.ln();
     let h_dep = tr
         * (z - 1.0
-            - (f.b2 + 2.0 * f.b3 / tr + 3.0 * f.b4 / (tr * tr)) * d / tr
-            - (f.c2 - 3.0 * f.c3 / (tr * tr)) * d2 / (2.0 * tr)
-            + f.d2 * d5 / (5.0 * tr)
+            - (f.b2 + 2.0 * f.b3 * it + 3.0 * f.b4 * it2) * d * it
+            - (f.c2 - 3.0 * f.c3 * it2) * d2 * (0.5 * it)
+            + f.d2 * d5 * (0.2 * it)
             + 3.0 * e);
-    let s_dep = z.ln()
-        - (f.b1 + f.b3 / (tr * tr) + 2.0 * f.b4 / tr.powi(3)) * d
-        - (f.c1 - 2.0 * f.c3 / tr.powi(3)) * d2 / 2.0
-        - f.d1 * d5 / 5.0
+    let s_dep = ln_z
+        - (f.b1 + f.b3 * it2 + 2.0 * f.b4 * it3) * d
+        - (f.c1 - 2.0 * f.c3 * it3) * d2 * 0.5
+        - f.d1 * d5 * 0.2
         + 2.0 * e;
-    let ln_phi = z - 1.0 - z.ln() + b * d + c * d2 / 2.0 + dd * d5 / 5.0 + e;
+    let ln_phi = z - 1.0 - ln_z + b * d + c * d2 * 0.5 + dd * d5 * 0.2 + e;
     FluidPoint {
         vr: 1.0 / d,
         z,

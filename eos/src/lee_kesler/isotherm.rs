@@ -19,6 +19,14 @@
 
 use super::constants::FluidConstants;
 
+/// Z, dZ/dd and E = exp(-gamma d^2) at one density.
+#[derive(Debug, Clone, Copy, Default, PartialEq)]
+pub struct Sample {
+    pub z: f64,
+    pub dz: f64,
+    pub e: f64,
+}
+
 /// One fluid at one reduced temperature.
 #[derive(Debug, Clone, Copy)]
 pub struct Isotherm<'a> {
@@ -53,6 +61,13 @@ impl<'a> Isotherm<'a> {
     /// Z and dZ/dd at reduced density `d`.
     #[inline]
     pub fn z(&self, d: f64) -> (f64, f64) {
+        let s = self.sample(d);
+        (s.z, s.dz)
+    }
+
+    /// Z, dZ/dd and E at reduced density `d`.
+    #[inline]
+    pub fn sample(&self, d: f64) -> Sample {
         let (b, c, dd, k) = (self.b, self.c, self.d, self.k);
         let beta = self.fluid.beta;
         let g = self.fluid.gamma;
@@ -63,14 +78,19 @@ impl<'a> Isotherm<'a> {
             + 2.0 * c * d
             + 5.0 * dd * d2 * d2
             + k * e * (2.0 * beta * d + 4.0 * g * d2 * d - 2.0 * g * d * (beta * d2 + g * d2 * d2));
-        (z, dz)
+        Sample { z, dz, e }
     }
 
     /// Pr and dPr/dd at reduced density `d`.
     #[inline]
     pub fn pr(&self, d: f64) -> (f64, f64) {
-        let (z, dz) = self.z(d);
-        (self.tr * d * z, self.tr * (z + d * dz))
+        self.pr_of(d, &self.sample(d))
+    }
+
+    /// Pr and dPr/dd from the sample `s` taken at `d`.
+    #[inline]
+    pub fn pr_of(&self, d: f64, s: &Sample) -> (f64, f64) {
+        (self.tr * d * s.z, self.tr * (s.z + d * s.dz))
     }
 
     /// d2Pr/dd2 at reduced density `d` (module docs).

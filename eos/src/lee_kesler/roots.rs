@@ -8,9 +8,11 @@
 //!
 //! - Above the critical temperature (Tr > MONOTONIC_TR) the isotherm rises monotonically over
 //!   the whole range (tested in `fluid`), so there is at most one root; it is found by a
-//!   safeguarded Newton iteration on the bracket (0, D_MAX) started from the pressure series
-//!   Z = 1 + B Pr/Tr + (C - B^2)(Pr/Tr)^2. D_MAX is checked to bracket the root only if the
-//!   iteration is driven there.
+//!   safeguarded Newton iteration on the bracket (0, D_MAX) started from the truncated
+//!   density series Z = 1 + B d + C2 d^2 (C2 = C + beta c4/Tr^3, the d^2 part of the
+//!   exponential term): its pressure form Z = 1 + B x + (C2 - B^2) x^2 at x = Pr/Tr gives d,
+//!   refined once by d = x/(1 + B d + C2 d^2). D_MAX is checked to bracket the root only if
+//!   the iteration is driven there.
 //! - Otherwise grid points are skipped where a bound proves f keeps its sign. With
 //!   F = f(a), G = f'(a) and M >= |f''| on [a, a + w] (`Isotherm::curvature_bound`), Taylor's
 //!   theorem gives s f(a + t) >= |F| + s G t - M t^2/2 with s = sign F, which stays positive
@@ -19,7 +21,7 @@
 //!   found, the cells they are in and the polished roots are the point-by-point scan's own;
 //!   where the bound proves nothing the next grid point is evaluated as the scan would.
 
-use super::isotherm::Isotherm;
+use super::isotherm::{Isotherm, Sample};
 use crate::error::{Error, Result};
 
 /// Highest reduced density scanned (Vr = 0.04, denser than any liquid of either fluid).
@@ -40,6 +42,8 @@ const MAX_WINDOW: f64 = 2.0;
 pub struct Roots {
     pub len: usize,
     pub d: [f64; 3],
+    /// The isotherm sampled at each root (the root finder's last evaluation there).
+    at: [Sample; 3],
 }
 
 impl Roots {
@@ -48,9 +52,15 @@ impl Roots {
         &self.d[..self.len]
     }
 
-    fn push(&mut self, d: f64) {
+    /// Z, dZ/dd and E at the `i`-th root.
+    pub fn sample(&self, i: usize) -> Option<Sample> {
+        self.at[..self.len].get(i).copied()
+    }
+
+    fn push(&mut self, (d, s): (f64, Sample)) {
         if self.len < 3 {
             self.d[self.len] = d;
+            self.at[self.len] = s;
             self.len += 1;
         }
     }
@@ -60,8 +70,8 @@ impl Roots {
 pub fn roots(iso: &Isotherm, pr: f64) -> Result<Roots> {
     let mut out = Roots::default();
     if iso.tr > MONOTONIC_TR {
-        if let Some(d) = monotonic_root(iso, pr)? {
-            out.push(d);
+        if let Some(found) = monotonic_root(iso, pr)? {
+            out.push(found);
             return Ok(out);
         }
     }
@@ -76,22 +86,30 @@ pub fn roots(iso: &Isotherm, pr: f64) -> Result<Roots> {
 }
 
 /// The one root of a monotonic isotherm, or `None` when Pr(D_MAX) < pr.
-fn monotonic_root(iso: &Isotherm, pr: f64) -> Result<Option<f64>> {
+fn monotonic_root(iso: &Isotherm, pr: f64) -> Result<Option<(f64, Sample)>> {
     let (mut lo, mut hi) = (0.0, D_MAX);
     let mut hi_checked = false;
+    // Z = 1 + B d + C2 d^2 + ... with C2 = C + k beta (the exponential term's d^2 part)
+    // inverted to Z = 1 + B x + (C2 - B^2) x^2 in x = Pr/Tr, then one substitution.
     let x = pr / iso.tr;
-    let z0 = 1.0 + iso.b * x + (iso.c - iso.b * iso.b) * x * x;
+    let c2 = iso.c + iso.k * iso.fluid.beta;
+    let z0 = 1.0 + iso.b * x + (c2 - iso.b * iso.b) * x * x;
     let mut d = if z0 > 0.1 { x / z0 } else { x };
+    let z1 = 1.0 + iso.b * d + c2 * d * d;
+    if z1 > 0.1 {
+        d = x / z1;
+    }
     if !(d > lo && d < hi) {
         d = 0.5 * (lo + hi);
     }
     let mut last = f64::INFINITY;
     for _ in 0..MAX_ITER {
-        let (p, dp) = iso.pr(d);
+        let s = iso.sample(d);
+        let (p, dp) = iso.pr_of(d, &s);
         let r = p - pr;
         last = r;
         if r.abs() <= 1e-14 * pr.max(1e-300) {
-            return Ok(Some(d));
+            return Ok(Some((d, s)));
         }
         if r < 0.0 {
             lo = d;
@@ -103,7 +121,7 @@ fn monotonic_root(iso: &Isotherm, pr: f64) -> Result<Option<f64>> {
             if !hi_checked && iso.pr(D_MAX).0 < pr {
                 return Ok(None);
             }
-            return Ok(Some(d));
+            return Ok(Some((d, s)));
         }
         let newton = d - r / dp;
         d = if newton > lo && newton < hi {
@@ -195,15 +213,22 @@ fn scan(iso: &Isotherm, pr: f64, out: &mut Roots) -> Result<()> {
 
 /// Safeguarded Newton iteration for f(d) = 0 inside a cell [lo, hi] where f changes sign
 /// (`rising`: f(lo) < 0).
-pub fn polish(iso: &Isotherm, pr: f64, mut lo: f64, mut hi: f64, rising: bool) -> Result<f64> {
+pub fn polish(
+    iso: &Isotherm,
+    pr: f64,
+    mut lo: f64,
+    mut hi: f64,
+    rising: bool,
+) -> Result<(f64, Sample)> {
     let mut d = 0.5 * (lo + hi);
     let mut last = f64::INFINITY;
     for _ in 0..MAX_ITER {
-        let (p, dp) = iso.pr(d);
+        let s = iso.sample(d);
+        let (p, dp) = iso.pr_of(d, &s);
         let r = p - pr;
         last = r;
         if r.abs() <= 1e-14 * pr.max(1e-300) || hi - lo <= 4.0 * f64::EPSILON * hi {
-            return Ok(d);
+            return Ok((d, s));
         }
         if (r < 0.0) == rising {
             lo = d;
