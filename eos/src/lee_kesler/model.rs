@@ -16,7 +16,7 @@
 
 use super::constants::{OMEGA_R, REFERENCE, SIMPLE};
 use super::fluid::{Branch, FluidPoint};
-use super::mixing::{pseudo_critical, zc, PseudoCritical};
+use super::mixing::{zc, PairTerms, PseudoCritical};
 use crate::component::Component;
 use crate::composition;
 use crate::constants::R;
@@ -63,10 +63,7 @@ pub struct LkState {
 #[derive(Debug, Clone)]
 pub struct LeeKesler {
     comps: Vec<Component>,
-    tc: Vec<f64>,
-    omega: Vec<f64>,
-    vc_cbrt: Vec<f64>,
-    kstar: Vec<f64>,
+    pairs: PairTerms,
 }
 
 impl LeeKesler {
@@ -109,14 +106,14 @@ impl LeeKesler {
                 k.to_vec()
             }
         };
+        let tc: Vec<f64> = comps.iter().map(|c| c.tc).collect();
+        let omega: Vec<f64> = comps.iter().map(|c| c.omega).collect();
+        let vc_cbrt: Vec<f64> = comps
+            .iter()
+            .map(|c| (zc(c.omega) * R * c.tc / c.pc).cbrt())
+            .collect();
         Ok(LeeKesler {
-            tc: comps.iter().map(|c| c.tc).collect(),
-            omega: comps.iter().map(|c| c.omega).collect(),
-            vc_cbrt: comps
-                .iter()
-                .map(|c| (zc(c.omega) * R * c.tc / c.pc).cbrt())
-                .collect(),
-            kstar,
+            pairs: PairTerms::new(&tc, &omega, &vc_cbrt, &kstar),
             comps: comps.to_vec(),
         })
     }
@@ -128,7 +125,7 @@ impl LeeKesler {
 
     /// Pseudo-critical constants of composition x.
     pub fn pseudo_critical(&self, x: &[f64]) -> PseudoCritical {
-        pseudo_critical(&self.tc, &self.omega, &self.vc_cbrt, &self.kstar, x)
+        self.pairs.pseudo_critical(x)
     }
 
     /// The state at `t` (K), `p` (Pa), mole fractions `x`. `root` picks the volume root of each
