@@ -103,7 +103,18 @@ pub fn solve_branch_split(
     // Whether lo / hi are known stable points with p below / above the target.
     let mut lo_ok = branch == Branch::Vapour;
     let mut hi_ok = false;
-    let mut rho = start.clamp(lo + 1e-12 * f.rhoc, if hi.is_finite() { hi } else { start });
+    // The start, kept inside (lo, hi]; a start below the bracket (a very dilute gas) is
+    // raised to its floor, a start that is not a number goes to the fallback below.
+    let mut rho = if start.is_nan() {
+        start
+    } else {
+        let r = start.max(lo + 1e-12 * f.rhoc);
+        if hi.is_finite() {
+            r.min(hi)
+        } else {
+            r
+        }
+    };
     if !(rho > lo && rho.is_finite()) {
         rho = if branch == Branch::Vapour {
             0.5 * (lo + hi.min(f.rhoc))
