@@ -6,7 +6,7 @@
 //!
 //! - [`cli`]: the clap definitions of every command and option.
 //! - [`units`], [`feed`]: quantities with units and compositions, read once into SI.
-//! - [`models`]: model ids to models.
+//! - [`models`]: model ids to models; [`phase_screen`]: which states of a grid are flashed.
 //! - [`commands`]: one function per command, returning a report.
 //! - [`report`]: the report structs; [`render`]: one file per output format.
 
@@ -19,6 +19,7 @@ pub mod exit;
 pub mod feed;
 pub mod models;
 pub mod output_file;
+pub mod phase_screen;
 pub mod progress;
 pub mod render;
 pub mod report;

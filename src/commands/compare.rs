@@ -359,7 +359,7 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
     let total = states.points.len() * (dyn_models.len() + 1);
     let bar = crate::progress::bar(total, "comparing");
     let step = (dyn_models.len() + 1) as u64;
-    let mut results = engine::evaluate(
+    let (mut results, screened) = engine::evaluate(
         &dyn_models,
         &against,
         &namer,
@@ -511,6 +511,7 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
         composition: super::state::composition_rows(&feed),
         reference: reference_info,
         states_from: states.from.to_string(),
+        phase_check: crate::phase_screen::method_note(screened),
         grid: states.grid.as_ref().map(|(t, p)| GridAxes {
             temperatures_k: t.clone(),
             pressures_pa: p.clone(),

@@ -12,6 +12,7 @@ use crate::error::{from_eos, CliError};
 use crate::exit::Exit;
 use crate::feed::{self, Feed};
 use crate::models::{self, BuiltModel};
+use crate::phase_screen::{self, PhaseScreen};
 use crate::report::table::{
     ComponentSource, TableBasis, TableColumn, TableReport, TableRow, UnitNote,
 };
@@ -89,13 +90,18 @@ pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
                     .to_string(),
             )
         }
-        None => (
-            rows_from_states(&sel, &built, &feed, &t, &p, &bar),
-            "each state from (T, P) with the root of lowest Gibbs energy (a mixture is \
-             flashed first and a state that splits into two phases is flagged); every property \
-             from the model"
-                .to_string(),
-        ),
+        None => {
+            let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
+            let screen = PhaseScreen::new(&built, &feed.mole, &t, total, p_low);
+            (
+                rows_from_states(&sel, &built, &feed, &t, &p, &screen, &bar),
+                format!(
+                    "each state from (T, P) with the root of lowest Gibbs energy; {} (a state \
+                     that splits into two phases is flagged); every property from the model",
+                    phase_screen::method_note(screen.is_active())
+                ),
+            )
+        }
     };
     crate::progress::finish(bar);
     let failed = rows.iter().filter(|r| r.error.is_some()).count();
@@ -159,6 +165,7 @@ fn rows_from_states(
     feed: &Feed,
     t: &[f64],
     p: &[f64],
+    screen: &PhaseScreen,
     bar: &Option<indicatif::ProgressBar>,
 ) -> Vec<TableRow> {
     let states: Vec<(f64, f64)> = t
@@ -168,12 +175,16 @@ fn rows_from_states(
     states
         .par_iter()
         .map(|&(ti, pj)| {
-            if let Some(beta) = split_fraction(built, feed, ti, pj) {
+            let split = screen
+                .needs_test(ti, pj)
+                .then(|| split_fraction(built, feed, ti, pj))
+                .flatten();
+            if let Some(beta) = split {
                 crate::progress::inc(bar, 1);
                 return TableRow {
                     temperature_k: ti,
                     pressure_pa: pj,
-                    phase: sel.phase.then(|| "two-phase".to_string()),
+                    phase: sel.phase.then_some("two-phase"),
                     values: vec![None; sel.properties.len()],
                     error: Some(format!(
                         "model {}: the mixture splits into vapour ({beta:.4} mol/mol) and \
@@ -187,7 +198,7 @@ fn rows_from_states(
                 Ok(s) => TableRow {
                     temperature_k: ti,
                     pressure_pa: pj,
-                    phase: sel.phase.then(|| s.phase.to_string()),
+                    phase: sel.phase.then(|| s.phase.as_str()),
                     values: sel
                         .properties
                         .iter()

@@ -9,6 +9,7 @@ use super::data_file::RefValue;
 use super::region::{self, Region};
 use super::stats::density_dev_pct;
 use crate::models::BuiltModel;
+use crate::phase_screen::PhaseScreen;
 use eos::phase::Phase;
 use eos::state::RootChoice;
 use rayon::prelude::*;
@@ -79,12 +80,13 @@ pub enum Against<'a> {
 }
 
 /// The answer of `model` at (t, p).
-/// A mixture is flashed first (with models that have a Helmholtz energy): a feed that splits
-/// is answered as two-phase, with its bulk density.
-pub fn answer(model: &BuiltModel, t: f64, p: f64, x: &[f64]) -> Answer {
+/// A mixture is flashed first (with models that have a Helmholtz energy) where `screen`
+/// says the state needs the phase check: a feed that splits is answered as two-phase, with
+/// its bulk density.
+pub fn answer(model: &BuiltModel, t: f64, p: f64, x: &[f64], screen: &PhaseScreen) -> Answer {
     if let Some(m) = model
         .helmholtz()
-        .filter(|_| x.len() > 1 && model.id != "ideal")
+        .filter(|_| x.len() > 1 && model.id != "ideal" && screen.needs_test(t, p))
     {
         match eos::equilibrium::flash::tp(m, t, p, x) {
             Ok(eos::equilibrium::flash::FlashResult::TwoPhase(s)) => {
@@ -116,6 +118,14 @@ pub fn answer(model: &BuiltModel, t: f64, p: f64, x: &[f64]) -> Answer {
     }
 }
 
+/// The phase screens of one grid: one per compared model, the reference model's and the
+/// naming model's.
+struct Screens {
+    models: Vec<PhaseScreen>,
+    reference: PhaseScreen,
+    namer: PhaseScreen,
+}
+
 /// Evaluates one state.
 fn evaluate_one(
     models: &[&BuiltModel],
@@ -123,11 +133,16 @@ fn evaluate_one(
     namer: &BuiltModel,
     x: &[f64],
     pt: &PointInput,
+    screens: &Screens,
 ) -> PointResult {
-    let answers: Vec<Answer> = models.iter().map(|m| answer(m, pt.t, pt.p, x)).collect();
+    let answers: Vec<Answer> = models
+        .iter()
+        .zip(&screens.models)
+        .map(|(m, s)| answer(m, pt.t, pt.p, x, s))
+        .collect();
     let (ref_answer, ref_rho, ref_error) = match against {
         Against::Model(m) => {
-            let a = answer(m, pt.t, pt.p, x);
+            let a = answer(m, pt.t, pt.p, x, &screens.reference);
             let rho = a.rho();
             let err = match &a {
                 Answer::Failed(e) => Some(e.clone()),
@@ -144,12 +159,17 @@ fn evaluate_one(
         }
         Against::Nothing => (None, None, None),
     };
-    // The phase is named by the reference model, or by the naming model.
+    // The phase is named by the reference model, or by the naming model (whose answer is
+    // already there when it is one of the compared models).
+    let phase_of = |a: &Answer| match a {
+        Answer::Ok { phase, .. } => Some(*phase),
+        Answer::Failed(_) => None,
+    };
     let named = match &ref_answer {
         Some(Answer::Ok { phase, .. }) => Some(*phase),
-        _ => match answer(namer, pt.t, pt.p, x) {
-            Answer::Ok { phase, .. } => Some(phase),
-            Answer::Failed(_) => None,
+        _ => match models.iter().position(|m| m.id == namer.id) {
+            Some(k) => phase_of(&answers[k]),
+            None => phase_of(&answer(namer, pt.t, pt.p, x, &screens.namer)),
         },
     };
     let mut phases: Vec<Phase> = models
@@ -188,7 +208,8 @@ fn evaluate_one(
 
 /// Evaluates every state on all cores; `tick` is called once per finished state (for a
 /// progress bar) and must be cheap and thread-safe. The results are in the order of
-/// `points` and identical to a single-threaded evaluation.
+/// `points` and identical to a single-threaded evaluation. The flag is true when an
+/// envelope screen spared states of the phase check ([`PhaseScreen`]).
 pub fn evaluate<F>(
     models: &[&BuiltModel],
     against: &Against<'_>,
@@ -196,18 +217,31 @@ pub fn evaluate<F>(
     x: &[f64],
     points: &[PointInput],
     tick: F,
-) -> Vec<PointResult>
+) -> (Vec<PointResult>, bool)
 where
     F: Fn() + Sync,
 {
-    points
+    let ts: Vec<f64> = points.iter().map(|pt| pt.t).collect();
+    let p_low = points.iter().map(|pt| pt.p).fold(f64::INFINITY, f64::min);
+    let screen = |m: &BuiltModel| PhaseScreen::new(m, x, &ts, points.len(), p_low);
+    let screens = Screens {
+        models: models.iter().map(|m| screen(m)).collect(),
+        reference: match against {
+            Against::Model(m) => screen(m),
+            _ => PhaseScreen::default(),
+        },
+        namer: screen(namer),
+    };
+    let screened = screens.models.iter().any(PhaseScreen::is_active);
+    let results = points
         .par_iter()
         .map(|pt| {
-            let r = evaluate_one(models, against, namer, x, pt);
+            let r = evaluate_one(models, against, namer, x, pt, &screens);
             tick();
             r
         })
-        .collect()
+        .collect();
+    (results, screened)
 }
 
 /// Spread of the real-gas models' densities at one state, percent of their mean:

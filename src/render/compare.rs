@@ -64,6 +64,9 @@ pub fn text(r: &CompareReport) -> String {
         ));
     }
     out.push_str(")\n");
+    if r.composition.len() > 1 {
+        out.push_str(&format!("phase check: {}\n", r.phase_check));
+    }
     if let Some(c) = &r.reference.citation {
         out.push_str(&format!("reference source: {c}\n"));
     }

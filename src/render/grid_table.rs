@@ -54,7 +54,7 @@ fn display_rows(r: &TableReport) -> Vec<Vec<String>> {
                 sig(row.pressure_pa / PA_PER_BAR, SIG),
             ];
             if phase {
-                cells.push(row.phase.clone().unwrap_or_else(|| "-".to_string()));
+                cells.push(row.phase.unwrap_or("-").to_string());
             }
             for (c, v) in r.columns.iter().zip(&row.values) {
                 cells.push(v.map_or_else(|| "-".to_string(), |v| sig(v * display(c.key).1, SIG)));
@@ -203,11 +203,13 @@ pub fn markdown(r: &TableReport) -> String {
 
 /// CSV in SI units, the basis as `#` comment lines first.
 pub fn csv(r: &TableReport) -> Result<String, CliError> {
-    let mut out = String::new();
+    use std::fmt::Write as _;
+    // About 64 bytes a row; the basis lines go first into the same buffer.
+    let mut out = Vec::with_capacity(1024 + 64 * r.rows.len());
     for (k, v) in basis_lines(&r.basis) {
-        out.push_str(&format!("# {k}: {}\n", v.replace('\n', " ")));
+        out.extend_from_slice(format!("# {k}: {}\n", v.replace('\n', " ")).as_bytes());
     }
-    let mut w = csv::Writer::from_writer(Vec::new());
+    let mut w = csv::Writer::from_writer(out);
     let e = |e: csv::Error| CliError::Output(e.to_string());
     let phase = r.rows.iter().any(|row| row.phase.is_some());
     let mut header = vec!["temperature_k".to_string(), "pressure_pa".to_string()];
@@ -217,27 +219,34 @@ pub fn csv(r: &TableReport) -> Result<String, CliError> {
     header.extend(r.columns.iter().map(|c| c.key.to_string()));
     header.push("error".to_string());
     w.write_record(&header).map_err(e)?;
+    // One formatting buffer for every cell (a million-row table formats millions of
+    // numbers).
+    let mut cell = String::new();
+    let mut number = |w: &mut csv::Writer<Vec<u8>>, v: f64| {
+        cell.clear();
+        let _ = write!(cell, "{v:e}");
+        w.write_field(&cell)
+    };
     for row in &r.rows {
-        let mut cells = vec![
-            format!("{:e}", row.temperature_k),
-            format!("{:e}", row.pressure_pa),
-        ];
+        number(&mut w, row.temperature_k).map_err(e)?;
+        number(&mut w, row.pressure_pa).map_err(e)?;
         if phase {
-            cells.push(row.phase.clone().unwrap_or_default());
+            w.write_field(row.phase.unwrap_or_default()).map_err(e)?;
         }
-        cells.extend(
-            row.values
-                .iter()
-                .map(|v| v.map(|v| format!("{v:e}")).unwrap_or_default()),
-        );
-        cells.push(row.error.clone().unwrap_or_default());
-        w.write_record(&cells).map_err(e)?;
+        for v in &row.values {
+            match v {
+                Some(v) => number(&mut w, *v).map_err(e)?,
+                None => w.write_field("").map_err(e)?,
+            }
+        }
+        w.write_field(row.error.as_deref().unwrap_or_default())
+            .map_err(e)?;
+        w.write_record(None::<&[u8]>).map_err(e)?;
     }
     let bytes = w
         .into_inner()
         .map_err(|e| CliError::Output(e.to_string()))?;
-    out.push_str(&String::from_utf8(bytes).map_err(|e| CliError::Output(e.to_string()))?);
-    Ok(out)
+    String::from_utf8(bytes).map_err(|e| CliError::Output(e.to_string()))
 }
 
 /// An Excel workbook: sheet "table" (display units, numbers as numbers) and sheet "basis".
@@ -264,7 +273,7 @@ pub fn xlsx(r: &TableReport) -> Result<Vec<u8>, CliError> {
                 .map_err(x)?;
             let mut c = 2u16;
             if phase {
-                ws.write_string(rr, c, row.phase.as_deref().unwrap_or("-"))
+                ws.write_string(rr, c, row.phase.unwrap_or("-"))
                     .map_err(x)?;
                 c += 1;
             }

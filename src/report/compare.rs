@@ -20,6 +20,8 @@ pub struct CompareReport {
     pub reference: ReferenceInfo,
     /// Where the states come from: "grid", "states file" or "reference data".
     pub states_from: String,
+    /// How mixture states were phase-checked (every state flashed, or the envelope screen).
+    pub phase_check: &'static str,
     /// The grid axes, when the states are a grid (K and Pa).
     pub grid: Option<GridAxes>,
     /// Statistics per model (density deviation from the reference, percent).

@@ -95,7 +95,7 @@ pub struct TableRow {
     pub temperature_k: f64,
     pub pressure_pa: f64,
     /// Phase name (when asked for, and computed).
-    pub phase: Option<String>,
+    pub phase: Option<&'static str>,
     /// Values in the order of `columns`, SI (null where not defined or not computed).
     pub values: Vec<Option<f64>>,
     /// Why this state has no values.

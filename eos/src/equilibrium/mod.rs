@@ -16,7 +16,7 @@
 //! - [`bubble`], [`dew`]: bubble and dew points at T or P ([`saturation_point`] on the
 //!   equations of [`sat_system`]).
 //! - [`envelope`]: phase envelopes by continuation, with critical point, cricondenbar and
-//!   cricondentherm.
+//!   cricondentherm; [`screen`]: the envelope as a screen for grids of states.
 //! - [`wilson`]: corresponding-states starting values; [`dense`], [`brent`]: numerical parts.
 //!
 //! All results are plain structs; every failure is a typed [`crate::Error`].
@@ -35,6 +35,7 @@ pub mod rachford_rice;
 pub mod sat_system;
 pub mod saturation;
 pub mod saturation_point;
+pub mod screen;
 pub mod spinodal;
 pub mod stability;
 pub mod wilson;
@@ -46,4 +47,5 @@ pub use quality::TwoPhaseState;
 pub use sat_system::Side;
 pub use saturation::Saturation;
 pub use saturation_point::SaturationPoint;
+pub use screen::{EnvelopeScreen, TestRegion};
 pub use stability::Stability;
