@@ -77,3 +77,33 @@ fn lee_kesler_reproduces_a_textbook_worked_example() {
     assert!((z1 - 0.038).abs() < 1.5e-3, "Z1 = {z1}");
     assert!((z_at(0.200) - 0.873).abs() < 1.5e-3);
 }
+
+#[test]
+fn lee_kesler_reproduces_its_tables_at_the_lowest_temperature() {
+    // The row Tr = 0.30 of the Lee-Kesler tables (from memory of Smith, Van Ness & Abbott,
+    // 7th ed. (2005), Appendix E, Tables E.1 and E.2, which reproduce them): Z0 = 0.0029 at
+    // Pr = 0.010 and 0.2892 at Pr = 1.000; Z1 = -0.0008 and -0.0806. Compressed liquids
+    // there: Z is nearly proportional to Pr, which the two columns bear out. Printed to four
+    // decimals: allowed 1e-4 (half a unit of the last digit plus the rounding of a table
+    // computed with the paper's constants). At Pr = 0.01 the isotherms cross the pressure
+    // five times; the liquid is the fifth root (the third gives Z0 = 0.0108).
+    use eos::lee_kesler::{Branch, OMEGA_R, REFERENCE, SIMPLE};
+    for (pr, z0_table, z1_table) in [(0.01, 0.0029, -0.0008), (1.0, 0.2892, -0.0806)] {
+        for branch in [Branch::Liquid, Branch::Stable] {
+            let (s, _) = SIMPLE.solve(0.30, pr, branch).unwrap();
+            let (r, _) = REFERENCE.solve(0.30, pr, branch).unwrap();
+            let z1 = (r.z - s.z) / OMEGA_R;
+            assert!(
+                (s.z - z0_table).abs() < 1e-4,
+                "Pr {pr} {branch:?}: Z0 = {}",
+                s.z
+            );
+            assert!(
+                (z1 - z1_table).abs() < 1e-4,
+                "Pr {pr} {branch:?}: Z1 = {z1}"
+            );
+        }
+    }
+    let (_, roots) = SIMPLE.solve(0.30, 0.01, Branch::Liquid).unwrap();
+    assert_eq!(roots, 5);
+}

@@ -18,8 +18,8 @@
 
 use super::constants::FluidConstants;
 use super::isotherm::{Isotherm, Sample};
-use super::roots::roots;
 pub use super::roots::Roots;
+use super::roots::{monotonic_root, roots, MONOTONIC_TR};
 use crate::error::Result;
 
 /// One fluid's solution at (Tr, Pr).
@@ -54,7 +54,7 @@ impl FluidConstants {
         Isotherm::new(self, tr).z(d)
     }
 
-    /// Every reduced density with Pr(Tr, d) = pr (at most three, ascending; see
+    /// Every reduced density with Pr(Tr, d) = pr (at most five, ascending; see
     /// [`super::roots`] for how they are found).
     pub fn roots(&self, tr: f64, pr: f64) -> Result<Roots> {
         roots(&Isotherm::new(self, tr), pr)
@@ -69,6 +69,12 @@ impl FluidConstants {
     /// The fluid's state at (Tr, Pr) on the chosen branch, with the number of roots.
     pub fn solve(&self, tr: f64, pr: f64, branch: Branch) -> Result<(FluidPoint, usize)> {
         let iso = Isotherm::new(self, tr);
+        // Above the critical temperature the one root, without the list of every root.
+        if tr > MONOTONIC_TR {
+            if let Some((d, s)) = monotonic_root(&iso, pr)? {
+                return Ok((point(&iso, d, &s), 1));
+            }
+        }
         let found = roots(&iso, pr)?;
         let r = found.as_slice();
         let at = |i: usize| point(&iso, r[i], &found.sample(i).unwrap_or_default());

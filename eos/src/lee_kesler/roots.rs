@@ -3,8 +3,11 @@
 //!
 //! The roots are, by definition, those of a scan of f(d) = Pr(d) - Pr on the grid
 //! d_k = k D_STEP (D_STEP = 0.02, up to D_MAX = 25): a root is reported in every grid cell
-//! where f changes sign, ascending, at most three, each polished by a safeguarded Newton
-//! iteration inside its cell. The scan is not run point by point:
+//! where f changes sign, ascending, at most [`MAX_ROOTS`], each polished by a safeguarded
+//! Newton iteration inside its cell. Below about Tr = 0.4 an isotherm can cross a low
+//! pressure five times (the equation's loops between the vapour and the liquid): all five
+//! are kept, so that the liquid is the densest root (at Tr = 0.30 and Pr = 0.01 the third
+//! root gives Z = 0.0108, the fifth the tables' 0.0029). The scan is not run point by point:
 //!
 //! - Above the critical temperature (Tr > MONOTONIC_TR) the isotherm rises monotonically over
 //!   the whole range (tested in `fluid`), so there is at most one root; it is found by a
@@ -37,13 +40,16 @@ const SAFETY: f64 = 0.999;
 /// Widest interval over which the curvature is bounded in one step.
 const MAX_WINDOW: f64 = 2.0;
 
-/// Up to three reduced densities d = 1/Vr with Pr(Tr, d) = Pr, ascending.
+/// Most roots of one isotherm at one pressure.
+pub const MAX_ROOTS: usize = 5;
+
+/// Up to [`MAX_ROOTS`] reduced densities d = 1/Vr with Pr(Tr, d) = Pr, ascending.
 #[derive(Debug, Clone, Copy, Default)]
 pub struct Roots {
     pub len: usize,
-    pub d: [f64; 3],
+    pub d: [f64; MAX_ROOTS],
     /// The isotherm sampled at each root (the root finder's last evaluation there).
-    at: [Sample; 3],
+    at: [Sample; MAX_ROOTS],
 }
 
 impl Roots {
@@ -58,7 +64,7 @@ impl Roots {
     }
 
     fn push(&mut self, (d, s): (f64, Sample)) {
-        if self.len < 3 {
+        if self.len < MAX_ROOTS {
             self.d[self.len] = d;
             self.at[self.len] = s;
             self.len += 1;
@@ -85,8 +91,10 @@ pub fn roots(iso: &Isotherm, pr: f64) -> Result<Roots> {
     Ok(out)
 }
 
-/// The one root of a monotonic isotherm, or `None` when Pr(D_MAX) < pr.
-fn monotonic_root(iso: &Isotherm, pr: f64) -> Result<Option<(f64, Sample)>> {
+/// The one root of a monotonic isotherm (Tr > [`MONOTONIC_TR`]) with the isotherm sampled
+/// there, or `None` when Pr(D_MAX) < pr.
+#[inline]
+pub fn monotonic_root(iso: &Isotherm, pr: f64) -> Result<Option<(f64, Sample)>> {
     let (mut lo, mut hi) = (0.0, D_MAX);
     let mut hi_checked = false;
     // Z = 1 + B d + C2 d^2 + ... with C2 = C + k beta (the exponential term's d^2 part)
@@ -179,7 +187,7 @@ fn scan(iso: &Isotherm, pr: f64, out: &mut Roots) -> Result<()> {
     // Each pass advances k by at least one grid cell, and k * D_STEP <= D_MAX.
     let cap = (D_MAX / D_STEP) as usize + 2;
     for _ in 0..cap {
-        if out.len >= 3 {
+        if out.len >= MAX_ROOTS {
             break;
         }
         let (skip, next) = sign_keeping_cells(iso, lo, f_lo, g_lo, window);

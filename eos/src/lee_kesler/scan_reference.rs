@@ -1,9 +1,10 @@
-//! Test-only: the point-by-point density scan that [`super::roots`] replaces, kept verbatim
-//! as the reference its results must reproduce, and the comparison on a dense (Tr, Pr) grid.
+//! Test-only: the point-by-point density scan that [`super::roots`] replaces, kept as the
+//! reference its results must reproduce, and the comparison on a dense (Tr, Pr) grid.
 //!
 //! The reference evaluates f(d) = Pr(Tr, d) - Pr at every grid point d_k = 0.02 k up to
-//! d = 25, polishes a root in each cell where f changes sign (at most three) and, above
-//! Tr = 1.001, brackets the single root by doubling from the ideal-gas density. The branch
+//! d = 25, polishes a root in each cell where f changes sign (at most five, as the root
+//! finder keeps) and, above Tr = 1.001, brackets the single root by doubling from the
+//! ideal-gas density. The branch
 //! rule is applied to its roots exactly as before: vapour = first root, liquid = last root,
 //! stable = first root of lowest ln(f/P).
 
@@ -78,7 +79,7 @@ fn polish(
     })
 }
 
-/// The previous root finder: every root (at most three), ascending.
+/// The previous root finder: every root (at most five), ascending.
 pub fn scan_roots(fl: &FluidConstants, tr: f64, pr: f64) -> Result<Vec<f64>> {
     let mut out = Vec::new();
     let f = |d: f64| pr_of(fl, tr, d).0 - pr;
@@ -100,7 +101,7 @@ pub fn scan_roots(fl: &FluidConstants, tr: f64, pr: f64) -> Result<Vec<f64>> {
     let mut lo = 0.0;
     let mut f_lo = -pr;
     let mut k = 1;
-    while out.len() < 3 {
+    while out.len() < super::roots::MAX_ROOTS {
         let hi = k as f64 * D_STEP;
         if hi > D_MAX {
             break;
