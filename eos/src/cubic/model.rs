@@ -200,33 +200,25 @@ impl Cubic {
             s_tt: 0.0,
         }; MAX_COMPONENTS];
         self.sqrt_alphas(t, &mut sa[..n]);
-        // ra_i = sum_j (1-k_ij) x_j s_j and its T derivatives, summed column by column (the
-        // matrix is symmetric) so that the inner loop runs over independent rows.
-        let (mut ra, mut ra_t, mut ra_tt) = (
-            [0.0; MAX_COMPONENTS],
-            [0.0; MAX_COMPONENTS],
-            [0.0; MAX_COMPONENTS],
-        );
-        for j in 0..n {
-            let col = &self.one_minus_k[j * n..(j + 1) * n];
-            let (c, c_t, c_tt) = (x[j] * sa[j].s, x[j] * sa[j].s_t, x[j] * sa[j].s_tt);
-            for i in 0..n {
-                ra[i] += col[i] * c;
-                ra_t[i] += col[i] * c_t;
-                ra_tt[i] += col[i] * c_tt;
-            }
-        }
         let (mut a, mut a_t, mut a_tt, mut b) = (0.0, 0.0, 0.0, 0.0);
         for i in 0..n {
+            let row = &self.one_minus_k[i * n..(i + 1) * n];
+            let (mut ra, mut ra_t, mut ra_tt) = (0.0, 0.0, 0.0);
+            for j in 0..n {
+                let w = x[j] * row[j];
+                ra += w * sa[j].s;
+                ra_t += w * sa[j].s_t;
+                ra_tt += w * sa[j].s_tt;
+            }
             // sum_j x_j a_ij = s_i sum_j x_j (1-k_ij) s_j and its T derivatives.
             let si = sa[i];
-            let ai = si.s * ra[i];
+            let ai = si.s * ra;
             if let Some(out) = sum_a.as_deref_mut() {
                 out[i] = ai;
             }
             a += x[i] * ai;
-            a_t += x[i] * (si.s_t * ra[i] + si.s * ra_t[i]);
-            a_tt += x[i] * (si.s_tt * ra[i] + 2.0 * si.s_t * ra_t[i] + si.s * ra_tt[i]);
+            a_t += x[i] * (si.s_t * ra + si.s * ra_t);
+            a_tt += x[i] * (si.s_tt * ra + 2.0 * si.s_t * ra_t + si.s * ra_tt);
             b += x[i] * self.b[i];
         }
         MixParams { a, a_t, a_tt, b }
@@ -235,8 +227,8 @@ impl Cubic {
     /// The density integral D(rho) = int_0^rho dr / ((1 + d1 b r)(1 + d2 b r)) with
     /// rho D' and rho^2 D''.
     /// a and b of the mixture at T without their temperature derivatives (for the density
-    /// roots and ln phi, which need none): the same operations in the same order as
-    /// [`Cubic::mix`], so the values are identical, at a third of the inner-loop work.
+    /// roots and ln phi, which need none): the values of [`Cubic::mix`] to round-off, at a
+    /// third of the inner-loop work.
     fn mix_ab(&self, t: f64, x: &[f64], sum_a: Option<&mut [f64]>) -> (f64, f64) {
         let n = self.comps.len();
         let mut s = [0.0; MAX_COMPONENTS];
@@ -258,24 +250,36 @@ impl Cubic {
     }
 
     /// [`Cubic::mix_ab`] with sqrt(a_i(T)) given in `s`.
-    fn mix_ab_from(&self, s: &[f64], x: &[f64], mut sum_a: Option<&mut [f64]>) -> (f64, f64) {
+    fn mix_ab_from(&self, s: &[f64], x: &[f64], sum_a: Option<&mut [f64]>) -> (f64, f64) {
         let n = self.comps.len();
-        let mut ra = [0.0; MAX_COMPONENTS];
+        let b = x.iter().zip(&self.b).map(|(x, b)| x * b).sum();
+        let Some(out) = sum_a else {
+            let mut a = 0.0;
+            for i in 0..n {
+                let row = &self.one_minus_k[i * n..(i + 1) * n];
+                let mut ra = 0.0;
+                for j in 0..n {
+                    ra += x[j] * row[j] * s[j];
+                }
+                a += x[i] * s[i] * ra;
+            }
+            return (a, b);
+        };
+        // sum_j x_j a_ij = s_i sum_j (1-k_ij) x_j s_j, accumulated column by column into `out`
+        // (the matrix is symmetric), so that the inner loop runs over independent rows.
+        let out = &mut out[..n];
+        out.fill(0.0);
         for j in 0..n {
             let col = &self.one_minus_k[j * n..(j + 1) * n];
             let c = x[j] * s[j];
-            for (r, k) in ra[..n].iter_mut().zip(col) {
+            for (r, k) in out.iter_mut().zip(col) {
                 *r += k * c;
             }
         }
-        let (mut a, mut b) = (0.0, 0.0);
+        let mut a = 0.0;
         for i in 0..n {
-            let ai = s[i] * ra[i];
-            if let Some(out) = sum_a.as_deref_mut() {
-                out[i] = ai;
-            }
-            a += x[i] * ai;
-            b += x[i] * self.b[i];
+            out[i] *= s[i];
+            a += x[i] * out[i];
         }
         (a, b)
     }
