@@ -11,16 +11,17 @@ use std::time::{Duration, Instant};
 fn ctrl_c_leaves_no_file_behind() {
     let dir = tempfile::tempdir().unwrap();
     let out = dir.path().join("basis.csv");
-    // A long design table: a mixture is flashed at every one of 250,000 states.
+    // A long design table: 4,000,000 states of a mixture (the largest grid accepted; some
+    // ten seconds of work on two cores, so that it is still running when interrupted).
     let mut child = Command::new(env!("CARGO_BIN_EXE_zfactor"))
         .args([
             "table",
             "--mix",
             "methane=0.8,ethane=0.1,propane=0.05,n-butane=0.05",
             "--temperatures",
-            "200..400 K n 500",
+            "200..400 K n 2000",
             "--pressures",
-            "1..200 bar n 500",
+            "1..200 bar n 2000",
             "--model",
             "pr",
             "--properties",
