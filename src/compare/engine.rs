@@ -230,7 +230,12 @@ where
             Against::Model(m) => screen(m),
             _ => PhaseScreen::default(),
         },
-        namer: screen(namer),
+        // The naming model is asked only where it is not among the compared ones.
+        namer: if models.iter().any(|m| m.id == namer.id) {
+            PhaseScreen::default()
+        } else {
+            screen(namer)
+        },
     };
     let screened = screens.models.iter().any(PhaseScreen::is_active);
     let results = points

@@ -318,15 +318,33 @@ impl Cubic {
 
     /// ln phi at (T, rho) for mixture parameters a, b and sum_j x_j a_ij (`sum_a`).
     fn ln_phi_from(&self, a: f64, b: f64, sum_a: &[f64], t: f64, rho: f64, out: &mut [f64]) {
-        let rt = R * t;
         let eta = b * rho;
         let (d, rd1, _) = self.d_integral(b, rho);
-        let f = a / rt;
+        let f = a / (R * t);
         let z = 1.0 + eta / (1.0 - eta) - f * rd1;
-        let ln_z_b = z.ln() + (1.0 - eta).ln();
+        self.ln_phi_terms(a, b, sum_a, f * d, z, (1.0 - eta).ln() + z.ln(), out);
+    }
+
+    /// ln phi_i = (b_i/b)(Z - 1) - ln(1 - b rho) - ln Z - (a/RT) D (2 sum_j x_j a_ij / a -
+    /// b_i/b), from (a/RT) D (`fd`), Z and `ln_rest` = ln(1 - b rho) + ln Z (with the model's
+    /// ln Z, or that of the given pressure at a density root).
+    #[allow(clippy::too_many_arguments)]
+    #[inline]
+    fn ln_phi_terms(
+        &self,
+        a: f64,
+        b: f64,
+        sum_a: &[f64],
+        fd: f64,
+        z: f64,
+        ln_rest: f64,
+        out: &mut [f64],
+    ) {
+        let (inv_b, two_over_a) = (1.0 / b, 2.0 / a);
+        let base = -ln_rest;
         for (i, o) in out.iter_mut().enumerate().take(self.comps.len()) {
-            let bi_b = self.b[i] / b;
-            *o = bi_b * (z - 1.0) - ln_z_b - f * d * (2.0 * sum_a[i] / a - bi_b);
+            let bi_b = self.b[i] * inv_b;
+            *o = bi_b * (z - 1.0) + base - fd * (two_over_a * sum_a[i] - bi_b);
         }
     }
 
@@ -487,14 +505,7 @@ impl Model for Cubic {
                 (alpha, z_model, (d, ln_one_eta))
             },
             |_, &(d, ln_one_eta), z_model, ln_z, out| {
-                // ln phi_i = (b_i/b)(Z - 1) - ln(1 - b rho) - ln Z - (a/RT) D (2 sum_j x_j
-                // a_ij / a - b_i/b), the ln phi of `ln_phi_from` with ln Z from the pressure.
-                let (inv_b, two_over_a, fd) = (1.0 / b, 2.0 / a, f * d);
-                let base = -ln_one_eta - ln_z;
-                for (i, o) in out.iter_mut().enumerate().take(n) {
-                    let bi_b = self.b[i] * inv_b;
-                    *o = bi_b * (z_model - 1.0) + base - fd * (two_over_a * sum_a[i] - bi_b);
-                }
+                self.ln_phi_terms(a, b, &sum_a[..n], f * d, z_model, ln_one_eta + ln_z, out);
             },
             out,
         )

@@ -131,18 +131,9 @@ pub fn monotonic_root(iso: &Isotherm, pr: f64) -> Result<Option<(f64, Sample)>> 
             }
             return Ok(Some((d, s)));
         }
-        let newton = d - r / dp;
-        d = if newton > lo && newton < hi {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
+        d = safeguarded_step(d, r, dp, lo, hi);
     }
-    Err(Error::NotConverged {
-        solver: "Lee-Kesler reduced volume",
-        iterations: MAX_ITER,
-        residual: last,
-    })
+    Err(not_converged(last))
 }
 
 /// Grid cells from `a` (where f = `f`, f' = `g`) over which f provably keeps its sign, and
@@ -243,16 +234,27 @@ pub fn polish(
         } else {
             hi = d;
         }
-        let newton = d - r / dp;
-        d = if newton > lo && newton < hi {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
+        d = safeguarded_step(d, r, dp, lo, hi);
     }
-    Err(Error::NotConverged {
+    Err(not_converged(last))
+}
+
+/// The Newton step d - r/r' where it stays inside the bracket (lo, hi), its midpoint
+/// otherwise.
+fn safeguarded_step(d: f64, r: f64, dp: f64, lo: f64, hi: f64) -> f64 {
+    let newton = d - r / dp;
+    if newton > lo && newton < hi {
+        newton
+    } else {
+        0.5 * (lo + hi)
+    }
+}
+
+/// The error of a Newton iteration that used up its iterations, with its last residual.
+fn not_converged(residual: f64) -> Error {
+    Error::NotConverged {
         solver: "Lee-Kesler reduced volume",
         iterations: MAX_ITER,
-        residual: last,
-    })
+        residual,
+    }
 }

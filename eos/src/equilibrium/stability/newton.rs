@@ -102,11 +102,7 @@ pub(super) fn newton<const NN: usize>(
             step *= 0.5;
         }
         if tm < -TM_TOLERANCE {
-            return TrialResult {
-                tm: Some(tm),
-                rho,
-                iterations: its,
-            };
+            return TrialResult::at(tm, rho, its);
         }
         let trivial = plane.is_trivial(w, &lnw[..n], w.iter().sum::<f64>().ln());
         if !accepted || trivial {

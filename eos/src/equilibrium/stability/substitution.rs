@@ -75,11 +75,7 @@ pub(super) fn run_trial(
         its += 1;
         let (tm, rho) = at;
         if tm < -TM_TOLERANCE {
-            return TrialResult {
-                tm: Some(tm),
-                rho,
-                iterations: its,
-            };
+            return TrialResult::at(tm, rho, its);
         }
         // Successive substitution ln W <- d - ln phi(W); its increment goes into the ring
         // `g` (slot its % 3).
@@ -96,11 +92,7 @@ pub(super) fn run_trial(
         plane.set_w(&lnw[..n], w);
         if plane.ends_here(w, &lnw[..n], paths) {
             // The trivial solution, or the path of an earlier trial (whose outcome stands).
-            return TrialResult {
-                tm: None,
-                rho,
-                iterations: its,
-            };
+            return TrialResult::none(rho, its);
         }
         // Where the steps shrink steadily one way, their sum to the limit is the last one
         // times lambda / (1 - lambda); a limit at the trivial solution ends the trial.
@@ -116,11 +108,7 @@ pub(super) fn run_trial(
             plane.set_w(&lx[..n], &mut wx[..n]);
             let ln_s = wx[..n].iter().sum::<f64>().ln();
             if plane.is_trivial(&wx[..n], &lx[..n], ln_s) {
-                return TrialResult {
-                    tm: None,
-                    rho,
-                    iterations: its,
-                };
+                return TrialResult::none(rho, its);
             }
         }
         let Some(next) = plane.tm_at(w, &lnw[..n], &mut lnphi[..n]) else {
