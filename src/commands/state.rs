@@ -331,15 +331,19 @@ fn compute(
     Ok(result)
 }
 
+/// One row per component; a model that gives no component fugacities (an empty `ln_phi`)
+/// gets empty rows rather than fewer rows.
 fn fugacities(feed: &Feed, ln_phi: &[f64], x: &[f64], p: f64) -> Vec<FugacityRow> {
     feed.records
         .iter()
-        .zip(ln_phi)
-        .zip(x)
-        .map(|((r, lp), xi)| FugacityRow {
-            component: r.id.clone(),
-            phi: lp.exp(),
-            fugacity_pa: xi * lp.exp() * p,
+        .enumerate()
+        .map(|(i, r)| {
+            let phi = ln_phi.get(i).map(|lp| lp.exp());
+            FugacityRow {
+                component: r.id.clone(),
+                phi,
+                fugacity_pa: phi.map(|f| x[i] * f * p),
+            }
         })
         .collect()
 }
@@ -502,7 +506,7 @@ fn check_finite(r: &ModelResult) -> Result<(), CliError> {
         r.residual_gibbs_j_mol,
         r.vapor_fraction,
     ];
-    let fug = r.fugacity.iter().map(|f| f.phi);
+    let fug = r.fugacity.iter().filter_map(|f| f.phi);
     if values
         .into_iter()
         .chain(optional.into_iter().flatten())

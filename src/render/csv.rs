@@ -74,7 +74,7 @@ pub fn state(r: &StateReport) -> Result<String, CliError> {
             opt(m.residual_gibbs_j_mol),
             opt(m.vapor_fraction),
         ];
-        row.extend(m.fugacity.iter().map(|f| full(f.phi)));
+        row.extend(m.fugacity.iter().map(|f| opt(f.phi)));
         w.write_record(&row).map_err(err)?;
     }
     finish(w)

@@ -153,7 +153,9 @@ pub fn state(r: &StateReport) -> String {
         } else {
             format!("fugacity coeff. {}", c.id)
         };
-        row(&mut t, &name, "-", &|i| sig(res[i].fugacity[k].phi, 6));
+        row(&mut t, &name, "-", &|i| {
+            opt(res[i].fugacity.get(k).and_then(|f| f.phi), 6)
+        });
     }
     right_align(&mut t, 2);
     out.push_str(&format!("{t}\n"));

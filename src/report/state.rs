@@ -114,7 +114,7 @@ pub struct ModelResult {
     pub vapor_fraction: Option<f64>,
     /// The phases of a two-phase state (empty for one phase).
     pub phases: Vec<PhaseResult>,
-    /// Fugacity coefficient and fugacity of each component.
+    /// Fugacity coefficient and fugacity of each component (one row per component, always).
     pub fugacity: Vec<FugacityRow>,
     /// Basis notes (k_ij used or missing).
     pub notes: Vec<String>,
@@ -141,10 +141,11 @@ pub struct ComponentFraction {
     pub mole_fraction: f64,
 }
 
-/// Fugacity of one component in one result.
+/// Fugacity of one component in one result; null for a model that gives no component
+/// fugacities in a mixture (the gas-gravity correlations answer for the gas as a whole).
 #[derive(Debug, Clone, Serialize)]
 pub struct FugacityRow {
     pub component: String,
-    pub phi: f64,
-    pub fugacity_pa: f64,
+    pub phi: Option<f64>,
+    pub fugacity_pa: Option<f64>,
 }
