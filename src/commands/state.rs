@@ -213,6 +213,7 @@ fn compute(
     root: RootChoice,
 ) -> Result<ModelResult, CliError> {
     let x = &feed.mole;
+    let asked = given;
     let ctx = format!("model {}", built.id);
     let helmholtz = built
         .helmholtz()
@@ -220,7 +221,7 @@ fn compute(
     if let (Given::Tp(t, p), Some(m), RootChoice::LowestGibbs) = (given, helmholtz, root) {
         let flash = eos::equilibrium::flash::tp(m, t, p, x).map_err(|e| from_eos(&ctx, e))?;
         if let eos::equilibrium::flash::FlashResult::TwoPhase(split) = flash {
-            return two_phase(built, m, feed, &split);
+            return two_phase(built, m, feed, &split, asked);
         }
     }
     let mut named = None;
@@ -239,7 +240,7 @@ fn compute(
         (Some(spec), Some(pf), Some(m)) => {
             let ps = eos::pure::state(pf.as_ref(), spec).map_err(|e| from_pure(&ctx, e))?;
             if let (Some(q), Some(sat)) = (ps.quality, ps.saturation) {
-                return pure_two_phase(built, m, feed, &sat, q, ps.phase);
+                return pure_two_phase(built, m, feed, &sat, q, ps.phase, asked);
             }
             named = Some(ps.phase);
             Given::TRho(ps.t, ps.rho)
@@ -265,11 +266,7 @@ fn compute(
         state.phase = phase;
     }
     let pr = &state.props;
-    let (dev, of) = match given {
-        Given::TRho(..) if named.is_none() => (1.0 / pr.z - 1.0, "pressure"),
-        Given::PRho(..) => (pr.z - 1.0, "temperature"),
-        _ => (pr.z - 1.0, "density"),
-    };
+    let (dev, of) = ideal_gas_error(asked, pr.z);
     let mut notes = built.notes.clone();
     if pr.cp.is_none() {
         notes.push(
@@ -355,6 +352,7 @@ fn two_phase(
     m: &dyn eos::Model,
     feed: &Feed,
     split: &eos::equilibrium::flash::TwoPhase,
+    asked: Given,
 ) -> Result<ModelResult, CliError> {
     let (t, p, beta) = (split.t, split.p, split.vapor_fraction);
     let vap = eos::properties::evaluate(m, t, split.rho_v, &split.y);
@@ -400,8 +398,8 @@ fn two_phase(
         mass_density_kg_m3: rho * mm,
         molar_volume_m3_mol: v_molar,
         specific_volume_m3_kg: v_molar / mm,
-        ideal_gas_deviation_pct: 100.0 * (z - 1.0),
-        ideal_gas_deviation_of: "density",
+        ideal_gas_deviation_pct: 100.0 * ideal_gas_error(asked, z).0,
+        ideal_gas_deviation_of: ideal_gas_error(asked, z).1,
         enthalpy_j_mol: bulk(vap.h, liq.h),
         entropy_j_mol_k: bulk(vap.s, liq.s),
         internal_energy_j_mol: bulk(vap.u, liq.u),
@@ -425,6 +423,18 @@ fn two_phase(
     };
     check_finite(&result)?;
     Ok(result)
+}
+
+/// The ideal gas's error, in percent of the model's answer, in the quantity the inputs leave
+/// free: (ideal - model) / model. With T and density given that is the pressure
+/// (P_ideal / P = 1/Z); with P and density the temperature (T_ideal / T = Z); otherwise the
+/// density at the state's T and P (rho_ideal / rho = Z).
+fn ideal_gas_error(given: Given, z: f64) -> (f64, &'static str) {
+    match given {
+        Given::TRho(..) => (1.0 / z - 1.0, "pressure"),
+        Given::PRho(..) => (z - 1.0, "temperature"),
+        _ => (z - 1.0, "density"),
+    }
 }
 
 /// The pairs that reach the single-phase evaluation are (T, P), (T, rho) and (P, rho); the
@@ -460,6 +470,7 @@ fn pure_two_phase(
     sat: &eos::pure::SatState,
     quality: f64,
     phase: eos::phase::Phase,
+    asked: Given,
 ) -> Result<ModelResult, CliError> {
     let split = eos::equilibrium::flash::TwoPhase {
         t: sat.t,
@@ -472,7 +483,7 @@ fn pure_two_phase(
         iterations: 0,
         fugacity_residual: 0.0,
     };
-    let mut r = two_phase(built, m, feed, &split)?;
+    let mut r = two_phase(built, m, feed, &split, asked)?;
     r.phase = phase.to_string();
     if let Some(n) = r.notes.last_mut() {
         *n = format!(
