@@ -24,6 +24,17 @@ impl CliError {
     }
 }
 
+impl CliError {
+    /// The same kind of error with another message.
+    pub fn with_message(&self, message: String) -> CliError {
+        match self {
+            CliError::BadInput(_) => CliError::BadInput(message),
+            CliError::Computation(_) => CliError::Computation(message),
+            CliError::Output(_) => CliError::Output(message),
+        }
+    }
+}
+
 impl fmt::Display for CliError {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
         match self {

@@ -7,6 +7,7 @@
 //! why (beyond the cricondenbar or the cricondentherm) as bad input.
 
 use crate::cli::FlashArgs;
+use crate::commands::each_model::{self, Answers};
 use crate::error::{from_eos, CliError};
 use crate::exit::Exit;
 use crate::feed::{self, Feed};
@@ -208,8 +209,10 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
             )));
         }
     }
-    let mut built = Vec::new();
-    for id in &ids {
+    let Answers {
+        mut results,
+        mut warnings,
+    } = each_model::run(&ids, |id| {
         let b = models::build(id, &feed)?;
         if b.helmholtz().is_none() {
             return Err(CliError::BadInput(format!(
@@ -219,15 +222,10 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
                 b.name
             )));
         }
-        built.push(b);
-    }
-    let mut results = Vec::new();
-    for b in &built {
-        let r = compute(b, &feed, spec)?;
+        let r = compute(&b, &feed, spec)?;
         check_triple_points(&feed, r.temperature_k, "the state found lies at")?;
-        results.push(r);
-    }
-    let mut warnings = Vec::new();
+        Ok(r)
+    })?;
     for r in &mut results {
         let (notes, more) = cp_extrapolation(&feed, r.temperature_k);
         r.notes.extend(notes);

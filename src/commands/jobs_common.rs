@@ -177,8 +177,8 @@ pub fn fluid_report(feed: &Feed) -> FluidReport {
     }
 }
 
-/// Runs `job` for each model of `spec`. With "all", a model that fails is left out with a
-/// warning; with a named list, the first failure is the answer.
+/// Runs `job` for each model of `spec`; of several, a model that fails is left out with a
+/// warning ([`crate::commands::each_model`]).
 pub fn per_model<T>(
     spec: &str,
     feed: &Feed,
@@ -191,29 +191,13 @@ pub fn per_model<T>(
         .filter(|id| !all || id != "if97")
         .collect();
     let ideal = IdealGas::new(&feed.components());
-    let mut out = Vec::new();
-    let mut warnings = Vec::new();
-    let mut last_err = None;
-    for id in &ids {
-        let pair = Pair {
+    let answers = crate::commands::each_model::run(&ids, |id| {
+        job(&Pair {
             built: models::build(id, feed)?,
             ideal: ideal.clone(),
-        };
-        match job(&pair) {
-            Ok(r) => out.push(r),
-            Err(e) if all => {
-                warnings.push(format!("{id} left out: {e}"));
-                last_err = Some(e);
-            }
-            Err(e) => return Err(e),
-        }
-    }
-    if out.is_empty() {
-        return Err(last_err.unwrap_or_else(|| {
-            CliError::Computation("no model could compute this job".to_string())
-        }));
-    }
-    Ok((out, warnings))
+        })
+    })?;
+    Ok((answers.results, answers.warnings))
 }
 
 /// Maps a library error with the model's id as context.

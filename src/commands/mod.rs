@@ -6,6 +6,7 @@ pub mod audit_row;
 pub mod compare;
 pub mod compress;
 pub mod demo;
+pub mod each_model;
 pub mod envelope;
 pub mod flash;
 pub mod flow;

@@ -3,6 +3,7 @@
 //! Helmholtz formulation), through `eos::pure`.
 
 use crate::cli::{FluidArgs, Format};
+use crate::commands::each_model::{self, Answers};
 use crate::error::CliError;
 use crate::feed::{self, Feed};
 use crate::report::saturation::{
@@ -167,12 +168,13 @@ pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
         ));
     }
     let (ids, all) = resolve(&args.model)?;
-    let mut results = Vec::new();
-    for id in &ids {
+    // "all" stands for the models that have this fluid.
+    let ids: Vec<String> = ids
+        .into_iter()
+        .filter(|id| !all || build(id, &feed).ok().flatten().is_some())
+        .collect();
+    let Answers { results, warnings } = each_model::run(&ids, |id| {
         let Some(built) = build(id, &feed)? else {
-            if all {
-                continue;
-            }
             return Err(CliError::BadInput(format!(
                 "{} has no {} formulation here; models for it: {}",
                 feed.label(),
@@ -215,7 +217,7 @@ pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
         }
         // Molar mass of the model where it carries its own (the formulations).
         let mm = f.molar_mass();
-        results.push(SaturationResult {
+        Ok(SaturationResult {
             model: built.id,
             model_name: built.name,
             citation: built.citation,
@@ -226,8 +228,8 @@ pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
             latent_heat_j_mol: sat.latent_heat(),
             latent_heat_j_kg: sat.latent_heat() / mm,
             reference_state: built.reference_state,
-        });
-    }
+        })
+    })?;
     Ok(SaturationReport {
         tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
         fluid: feed.label(),
@@ -241,7 +243,7 @@ pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
             ambient_pressure_pa: ambient,
         },
         results,
-        warnings: Vec::new(),
+        warnings,
         caution: crate::CAUTION,
     })
 }

@@ -1,6 +1,7 @@
 //! `zfactor state`: one state of a fluid or mixture, for each requested model.
 
 use crate::cli::{RootArg, StateArgs};
+use crate::commands::each_model::{self, Answers};
 use crate::error::{from_eos, CliError};
 use crate::feed::{self, Feed};
 use crate::models::{self, BuiltModel, ModelState};
@@ -110,28 +111,17 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
         ));
     }
     let ids = models::resolve_ids(&args.model, &feed)?;
-    let all = args.model.trim().eq_ignore_ascii_case("all");
     let root = match args.root {
         RootArg::Stable => RootChoice::LowestGibbs,
         RootArg::Liquid => RootChoice::Liquid,
         RootArg::Vapor => RootChoice::Vapor,
     };
-    let mut results = Vec::new();
-    let mut warnings = Vec::new();
-    for id in &ids {
-        let built = models::build(id, &feed)?;
-        match compute(&built, &feed, given, root) {
-            Ok(r) => results.push(r),
-            Err(e) if all => warnings.push(format!("{id} left out: {e}")),
-            Err(e) => return Err(e),
-        }
-    }
-    if results.is_empty() {
-        return Err(CliError::Computation(format!(
-            "no model could compute this state: {}",
-            warnings.join("; ")
-        )));
-    }
+    let Answers {
+        mut results,
+        mut warnings,
+    } = each_model::run(&ids, |id| {
+        compute(&models::build(id, &feed)?, &feed, given, root)
+    })?;
     let split: Vec<&str> = results
         .iter()
         .filter(|r| r.vapor_fraction.is_some())
