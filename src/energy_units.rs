@@ -100,7 +100,17 @@ fn finish(
 /// Reads a specific enthalpy (any sign: it is relative to the reference state).
 pub fn enthalpy(input: &str) -> Result<Specific, EnergyUnitError> {
     let (v, unit) = split(input, "enthalpy", ENTHALPY_UNITS)?;
+    // m is milli, M mega: "mJ/kg" is a millijoule per kilogram, read as such and noted.
+    let milli = |s: Specific| {
+        crate::input_notes::push(format!(
+            "\"{}\" is read with m as milli (a millijoule is 1e-3 J); for megajoules write MJ",
+            input.trim()
+        ));
+        s
+    };
     let s = match canonical(&unit).as_str() {
+        "mj/kg" if unit.starts_with('m') => milli(Specific::Mass(v * 1e-3)),
+        "mj/kmol" if unit.starts_with('m') => milli(Specific::Molar(v * 1e-6)),
         "j/mol" => Specific::Molar(v),
         "kj/mol" => Specific::Molar(v * 1e3),
         "kj/kmol" => Specific::Molar(v),
@@ -165,6 +175,16 @@ mod tests {
             Specific::Mass(v) => v,
             Specific::Molar(_) => f64::NAN,
         }
+    }
+
+    #[test]
+    fn mega_and_milli_joules_are_told_apart() {
+        // SI brochure (BIPM, 9th ed., 2019, table 7): M is 1e6, m is 1e-3. "mJ/kg" was once
+        // read as megajoules per kilogram.
+        assert_relative_eq!(mass(enthalpy("2.5 MJ/kg").unwrap()), 2.5e6);
+        assert_relative_eq!(mass(enthalpy("2.5 mJ/kg").unwrap()), 2.5e-3);
+        assert_relative_eq!(molar(enthalpy("3 MJ/kmol").unwrap()), 3e3);
+        assert_relative_eq!(molar(enthalpy("3 mJ/kmol").unwrap()), 3e-6);
     }
 
     #[test]

@@ -17,6 +17,7 @@ pub mod energy_units;
 pub mod error;
 pub mod exit;
 pub mod feed;
+pub mod input_notes;
 pub mod models;
 pub mod output_file;
 pub mod phase_screen;
@@ -55,5 +56,13 @@ where
         }
     };
     output_file::clean_up_on_interrupt();
-    commands::dispatch(&cli)
+    let code = commands::dispatch(&cli)?;
+    let notes = input_notes::take();
+    for n in &notes {
+        eprintln!("warning: {n}");
+    }
+    Ok(match code {
+        Exit::Success if !notes.is_empty() => Exit::SuccessWithWarnings,
+        other => other,
+    })
 }

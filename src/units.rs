@@ -62,9 +62,10 @@ impl std::error::Error for UnitError {}
 
 const TEMPERATURE_UNITS: &str =
     "a number with K, degC (or C), degF (or F) or R, for example \"300 K\" or \"25 degC\"";
-const PRESSURE_UNITS: &str = "a number with Pa, kPa, MPa, bar, atm or psi for absolute pressure \
-(also bara, psia), or barg, psig, kPag, MPag for gauge pressure (\"bar(g)\" and \"bar g\" too), \
-for example \"70 barg\" or \"5 MPa\"";
+const PRESSURE_UNITS: &str = "a number with Pa, hPa, kPa, MPa, GPa, mbar, bar, atm or psi for \
+absolute pressure (also bara, psia), or barg, psig, kPag, MPag for gauge pressure (\"bar(g)\" and \
+\"bar g\" too), for example \"70 barg\" or \"5 MPa\"; SI prefixes keep their case (mPa is a \
+millipascal, MPa a megapascal)";
 const DENSITY_UNITS: &str = "a number with kg/m3, g/cm3, g/L, lb/ft3 (mass) or mol/m3, mol/L, \
 kmol/m3, lbmol/ft3 (molar), for example \"50 kg/m3\"";
 const VOLUME_UNITS: &str = "a number with m3, L, cm3, ft3 or USgal, for example \"1 m3\"";
@@ -186,24 +187,26 @@ pub fn pressure(input: &str) -> Result<Pressure, UnitError> {
     let mut u: String = unit
         .chars()
         .filter(|c| !c.is_whitespace() && *c != '(' && *c != ')')
-        .collect::<String>()
-        .to_ascii_lowercase();
-    let gauge = if let Some(base) = u.strip_suffix('g').filter(|b| !b.is_empty()) {
+        .collect::<String>();
+    let gauge = if let Some(base) = u
+        .strip_suffix('g')
+        .or_else(|| u.strip_suffix('G'))
+        .filter(|b| !b.is_empty())
+    {
         u = base.to_string();
         true
-    } else if let Some(base) = u.strip_suffix('a').filter(|b| *b == "bar" || *b == "psi") {
+    } else if let Some(base) = u
+        .strip_suffix('a')
+        .or_else(|| u.strip_suffix('A'))
+        .filter(|b| b.eq_ignore_ascii_case("bar") || b.eq_ignore_ascii_case("psi"))
+    {
         u = base.to_string();
         false
     } else {
         false
     };
-    let factor = match u.as_str() {
-        "pa" => 1.0,
-        "kpa" => PA_PER_KPA,
-        "mpa" => PA_PER_MPA,
-        "bar" => PA_PER_BAR,
-        "atm" if !gauge => PA_PER_ATM,
-        "psi" => PA_PER_PSI,
+    let factor = match pressure_factor(&u) {
+        Some(f) if !(gauge && u.eq_ignore_ascii_case("atm")) => f,
         _ => {
             return Err(UnitError {
                 input: input.to_string(),
@@ -217,6 +220,13 @@ pub fn pressure(input: &str) -> Result<Pressure, UnitError> {
     if !pa.is_finite() {
         return Err(too_large(input, "pressure", PRESSURE_UNITS));
     }
+    if factor < 1.0 {
+        crate::input_notes::push(format!(
+            "\"{}\" is read as {pa:e} Pa: m is milli (a millipascal is 1e-3 Pa); for \
+             megapascals write MPa",
+            input.trim()
+        ));
+    }
     if gauge {
         Ok(Pressure::Gauge(pa))
     } else if pa <= 0.0 {
@@ -229,6 +239,27 @@ pub fn pressure(input: &str) -> Result<Pressure, UnitError> {
     } else {
         Ok(Pressure::Absolute(pa))
     }
+}
+
+/// Pascals per unit of a pressure unit without its gauge or absolute mark. The prefix keeps
+/// its SI case where case changes the meaning (m milli, M mega); the rest of the symbol is
+/// read in any case ("kPa", "KPA", "bar", "BAR"), since no other unit shares it.
+fn pressure_factor(unit: &str) -> Option<f64> {
+    let lower = unit.to_ascii_lowercase();
+    let milli = unit.starts_with('m');
+    Some(match lower.as_str() {
+        "pa" => 1.0,
+        "hpa" => 100.0,
+        "kpa" => PA_PER_KPA,
+        "mpa" if milli => 1e-3,
+        "mpa" => PA_PER_MPA,
+        "gpa" => 1e9,
+        "mbar" if milli => 100.0,
+        "bar" => PA_PER_BAR,
+        "atm" => PA_PER_ATM,
+        "psi" => PA_PER_PSI,
+        _ => return None,
+    })
 }
 
 /// Absolute pressure in Pa of a reading, refusing gauge readings at or below a vacuum.
@@ -343,7 +374,8 @@ pub fn volume(input: &str) -> Result<f64, UnitError> {
     let m3 = match u.as_str() {
         "m3" => v,
         "l" | "dm3" | "litre" | "liter" => v * 1e-3,
-        "cm3" | "ml" => v * 1e-6,
+        "cm3" => v * 1e-6,
+        "ml" if unit.starts_with('m') => v * 1e-6,
         "ft3" => v * M3_PER_FT3,
         "usgal" | "gal" => v * 3.785_411_784e-3,
         _ => {
@@ -396,6 +428,29 @@ pub fn quality(input: &str) -> Result<f64, UnitError> {
 mod tests {
     use super::*;
     use approx::assert_relative_eq;
+
+    #[test]
+    fn si_prefixes_keep_their_case() {
+        // SI brochure (BIPM, 9th ed., 2019, table 7): m is milli (1e-3), M mega (1e6), h
+        // hecto, k kilo, G giga. "1 mPa" was once read as a megapascal.
+        let pa = |s: &str| pressure(s).unwrap().absolute(0.0);
+        assert_relative_eq!(pa("1 mPa"), 1e-3);
+        assert_relative_eq!(pa("1 mpa"), 1e-3);
+        assert_relative_eq!(pa("1 MPa"), 1e6);
+        assert_relative_eq!(pa("1 MPA"), 1e6);
+        assert_relative_eq!(pa("1 Mpa"), 1e6);
+        assert_relative_eq!(pa("1 KPA"), 1e3);
+        assert_relative_eq!(pa("1013.25 hPa"), 101_325.0);
+        assert_relative_eq!(pa("1013.25 mbar"), 101_325.0);
+        assert_relative_eq!(pa("0.1 GPa"), 1e8);
+        assert_relative_eq!(pa("70 BAR"), 7e6);
+        assert!(pressure("1 Mbar").is_err(), "a megabar is no gas pressure");
+        assert_relative_eq!(pressure("5 MPag").unwrap().absolute(1e5), 5.1e6);
+        assert_relative_eq!(pressure("5 BARG").unwrap().absolute(1e5), 6e5);
+        // Litres: mL is a millilitre; ML (a megalitre) is not read as one.
+        assert_relative_eq!(volume("500 mL").unwrap(), 5e-4);
+        assert!(volume("1 ML").is_err());
+    }
 
     #[test]
     fn temperatures_on_every_scale() {

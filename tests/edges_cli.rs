@@ -99,3 +99,36 @@ fn one_model_that_cannot_answer_never_aborts_a_run_of_several() {
     assert!(result(&v, "pr")["pressure_pa"].as_f64().unwrap() > 0.0);
     assert!(err.contains("reference left out"), "{err}");
 }
+
+#[test]
+fn a_millipascal_is_not_a_megapascal_and_is_flagged() {
+    // SI brochure (BIPM, 9th ed., 2019, table 7): m is milli. "1 mPa" was read as 1 MPa.
+    let (v, code, err) = run_json(&[
+        "state", "--fluid", "methane", "-t", "15 degC", "-p", "1 mPa", "-m", "ideal",
+    ]);
+    let p = result(&v, "ideal")["pressure_pa"].as_f64().unwrap();
+    assert!((p - 1e-3).abs() < 1e-12, "{p}");
+    assert_eq!(code, 3, "an implausible unit is flagged: {err}");
+    assert!(err.contains("1e-3 Pa"), "{err}");
+    let (v, code, _) = run_json(&[
+        "state", "--fluid", "methane", "-t", "15 degC", "-p", "1 MPa", "-m", "ideal",
+    ]);
+    assert_eq!(result(&v, "ideal")["pressure_pa"].as_f64().unwrap(), 1e6);
+    assert_eq!(code, 0);
+}
+
+#[test]
+fn the_trades_flow_spellings_mean_the_same_flow() {
+    // MMscfd: million standard cubic feet per day at 60 degF and 14.696 psia (common
+    // practice); written MMscfd, MMSCFD or mmscfd.
+    let mass = |unit: &str| {
+        let (v, _, _) = run_json(&[
+            "flow", "--fluid", "methane", "--flow", unit, "-t", "40 degC", "-p", "60 bar", "-m",
+            "pr",
+        ]);
+        v["results"].to_string()
+    };
+    let a = mass("2 MMscfd");
+    assert_eq!(a, mass("2 MMSCFD"));
+    assert_eq!(a, mass("2 mmscfd"));
+}

@@ -85,8 +85,9 @@ pub enum Flow {
 /// The flow units accepted.
 pub const FLOW_UNITS: &str = "mass kg/s, kg/h, kg/d, t/h, t/d, lb/s, lb/h; molar mol/s, \
 kmol/h, kmol/d, lbmol/h; actual volume m3/s, m3/h, m3/d, L/s, ft3/s, ft3/min, ft3/h (also am3/h, \
-acfm); standard volume Sm3/s, Sm3/h, Sm3/d, MSm3/d, Nm3/s, Nm3/h, Nm3/d, scf/h, scf/d, scfm, \
-MMscfd; for example \"12000 Sm3/h\"";
+acfm); standard volume Sm3/s, Sm3/h, Sm3/d, MSm3/d (15 degC, 101.325 kPa), Nm3/s, Nm3/h, Nm3/d \
+(0 degC, 101.325 kPa), scf/h, scf/d, scfm, Mscfd, MMscfd (60 degF, 14.696 psia; in any case: \
+MMSCFD and mmscfd too, M being the trade's thousand); for example \"12000 Sm3/h\"";
 
 /// Reads a flow. `base` overrides the base the unit implies for standard volumes.
 pub fn flow(text: &str, option: &str, base: Option<BaseConditions>) -> Result<Flow, CliError> {
@@ -95,42 +96,22 @@ pub fn flow(text: &str, option: &str, base: Option<BaseConditions>) -> Result<Fl
         |id: &str| BaseConditions::named(id).unwrap_or(eos::jobs::base_conditions::NAMED[1]);
     let std = |f: f64, implied: &str| Flow::Standard(v * f, base.unwrap_or_else(|| named(implied)));
     let key: String = u.chars().filter(|c| !c.is_whitespace()).collect();
-    let f = match key.as_str() {
-        "kg/s" => Flow::Mass(v),
-        "kg/h" => Flow::Mass(v / S_PER_H),
-        "kg/d" => Flow::Mass(v / S_PER_D),
-        "t/h" => Flow::Mass(v * 1e3 / S_PER_H),
-        "t/d" => Flow::Mass(v * 1e3 / S_PER_D),
-        "lb/s" => Flow::Mass(v * KG_PER_LB),
-        "lb/h" => Flow::Mass(v * KG_PER_LB / S_PER_H),
-        "mol/s" => Flow::Molar(v),
-        "kmol/h" => Flow::Molar(v * 1e3 / S_PER_H),
-        "kmol/d" => Flow::Molar(v * 1e3 / S_PER_D),
-        "lbmol/h" => Flow::Molar(v * KG_PER_LB * 1e3 / S_PER_H),
-        "m3/s" | "am3/s" => Flow::Actual(v),
-        "m3/h" | "am3/h" => Flow::Actual(v / S_PER_H),
-        "m3/d" | "am3/d" => Flow::Actual(v / S_PER_D),
-        "L/s" | "l/s" => Flow::Actual(v * 1e-3),
-        "ft3/s" => Flow::Actual(v * M3_PER_FT3),
-        "ft3/min" | "acfm" => Flow::Actual(v * M3_PER_FT3 / 60.0),
-        "ft3/h" => Flow::Actual(v * M3_PER_FT3 / S_PER_H),
-        "Sm3/s" | "sm3/s" => std(1.0, "15degC"),
-        "Sm3/h" | "sm3/h" => std(1.0 / S_PER_H, "15degC"),
-        "Sm3/d" | "sm3/d" => std(1.0 / S_PER_D, "15degC"),
-        "MSm3/d" | "MMSm3/d" => std(1e6 / S_PER_D, "15degC"),
-        "Nm3/s" | "nm3/s" => std(1.0, "0degC"),
-        "Nm3/h" | "nm3/h" => std(1.0 / S_PER_H, "0degC"),
-        "Nm3/d" | "nm3/d" => std(1.0 / S_PER_D, "0degC"),
-        "scf/h" | "SCF/h" => std(M3_PER_FT3 / S_PER_H, "60degF-14.696psia"),
-        "scf/d" | "SCF/d" => std(M3_PER_FT3 / S_PER_D, "60degF-14.696psia"),
-        "scfm" | "SCFM" => std(M3_PER_FT3 / 60.0, "60degF-14.696psia"),
-        "MMscfd" | "MMSCFD" => std(1e6 * M3_PER_FT3 / S_PER_D, "60degF-14.696psia"),
-        _ => {
-            return Err(CliError::BadInput(format!(
+    // The trade writes standard cubic feet in any case (MMscfd, MMSCFD, mmscfd: M is the
+    // Roman thousand, not an SI prefix); they are read in any case.
+    let field = key.to_ascii_lowercase();
+    let f = match field.as_str() {
+        "scf/h" => std(M3_PER_FT3 / S_PER_H, "60degF-14.696psia"),
+        "scf/d" | "scfd" => std(M3_PER_FT3 / S_PER_D, "60degF-14.696psia"),
+        "scfm" | "scf/min" => std(M3_PER_FT3 / 60.0, "60degF-14.696psia"),
+        "mscfd" | "mscf/d" => std(1e3 * M3_PER_FT3 / S_PER_D, "60degF-14.696psia"),
+        "mmscfd" | "mmscf/d" => std(1e6 * M3_PER_FT3 / S_PER_D, "60degF-14.696psia"),
+        _ => flow_si(v, &key, &std).ok_or_else(|| {
+            CliError::BadInput(format!(
                 "{option} \"{text}\": unknown flow unit \"{u}\"; accepted: {FLOW_UNITS}"
-            )))
-        }
+            ))
+        })?,
     };
+
     let raw = match f {
         Flow::Mass(x) | Flow::Molar(x) | Flow::Actual(x) | Flow::Standard(x, _) => x,
     };
@@ -219,5 +200,38 @@ pub fn molar_flow(
         Flow::Molar(q) => q,
         Flow::Actual(q) => q / molar_volume(model, actual.0, actual.1, x)?.0,
         Flow::Standard(q, b) => q / molar_volume(model, b.t, b.p, x)?.0,
+    })
+}
+
+/// The flow units written with SI symbols, case as written (Sm3 and sm3 alike, since no other
+/// unit shares the spelling).
+fn flow_si(v: f64, key: &str, std: &dyn Fn(f64, &str) -> Flow) -> Option<Flow> {
+    Some(match key {
+        "kg/s" => Flow::Mass(v),
+        "kg/h" => Flow::Mass(v / S_PER_H),
+        "kg/d" => Flow::Mass(v / S_PER_D),
+        "t/h" => Flow::Mass(v * 1e3 / S_PER_H),
+        "t/d" => Flow::Mass(v * 1e3 / S_PER_D),
+        "lb/s" => Flow::Mass(v * KG_PER_LB),
+        "lb/h" => Flow::Mass(v * KG_PER_LB / S_PER_H),
+        "mol/s" => Flow::Molar(v),
+        "kmol/h" => Flow::Molar(v * 1e3 / S_PER_H),
+        "kmol/d" => Flow::Molar(v * 1e3 / S_PER_D),
+        "lbmol/h" => Flow::Molar(v * KG_PER_LB * 1e3 / S_PER_H),
+        "m3/s" | "am3/s" => Flow::Actual(v),
+        "m3/h" | "am3/h" => Flow::Actual(v / S_PER_H),
+        "m3/d" | "am3/d" => Flow::Actual(v / S_PER_D),
+        "L/s" | "l/s" => Flow::Actual(v * 1e-3),
+        "ft3/s" => Flow::Actual(v * M3_PER_FT3),
+        "ft3/min" | "acfm" => Flow::Actual(v * M3_PER_FT3 / 60.0),
+        "ft3/h" => Flow::Actual(v * M3_PER_FT3 / S_PER_H),
+        "Sm3/s" | "sm3/s" => std(1.0, "15degC"),
+        "Sm3/h" | "sm3/h" => std(1.0 / S_PER_H, "15degC"),
+        "Sm3/d" | "sm3/d" => std(1.0 / S_PER_D, "15degC"),
+        "MSm3/d" | "MMSm3/d" => std(1e6 / S_PER_D, "15degC"),
+        "Nm3/s" | "nm3/s" => std(1.0, "0degC"),
+        "Nm3/h" | "nm3/h" => std(1.0 / S_PER_H, "0degC"),
+        "Nm3/d" | "nm3/d" => std(1.0 / S_PER_D, "0degC"),
+        _ => return None,
     })
 }
