@@ -131,11 +131,11 @@ pub struct StateArgs {
     /// Mass or molar density with its unit: "50 kg/m3", "2.5 mol/L".
     #[arg(long, short = 'd', allow_hyphen_values = true)]
     pub density: Option<String>,
-    /// Pure fluids: enthalpy with its unit ("2800 kJ/kg", "-5 kJ/mol"), on each model's own
-    /// zero (steam-table zero for the water reference formulation).
+    /// Pure fluids: enthalpy with its unit ("2800 kJ/kg", "-5 kJ/mol"), on the zero the
+    /// output prints (water: the steam-table zero; other fluids: the ideal gas at 298.15 K).
     #[arg(long, allow_hyphen_values = true)]
     pub enthalpy: Option<String>,
-    /// Pure fluids: entropy with its unit ("6.5 kJ/(kg K)"), on each model's own zero.
+    /// Pure fluids: entropy with its unit ("6.5 kJ/(kg K)"), on the zero the output prints.
     #[arg(long, allow_hyphen_values = true)]
     pub entropy: Option<String>,
     /// Pure fluids: vapour quality, 0 (saturated liquid) to 1 (saturated vapour), or percent.

@@ -8,7 +8,8 @@
 //! 1055.055 852 62 J, and 1 lb = 0.453 592 37 kg (NIST SP 811, 2008 edition, appendix B);
 //! 1 R = 5/9 K. A bare number is refused, as for every quantity of the tool. The values are
 //! relative to the tool's reference state: ideal-gas h = 0 and s = 0 for every pure
-//! component at 298.15 K and 101.325 kPa.
+//! component at 298.15 K and 101.325 kPa, but water, which is on the steam-table zero
+//! (IAPWS-95: u = 0 and s = 0 for the saturated liquid at the triple point).
 
 use crate::units::KG_PER_LB;
 

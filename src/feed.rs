@@ -54,6 +54,22 @@ impl Feed {
             .sum()
     }
 
+    /// The zero of enthalpy and entropy, in words: the same for every model of the feed.
+    pub fn caloric_zero(&self) -> String {
+        const IDEAL: &str = "h = 0 and s = 0 for the ideal gas at 298.15 K and 101.325 kPa";
+        const STEAM: &str = "the steam-table zero (u = 0 and s = 0 for saturated liquid water at \
+                             the triple point, IAPWS-95)";
+        let water = self.records.iter().any(|r| r.id == "water");
+        match (self.is_pure(), water) {
+            (true, true) => format!("{STEAM}, for every model"),
+            (true, false) => format!("{IDEAL}, for every model"),
+            (false, false) => format!("{IDEAL} of each pure component, for every model"),
+            (false, true) => format!(
+                "{IDEAL} of each pure component but water, which is on {STEAM}; for every model"
+            ),
+        }
+    }
+
     /// A short label: the component name, or "mixture of N components".
     pub fn label(&self) -> String {
         if self.is_pure() {

@@ -6,7 +6,10 @@
 //! Prausnitz & O'Connell, *The Properties of Gases and Liquids*, 5th ed. (2001), Appendix A.
 //!
 //! Enthalpy and entropy are integrated analytically from the reference state of
-//! [`crate::constants`]: h0(T_REF) = 0 and s0(T_REF, P_REF) = 0 for every pure ideal gas.
+//! [`crate::constants`]: h0(T_REF) = 0 and s0(T_REF, P_REF) = 0 for every pure ideal gas, unless
+//! the component carries another zero ([`IdealGasCp::with_zero`]): water is on the steam-table
+//! zero (IAPWS-95: u = 0 and s = 0 for the saturated liquid at the triple point), which puts its
+//! ideal gas at T_REF, P_REF at the values of [`crate::helmholtz::steam_table_zero`].
 //! Outside the fitted range the end segment is extrapolated; [`IdealGasCp::range`] tells the
 //! caller where that starts.
 
@@ -45,6 +48,9 @@ impl CpSegment {
 #[derive(Debug, Clone, PartialEq)]
 pub struct IdealGasCp {
     segments: Vec<CpSegment>,
+    /// h0/R (K) and s0/R of the ideal gas at T_REF, P_REF on the component's zero; (0, 0) on
+    /// the crate's.
+    zero: (f64, f64),
 }
 
 /// Ideal-gas caloric properties of one component or mixture at T, in reduced form.
@@ -67,7 +73,20 @@ impl IdealGasCp {
                 t_hi: f64::INFINITY,
                 a: [cp_over_r, 0.0, 0.0, 0.0, 0.0],
             }],
+            zero: (0.0, 0.0),
         }
+    }
+
+    /// The same heat capacity with enthalpy and entropy on another zero: h0/R (K) and s0/R
+    /// of the ideal gas at T_REF and P_REF.
+    pub fn with_zero(mut self, h0_r: f64, s0_r: f64) -> Self {
+        self.zero = (h0_r, s0_r);
+        self
+    }
+
+    /// h0/R (K) and s0/R of the ideal gas at T_REF, P_REF: (0, 0) on the crate's zero.
+    pub fn zero(&self) -> (f64, f64) {
+        self.zero
     }
 
     /// Piecewise polynomial from segments; returns `None` unless the segments are non-empty,
@@ -82,7 +101,10 @@ impl IdealGasCp {
         let joined = segments
             .windows(2)
             .all(|w| (w[0].t_hi - w[1].t_lo).abs() < 1e-9);
-        (finite && joined).then_some(IdealGasCp { segments })
+        (finite && joined).then_some(IdealGasCp {
+            segments,
+            zero: (0.0, 0.0),
+        })
     }
 
     /// The segments, lowest temperature first.
@@ -135,8 +157,8 @@ impl IdealGasCp {
         let (h, s) = self.integrals(t);
         IdealGasValues {
             cp_r: self.cp_r(t),
-            h_r: h,
-            s_r: s,
+            h_r: h + self.zero.0,
+            s_r: s + self.zero.1,
         }
     }
 }

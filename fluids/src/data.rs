@@ -259,6 +259,7 @@ fn load_components(
             .collect();
         let cp_model = eos::IdealGasCp::piecewise(segs)
             .ok_or_else(|| err("ideal_cp.csv", format!("{tag}: segments not contiguous")))?;
+        let cp_model = on_fluid_zero(&r.id, cp_model)?;
         let cp_source = resolve("ideal_cp.csv", &tag, &c.keys, sources)?;
         out.push(ComponentRecord {
             aliases: split_list(&r.aliases),
@@ -391,4 +392,18 @@ fn load() -> Result<Database, DataError> {
         names,
         formulas,
     })
+}
+
+/// The heat capacity on the component's zero of enthalpy and entropy: water's is the
+/// steam-table zero (IAPWS-95: u = 0 and s = 0 for the saturated liquid at the triple point),
+/// so that every model of water, the cubics as much as IAPWS-95 and IF97, reports and reads
+/// h and s as steam tables do; every other component keeps the ideal gas at 298.15 K and
+/// 101.325 kPa.
+fn on_fluid_zero(id: &str, cp: eos::IdealGasCp) -> Result<eos::IdealGasCp, DataError> {
+    if id != "water" {
+        return Ok(cp);
+    }
+    let (h0_r, s0_r) = eos::helmholtz::steam_table_zero()
+        .map_err(|e| err("components.csv", format!("water: steam-table zero: {e}")))?;
+    Ok(cp.with_zero(h0_r, s0_r))
 }

@@ -20,11 +20,11 @@ pub struct FlashArgs {
     #[arg(long, short = 'p', allow_hyphen_values = true)]
     pub pressure: Option<String>,
     /// Specific enthalpy for a (P, h) flash: "-5 kJ/mol", "350 kJ/kg" (ideal-gas h = 0 for
-    /// each pure component at 298.15 K and 101.325 kPa).
+    /// each pure component at 298.15 K and 101.325 kPa; water on the steam-table zero).
     #[arg(long, allow_hyphen_values = true, conflicts_with_all = ["temperature", "entropy"])]
     pub enthalpy: Option<String>,
     /// Specific entropy for a (P, s) flash: "-20 J/(mol K)", "-0.5 kJ/(kg K)" (ideal-gas
-    /// s = 0 for each pure component at 298.15 K and 101.325 kPa).
+    /// s = 0 for each pure component at 298.15 K and 101.325 kPa; water on the steam-table zero).
     #[arg(long, allow_hyphen_values = true, conflicts_with = "temperature")]
     pub entropy: Option<String>,
     /// Bubble-point pressure at the given --temperature.

@@ -68,23 +68,17 @@ fn build(id: &str, feed: &Feed) -> Result<Option<Built>, CliError> {
             id: id.to_string(),
             name: spec.name.to_string(),
             citation: spec.citation.to_string(),
-            reference_state: "h = 0 and s = 0 for the ideal gas at 298.15 K and 101.325 kPa"
-                .to_string(),
+            reference_state: feed.caloric_zero(),
             fluid: Box::new(cubic),
         }));
     }
     Ok(helmholtz_for(id, feed).map(|h| {
         let f = h.formulation();
-        let reference_state = if f.key == "water-iapws95" {
-            "IAPWS-95: u = 0 and s = 0 for the saturated liquid at the triple point".to_string()
-        } else {
-            format!("the reference state of {}", f.title)
-        };
         Built {
             id: id.to_string(),
             name: f.title.to_string(),
             citation: f.title.to_string(),
-            reference_state,
+            reference_state: feed.caloric_zero(),
             fluid: Box::new(h),
         }
     }))

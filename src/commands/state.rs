@@ -135,15 +135,6 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
             split.join(", ")
         ));
     }
-    if (args.enthalpy.is_some() || args.entropy.is_some()) && results.len() > 1 {
-        warnings.push(
-            "enthalpy and entropy are read on each model's own zero (a reference formulation's \
-             published one, e.g. the steam-table zero for water; the other models' ideal gas \
-             at 298.15 K and 101.325 kPa), so the same number is a different state for \
-             different models; the results show every model's h and s on the ideal-gas zero"
-                .to_string(),
-        );
-    }
     let (notes, more) = extrapolation_warnings(&feed, &results);
     warnings.extend(more);
     for r in &mut results {
@@ -174,6 +165,7 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
         },
         composition: composition_rows(&feed),
         results,
+        enthalpy_entropy_zero: feed.caloric_zero(),
         warnings,
         caution: crate::CAUTION,
     })

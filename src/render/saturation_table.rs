@@ -84,9 +84,8 @@ pub fn render(r: &SaturationReport) -> String {
         }
     }
     out.push_str(&format!("{t}\n"));
-    out.push_str("zero of h and s (compare differences, not values, across models):\n");
-    for m in res {
-        out.push_str(&format!("  {}: {}\n", m.model, m.reference_state));
+    if let Some(m) = res.first() {
+        out.push_str(&format!("h and s: {}.\n", m.reference_state));
     }
     out.push_str(&format!("caution: {}\n", r.caution));
     out

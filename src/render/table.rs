@@ -171,7 +171,7 @@ pub fn state(r: &StateReport) -> String {
             out.push_str(&format!("  {n}\n"));
         }
     }
-    out.push_str("h and s: zero for each ideal gas at 298.15 K and 101.325 kPa.\n");
+    out.push_str(&format!("h and s: {}.\n", r.enthalpy_entropy_zero));
     out.push_str(&format!("caution: {}\n", r.caution));
     out
 }

@@ -15,6 +15,9 @@ pub struct StateReport {
     pub composition: Vec<CompositionRow>,
     /// One result per model.
     pub results: Vec<ModelResult>,
+    /// The zero of enthalpy and entropy (the same for every model; entered values are read
+    /// on it too).
+    pub enthalpy_entropy_zero: String,
     /// Things the user must read (extrapolations, models dropped, weak models).
     pub warnings: Vec<String>,
     /// The caution for pressure equipment.
@@ -32,9 +35,9 @@ pub struct StateInput {
     pub pressure: Option<String>,
     /// Density as entered.
     pub density: Option<String>,
-    /// Enthalpy as entered (pure fluids; on each model's own zero).
+    /// Enthalpy as entered (pure fluids; on the fluid's zero, as printed).
     pub enthalpy: Option<String>,
-    /// Entropy as entered (pure fluids; on each model's own zero).
+    /// Entropy as entered (pure fluids; on the fluid's zero, as printed).
     pub entropy: Option<String>,
     /// Vapour quality as entered (pure fluids).
     pub quality: Option<String>,

@@ -27,6 +27,13 @@
 //! With these, every property of [`crate::properties::evaluate`] equals the formulation's,
 //! with h and s shifted by constants. The direct (T, rho) functions of [`HelmholtzFluid`]
 //! report the formulation's own convention instead.
+//!
+//! Water is the exception to the crate's zero: every model of water, here and elsewhere, is on
+//! the steam-table zero (IAPWS R6-95(2018): u = 0 and s = 0 for the saturated liquid at the
+//! triple point), which is IAPWS-95's published one. For it the shift above is undone: h0/R
+//! and s0/R of the ideal gas at T_REF, P_REF are IAPWS-95's ([`steam_table_zero`]), and the
+//! other models of water carry the same values in their ideal-gas heat capacity
+//! ([`crate::IdealGasCp::with_zero`]).
 
 use super::branch_hint;
 use super::density::{self, solve_branch, Branch};
@@ -51,6 +58,9 @@ pub struct HelmholtzFluid {
     h_ref: f64,
     /// Entropy constant c.
     s_const: f64,
+    /// h0/R (K) and s0/R of the ideal gas at T_REF, P_REF on the fluid's zero: (0, 0) but
+    /// for water, whose zero is the steam-table one.
+    zero: (f64, f64),
     /// Highest density handled, mol/m3.
     rho_max: f64,
 }
@@ -72,9 +82,15 @@ impl HelmholtzFluid {
             .map(|a| -1.0 - (a.reduced(0.7 * form.tc, form.tc)).log10())
             .unwrap_or(0.0);
         let cp_ref = 1.0 - k * tau_ref * tau_ref * i_ref.tt;
+        // The published zero of IAPWS-95 is the steam-table zero, kept for water.
+        let zero = if form.key == STEAM_TABLE_KEY {
+            (h_ref, -s_const)
+        } else {
+            (0.0, 0.0)
+        };
         let comp = Component::new(form.fluid, form.molar_mass, form.tc, form.pc, omega)
             .with_vc(1.0 / form.rhoc)
-            .with_cp(IdealGasCp::constant(cp_ref));
+            .with_cp(IdealGasCp::constant(cp_ref).with_zero(zero.0, zero.1));
         let rho_max = max_density(form);
         HelmholtzFluid {
             form,
@@ -82,8 +98,21 @@ impl HelmholtzFluid {
             k,
             h_ref,
             s_const,
+            zero,
             rho_max,
         }
+    }
+
+    /// Enthalpy (J/mol) and entropy (J/(mol K)) to add to the formulation's own convention
+    /// (that of [`HelmholtzFluid::properties`]) to put them on the fluid's zero, the one
+    /// every model of the fluid reports: zero for water (IAPWS-95's published zero is the
+    /// steam-table zero); for the other fluids the shift to h = 0, s = 0 of the ideal gas at
+    /// T_REF, P_REF.
+    pub fn zero_shift(&self) -> (f64, f64) {
+        (
+            R * (self.zero.0 - self.h_ref),
+            R * (self.zero.1 + self.s_const),
+        )
     }
 
     /// The formulation (constants, terms, ancillaries, range of validity).
@@ -198,6 +227,17 @@ impl HelmholtzFluid {
     }
 }
 
+/// The formulation whose published zero of enthalpy and entropy is the steam-table zero.
+const STEAM_TABLE_KEY: &str = "water-iapws95";
+
+/// h0/R (K) and s0/R of water's ideal gas at T_REF and P_REF on the steam-table zero (IAPWS
+/// R6-95(2018): u = 0 and s = 0 for the saturated liquid at the triple point), from the
+/// ideal part of IAPWS-95: the zero every model of water carries.
+pub fn steam_table_zero() -> Result<(f64, f64)> {
+    let f = HelmholtzFluid::new(super::registry::formulation(STEAM_TABLE_KEY)?);
+    Ok(f.zero)
+}
+
 /// Highest density handled: the largest liquid density on the p_max isobar over the range of
 /// validity (sampled at eight temperatures), the densest state the paper covers.
 fn max_density(f: &Formulation) -> f64 {
@@ -267,8 +307,8 @@ impl Model for HelmholtzFluid {
         let i = f.ideal(tau, 1.0); // at delta = 1, phi0 has no ln(delta) part
         IdealGasValues {
             cp_r: 1.0 - k * tau * tau * i.tt,
-            h_r: t * (1.0 + k * tau * i.t) - self.h_ref,
-            s_r: k * (tau * i.t - i.a) + (f.rhoc * R * t / P_REF).ln() + self.s_const,
+            h_r: t * (1.0 + k * tau * i.t) - self.h_ref + self.zero.0,
+            s_r: k * (tau * i.t - i.a) + (f.rhoc * R * t / P_REF).ln() + self.s_const + self.zero.1,
         }
     }
 

@@ -47,7 +47,7 @@ pub mod residual_part;
 pub mod saturation;
 
 pub use derivs::Derivs;
-pub use fluid::HelmholtzFluid;
+pub use fluid::{steam_table_zero, HelmholtzFluid};
 pub use formulation::{Formulation, Tier, Validity};
 pub use properties::FluidProperties;
 pub use registry::{formulation, keys, reference_for, technical_for};

@@ -4,10 +4,9 @@
 //!
 //! A pure fluid gives its critical point, its range, its own saturation solver (equal pressure
 //! and equal Gibbs energy of the two phases) and every property at (T, rho). Properties are in
-//! the model's own reference convention: the Helmholtz formulations report their published
-//! convention (IAPWS-95: u = s = 0 for the saturated liquid at the triple point), the cubics
-//! the crate's (h = s = 0 for the ideal gas at 298.15 K and 101.325 kPa). Differences and the
-//! lever rule do not depend on the convention.
+//! the fluid's zero, the same for every model: the steam-table zero for water (IAPWS-95: u = s =
+//! 0 for the saturated liquid at the triple point), h = s = 0 for the ideal gas at 298.15 K and
+//! 101.325 kPa for every other fluid. An enthalpy or entropy entered is read on the same zero.
 
 use super::error::PureResult;
 

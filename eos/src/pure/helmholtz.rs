@@ -1,7 +1,9 @@
 //! [`PureFluid`] for the Helmholtz formulations: saturation from the formulation's own
 //! equal-pressure, equal-Gibbs-energy solver ([`crate::helmholtz::saturation`], Akasaka's
-//! Newton scheme), properties in the formulation's own convention
-//! ([`crate::helmholtz::FluidProperties`]), density roots from [`crate::helmholtz::density`].
+//! Newton scheme), properties from the formulation ([`crate::helmholtz::FluidProperties`])
+//! with h and s on the fluid's zero (the one every model of the fluid reports: the steam-table
+//! zero for water, the ideal gas at 298.15 K and 101.325 kPa otherwise), density roots from
+//! [`crate::helmholtz::density`].
 //!
 //! The generic trait path (ln phi of [`crate::Model`]) is not used: the trait residual is
 //! rescaled by R_f/R and carries an extra (k - 1) ln delta term, see
@@ -13,15 +15,18 @@ use crate::helmholtz::branch_hint::ancillary_pressure;
 use crate::helmholtz::density::{self as hd, solve_branch};
 use crate::helmholtz::{FluidProperties, HelmholtzFluid, Saturation};
 
-fn convert(p: &FluidProperties) -> PureProps {
+/// The formulation's properties on the fluid's zero of h and s (the one every model of the
+/// fluid reports, [`HelmholtzFluid::zero_shift`]).
+fn convert(fluid: &HelmholtzFluid, p: &FluidProperties) -> PureProps {
+    let (dh, ds) = fluid.zero_shift();
     PureProps {
         t: p.t,
         p: p.p,
         rho: p.rho,
         z: p.z,
-        u: p.u,
-        h: p.h,
-        s: p.s,
+        u: p.u + dh,
+        h: p.h + dh,
+        s: p.s + ds,
         cv: p.cv,
         cp: p.cp,
         w: p.w,
@@ -29,8 +34,8 @@ fn convert(p: &FluidProperties) -> PureProps {
 }
 
 fn sat_state(fluid: &HelmholtzFluid, s: &Saturation) -> PureResult<SatState> {
-    let liquid = convert(&fluid.properties(s.t, s.rho_liq)?);
-    let mut vapor = convert(&fluid.properties(s.t, s.rho_vap)?);
+    let liquid = convert(fluid, &fluid.properties(s.t, s.rho_liq)?);
+    let mut vapor = convert(fluid, &fluid.properties(s.t, s.rho_vap)?);
     // Both phases at the converged pressure (taken from the vapour side by the solver).
     let mut liquid = liquid;
     liquid.p = s.p;
@@ -124,7 +129,7 @@ impl PureFluid for HelmholtzFluid {
     }
 
     fn props(&self, t: f64, rho: f64) -> PureResult<PureProps> {
-        Ok(convert(&self.properties(t, rho)?))
+        Ok(convert(self, &self.properties(t, rho)?))
     }
 
     fn pressure(&self, t: f64, rho: f64) -> PureResult<f64> {

@@ -1,9 +1,10 @@
 //! IAPWS-IF97 as a (T, P)-explicit model of water. Departure functions are taken against the
 //! formulation's own ideal-gas part (gamma0 of region 2, or of region 5 above 1073.15 K), so
-//! h and s keep IF97's internal consistency; the ideal-gas part is shifted to zfactor's zero
-//! (ideal gas at T_REF, P_REF). The molar mass and gas constant are the release's
-//! (M R_IF97 = 8.31448 J/(mol K) against the CODATA 8.314463): the entropy carries a
-//! difference of 2e-5 ln(P/P_REF) J/(mol K) from that, far below the formulation's accuracy.
+//! h and s keep IF97's internal consistency. They are IF97's own, on the steam-table zero
+//! (u = 0 and s = 0 for the saturated liquid at the triple point), water's zero in every model
+//! of the crate. The molar mass and gas constant are the release's
+//! (M R_IF97 = 8.314510 J/(mol K) against the CODATA 8.314463): the entropy carries a
+//! difference of 4.7e-5 ln(P/P_REF) J/(mol K) from that, far below the formulation's accuracy.
 //!
 //! Departure from IAPWS-95 over IF97's range, measured on a 41 x 41 grid from 273.16 K to
 //! 1073.15 K and 1 kPa to 100 MPa (eos/tests/if97_vs_iapws95.rs): density within 0.057 %
@@ -12,7 +13,7 @@
 
 use super::{TpModel, TpPoint};
 use crate::component::Component;
-use crate::constants::{P_REF, R, T_REF};
+use crate::constants::{P_REF, R};
 use crate::error::Result;
 use crate::ideal_cp::IdealGasValues;
 use crate::if97::{self, data::tables, region2, region5};
@@ -63,7 +64,6 @@ impl TpModel for If97Model {
     fn point(&self, t: f64, p: f64, _x: &[f64], _root: RootChoice) -> Result<TpPoint> {
         let st = if97::props_tp(t, p)?;
         let (h_ig, s_ig, cp_ig) = ideal(t, p)?;
-        let (h_ref, s_ref, _) = ideal(T_REF, P_REF)?;
         let (_, s_ig_ref_p, _) = ideal(t, P_REF)?;
         Ok(TpPoint {
             z: p * st.v * M_WATER / (R * t),
@@ -71,8 +71,8 @@ impl TpModel for If97Model {
             s_dep: Some(M_WATER * (st.s - s_ig)),
             ideal: Some(IdealGasValues {
                 cp_r: M_WATER * cp_ig / R,
-                h_r: M_WATER * (h_ig - h_ref) / R,
-                s_r: M_WATER * (s_ig_ref_p - s_ref) / R,
+                h_r: M_WATER * h_ig / R,
+                s_r: M_WATER * s_ig_ref_p / R,
             }),
             warnings: Vec::new(),
         })
