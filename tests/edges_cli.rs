@@ -196,3 +196,56 @@ fn water_is_on_the_steam_table_zero_in_every_model_in_and_out() {
         assert!((t - 523.15).abs() < 1e-3, "{model}: {t}");
     }
 }
+
+#[test]
+fn the_audit_recomputes_with_the_reference_equation_and_names_no_cause_within_a_models_error() {
+    // A sheet of reference-equation densities (methane, nitrogen, CO2 at 300 K; the equations
+    // are checked against their papers in eos/tests/helmholtz_gases.rs). Recomputed with
+    // Peng-Robinson by default, every gas row was flagged with a cause ("gauge pressure read
+    // as absolute") that was really the cubic's own 1-3 % error (common practice).
+    let dir = tempfile::tempdir().unwrap();
+    let sheet = dir.path().join("sheet.csv");
+    let mut text = String::from("fluid,T [K],P [bar],density [kg/m3]\n");
+    for fluid in ["methane", "nitrogen", "co2"] {
+        for p in ["20", "70", "120"] {
+            let (v, _, _) = run_json(&[
+                "state",
+                "--fluid",
+                fluid,
+                "-t",
+                "300 K",
+                "-p",
+                &format!("{p} bar"),
+                "-m",
+                "reference",
+            ]);
+            let rho = result(&v, "reference")["mass_density_kg_m3"]
+                .as_f64()
+                .unwrap();
+            text.push_str(&format!("{fluid},300,{p},{rho}\n"));
+        }
+    }
+    std::fs::write(&sheet, text).unwrap();
+    let sheet_s = sheet.to_str().unwrap();
+    let out = dir.path().join("auto.csv");
+    let (v, code, err) = run_json(&["audit", sheet_s, "-o", out.to_str().unwrap()]);
+    assert_eq!(code, 0, "{err}");
+    assert_eq!(v["rows_flagged"], 0, "{v}");
+    let copy = std::fs::read_to_string(&out).unwrap();
+    assert_eq!(copy.matches(",reference,").count(), 9, "{copy}");
+
+    let out = dir.path().join("pr.csv");
+    let (v, _, _) = run_json(&["audit", sheet_s, "-m", "pr", "-o", out.to_str().unwrap()]);
+    let flagged = v["flagged"].as_array().unwrap();
+    assert!(!flagged.is_empty());
+    for f in flagged {
+        let dev = f["deviation_pct"].as_f64().unwrap().abs();
+        if dev <= 3.0 {
+            assert!(
+                f["reconciling_causes"].as_array().unwrap().is_empty(),
+                "{f}"
+            );
+            assert!(f["note"].as_str().unwrap().contains("uncertainty"), "{f}");
+        }
+    }
+}

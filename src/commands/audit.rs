@@ -23,6 +23,9 @@ pub const CHUNK: usize = 16_384;
 /// Rows listed in the summary.
 const LISTED: usize = 200;
 /// Columns appended to each row of the annotated copy.
+/// The `--model` value that picks each fluid's reference formulation where it has one.
+pub const AUTO: &str = "auto";
+
 pub const APPENDED: [&str; 8] = [
     "zfactor_model",
     "zfactor_value",
@@ -50,8 +53,9 @@ pub struct AuditArgs {
     /// volume, std_volume.
     #[arg(long)]
     pub quantity: Option<String>,
-    /// The model to recompute with (one id).
-    #[arg(long, short = 'm', default_value = "pr")]
+    /// The model to recompute with: one id, or auto (each fluid's reference formulation
+    /// where it has one, otherwise pr); the copy names the model of every row.
+    #[arg(long, short = 'm', default_value = AUTO)]
     pub model: String,
     /// Relative tolerance: "1%", "0.5 %" or a fraction such as 0.01.
     #[arg(long, default_value = "1%")]
@@ -135,7 +139,11 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
             "--model all: an audit recomputes with one model; give one id".to_string(),
         ));
     }
-    let ids = models::parse_ids(&args.model)?;
+    let ids = if args.model.trim().eq_ignore_ascii_case(AUTO) {
+        vec![AUTO.to_string()]
+    } else {
+        models::parse_ids(&args.model)?
+    };
     if ids.len() != 1 {
         return Err(CliError::BadInput(format!(
             "--model \"{}\": an audit recomputes with one model; give one id",
@@ -199,7 +207,11 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
         input: args.file.display().to_string(),
         sheet: source.sheet().map(str::to_string),
         output: output.display().to_string(),
-        model: defaults.model.clone(),
+        model: if defaults.model == AUTO {
+            "auto: each fluid's reference formulation where it has one, otherwise pr".to_string()
+        } else {
+            defaults.model.clone()
+        },
         tolerance: tol,
         ambient_pressure_pa: ambient,
         default_base: base.id.to_string(),
@@ -220,7 +232,6 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
     let mut cache = Cache::default();
     let value_col = map.columns.get(&Field::Value).map(|c| c.index);
     let width = headers.len();
-    let model_id = defaults.model.clone();
     // Reading the next chunk overlaps auditing (in parallel) and writing the current one;
     // chunks stay in order through a bounded channel.
     let written: Result<Sink, CliError> = std::thread::scope(|scope| {
@@ -241,7 +252,7 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
                         Some(b) => Outcome::Bad(b),
                         None => audit_row::audit_row(row, &cells, &map, &defaults, &cache),
                     };
-                    let out = annotate(cells, width, &model_id, &outcome);
+                    let out = annotate(cells, width, &outcome);
                     (row, outcome, out)
                 })
                 .collect();
@@ -310,10 +321,12 @@ fn tally(
     report.rows_read += 1;
     match outcome {
         Outcome::Audited {
+            model,
             value,
             deviation,
             flagged,
             causes,
+            note,
             ..
         } => {
             report.rows_audited += 1;
@@ -339,6 +352,8 @@ fn tally(
                         recomputed: *value,
                         deviation_pct: pct,
                         reconciling_causes: causes.clone(),
+                        model: model.clone(),
+                        note: note.clone(),
                     });
                 }
             } else {
@@ -359,24 +374,21 @@ fn tally(
 }
 
 /// The row as read with the audit's columns appended.
-fn annotate(
-    mut out: csv::StringRecord,
-    width: usize,
-    model: &str,
-    outcome: &Outcome,
-) -> csv::StringRecord {
+fn annotate(mut out: csv::StringRecord, width: usize, outcome: &Outcome) -> csv::StringRecord {
     while out.len() < width {
         out.push_field("");
     }
-    out.push_field(model);
     match outcome {
         Outcome::Audited {
+            model,
             value,
             ideal,
             deviation,
             flagged,
             causes,
+            note,
         } => {
+            out.push_field(model);
             out.push_field(&format!("{value:e}"));
             if ideal.is_finite() {
                 out.push_field(&format!("{ideal:e}"));
@@ -388,9 +400,10 @@ fn annotate(
             out.push_field(&format!("{:.6}", 100.0 * deviation));
             out.push_field(if *flagged { "FLAG" } else { "ok" });
             out.push_field(&causes.join("; "));
-            out.push_field("");
+            out.push_field(note.as_deref().unwrap_or(""));
         }
         Outcome::Bad(b) => {
+            out.push_field("");
             out.push_field("");
             out.push_field("");
             out.push_field("");

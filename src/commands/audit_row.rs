@@ -339,7 +339,7 @@ impl Cache {
             });
             if let Ok(e) = &entry {
                 if !self.models.contains_key(&e.model_key) {
-                    let m = models::build(&d.model, &e.feed)
+                    let m = models::build(&model_for(&d.model, &e.feed), &e.feed)
                         .map(|built| {
                             Arc::new(ModelEntry {
                                 built,
@@ -352,6 +352,19 @@ impl Cache {
             }
             self.fluids[slot].insert(text.to_string(), entry);
         }
+    }
+}
+
+/// The model of a fluid: the one asked, or with "auto" the fluid's reference formulation
+/// where it has one (a pure fluid among methane, nitrogen, CO2, argon, hydrogen, water),
+/// otherwise Peng-Robinson.
+fn model_for(asked: &str, feed: &Feed) -> String {
+    if asked != crate::commands::audit::AUTO {
+        asked.to_string()
+    } else if models::applies("reference", feed) {
+        "reference".to_string()
+    } else {
+        "pr".to_string()
     }
 }
 
@@ -376,12 +389,16 @@ pub enum Outcome {
     /// Recomputed: the model's value, the ideal-gas value, the deviation
     /// (sheet - model)/model, whether it is flagged, and the causes that reconcile it.
     Audited {
+        /// The id of the model that recomputed the row.
+        model: String,
         value: f64,
         /// The ideal-gas value of the same row.
         ideal: f64,
         deviation: f64,
         flagged: bool,
         causes: Vec<String>,
+        /// Why no cause is named on a flagged row, where that is known.
+        note: Option<String>,
     },
     /// The row could not be read or computed.
     Bad(BadCell),
@@ -591,7 +608,19 @@ fn read_and_compute(
     let value = audit::recompute(m, &row).map_err(|e| bad(fc, e.to_string()))?;
     let deviation = (sheet - value) / value;
     let flagged = deviation.is_nan() || deviation.abs() > d.tolerance;
-    let causes = if flagged {
+    // A cause is named only where the deviation exceeds what the model's own error could
+    // make of a correct sheet; within it, the flag says so instead of guessing a cause.
+    let own = eos::catalogue::find(&model.built.id).map_or(0.0, |i| i.density_uncertainty);
+    let beyond_model = !(deviation.abs() <= d.tolerance + own);
+    let note = (flagged && !beyond_model).then(|| {
+        format!(
+            "no cause named: the deviation is within the recomputing model's own uncertainty \
+             (about {:.1} % in density for {}); recompute with a more accurate model",
+            100.0 * own,
+            model.built.id
+        )
+    });
+    let causes = if flagged && beyond_model {
         audit::causes(m, &model.ideal, &row, sheet, d.tolerance)
             .into_iter()
             .filter(|c| c.reconciles)
@@ -602,11 +631,13 @@ fn read_and_compute(
     };
     let ideal = audit::recompute(&model.ideal, &row).unwrap_or(f64::NAN);
     Ok(Outcome::Audited {
+        model: model.built.id.clone(),
         value,
         ideal,
         deviation,
         flagged,
         causes,
+        note,
     })
 }
 

@@ -37,15 +37,16 @@ pub fn table(r: &AuditReport) -> String {
         out.push_str("flagged rows (first ones):\n");
         for f in r.flagged.iter().take(20) {
             out.push_str(&format!(
-                "  row {}: sheet {}, recomputed {}, deviation {}%{}\n",
+                "  row {}: sheet {}, recomputed {} ({}), deviation {}%{}\n",
                 f.row,
                 f.sheet_value,
                 sig(f.recomputed, 6),
+                f.model,
                 sig(f.deviation_pct, 4),
-                if f.reconciling_causes.is_empty() {
-                    String::new()
-                } else {
-                    format!(" -> {}", f.reconciling_causes.join("; "))
+                match (&f.note, f.reconciling_causes.is_empty()) {
+                    (Some(n), _) => format!(" -> {n}"),
+                    (None, true) => String::new(),
+                    (None, false) => format!(" -> {}", f.reconciling_causes.join("; ")),
                 }
             ));
         }

@@ -43,6 +43,11 @@ pub struct FlaggedRow {
     pub recomputed: f64,
     pub deviation_pct: f64,
     pub reconciling_causes: Vec<String>,
+    /// The model that recomputed the row.
+    pub model: String,
+    /// Why no cause is named, where that is known (the deviation is within the model's own
+    /// uncertainty).
+    pub note: Option<String>,
 }
 
 /// A row that could not be audited.
