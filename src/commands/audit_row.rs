@@ -611,7 +611,7 @@ fn read_and_compute(
     // A cause is named only where the deviation exceeds what the model's own error could
     // make of a correct sheet; within it, the flag says so instead of guessing a cause.
     let own = eos::catalogue::find(&model.built.id).map_or(0.0, |i| i.density_uncertainty);
-    let beyond_model = !(deviation.abs() <= d.tolerance + own);
+    let beyond_model = deviation.is_nan() || deviation.abs() > d.tolerance + own;
     let note = (flagged && !beyond_model).then(|| {
         format!(
             "no cause named: the deviation is within the recomputing model's own uncertainty \
