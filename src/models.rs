@@ -53,6 +53,10 @@ const ALL_SET: [&str; 9] = [
     "reference",
 ];
 
+/// The models with an ideal-gas part of their own (the reference formulations and IAPWS-IF97):
+/// the component table's heat-capacity fits, and their fitted ranges, do not enter them.
+pub const OWN_IDEAL_GAS: [&str; 3] = ["reference", "sw12", "if97"];
+
 /// How a model computes.
 pub enum Engine {
     /// A residual Helmholtz energy in (T, rho).

@@ -249,3 +249,151 @@ fn the_audit_recomputes_with_the_reference_equation_and_names_no_cause_within_a_
         }
     }
 }
+
+/// The per-result warnings of `model` in a state report.
+fn warnings_of(v: &Value, model: &str) -> String {
+    result(v, model)["warnings"].to_string()
+}
+
+#[test]
+fn every_model_says_when_a_state_is_outside_its_range() {
+    // Dranchuk & Abou-Kassem (1975): 0.2 <= Ppr <= 30; Hall & Yarborough (1973): Ppr <= 24
+    // (from memory of secondary sources). Methane at 1000 MPa is Ppr of about 200: Z = 11.8
+    // was printed with exit 0.
+    let (v, code, _) = run_json(&[
+        "state", "--fluid", "methane", "-t", "300 K", "-p", "1000 MPa", "-m", "dak,hy",
+    ]);
+    assert_eq!(code, 3);
+    assert!(warnings_of(&v, "dak").contains("Ppr"), "{v}");
+    assert!(warnings_of(&v, "hy").contains("Ppr"), "{v}");
+    // Span & Wagner (1996): CO2 from the triple point to 1100 K, up to 800 MPa (the paper's
+    // title); Setzmann & Wagner (1991): methane to 625 K (the paper's title).
+    for (fluid, t, p) in [
+        ("co2", "2000 K", "1500 MPa"),
+        ("methane", "1000 K", "10 bar"),
+    ] {
+        let (v, code, _) = run_json(&[
+            "state",
+            "--fluid",
+            fluid,
+            "-t",
+            t,
+            "-p",
+            p,
+            "-m",
+            "reference",
+        ]);
+        assert_eq!(code, 3, "{fluid}");
+        assert!(
+            warnings_of(&v, "reference").contains("published range"),
+            "{v}"
+        );
+    }
+    // Hydrogen at 10 K and 10 bar (below its triple point, 13.957 K, Leachman et al. 2009):
+    // the reference equation gave cp = -412 kJ/(kg K) with exit 0. An impossible heat
+    // capacity is never printed as a number.
+    let (v, code, _) = run_json(&[
+        "state",
+        "--fluid",
+        "hydrogen",
+        "-t",
+        "10 K",
+        "-p",
+        "10 bar",
+        "-m",
+        "reference",
+    ]);
+    assert_eq!(code, 3);
+    let r = result(&v, "reference");
+    assert!(
+        r["cp_j_mol_k"].is_null() && r["cv_j_mol_k"].is_null(),
+        "{r}"
+    );
+    assert!(warnings_of(&v, "reference").contains("impossible"), "{v}");
+    // The truncated virial series holds to about half the critical density (common
+    // practice); hydrogen at 5 K and 1 bar gave Z = 46.8 with exit 0.
+    let (v, code, _) = run_json(&[
+        "state", "--fluid", "hydrogen", "-t", "5 K", "-p", "1 bar", "-m", "virial",
+    ]);
+    assert_eq!(code, 3);
+    assert!(
+        warnings_of(&v, "virial").contains("truncated virial"),
+        "{v}"
+    );
+}
+
+#[test]
+fn a_reference_equation_is_not_warned_about_a_heat_capacity_it_does_not_use() {
+    // Argon at 171 K and 10 bar: inside Tegeler et al. (1999)'s range (83.8058-700 K); the
+    // component table's ideal-gas cp fit (300-5000 K) is not used by the formulation, which
+    // has its own ideal part. The run once ended with exit 3 on that fit's extrapolation.
+    let (v, code, err) = run_json(&[
+        "state",
+        "--fluid",
+        "argon",
+        "-t",
+        "171 K",
+        "-p",
+        "10 bar",
+        "-m",
+        "reference",
+    ]);
+    assert_eq!(code, 0, "{err}");
+    assert_eq!(v["warnings"].as_array().unwrap().len(), 0, "{v}");
+}
+
+#[test]
+fn solids_are_not_reported_as_fluids() {
+    // Ice at 250 K and 1 bar (IAPWS R14-08: the sublimation pressure of ice there is 76 Pa);
+    // dry ice at 200 K and 100 bar and at 5 K and 1 bar (CO2 triple point 216.592 K, 0.518
+    // MPa, Span & Wagner 1996). Every model once reported a liquid.
+    for (fluid, t, p, models) in [
+        ("water", "250 K", "1 bar", "all"),
+        ("co2", "200 K", "100 bar", "pr,srk,reference"),
+        ("co2", "5 K", "1 bar", "pr,vdw"),
+    ] {
+        let (v, code, err) = run_json(&["state", "--fluid", fluid, "-t", t, "-p", p, "-m", models]);
+        assert_eq!(code, 3, "{fluid} {t} {p}: {err}");
+        for r in v["results"].as_array().unwrap() {
+            assert_eq!(r["phase"], "solid", "{fluid} {t} {p}: {r}");
+        }
+        assert!(err.contains("solid") || err.contains("ice"), "{err}");
+    }
+    // Liquid water at 300 K and 100 MPa is below the ice VI melting pressure (about 1 GPa,
+    // IAPWS R14-08) and stays a liquid; CO2 at 250 K and 100 bar is a liquid (common
+    // practice).
+    for (fluid, t, p) in [("water", "300 K", "100 MPa"), ("co2", "250 K", "100 bar")] {
+        let (v, _, _) = run_json(&[
+            "state",
+            "--fluid",
+            fluid,
+            "-t",
+            t,
+            "-p",
+            p,
+            "-m",
+            "reference",
+        ]);
+        assert_eq!(result(&v, "reference")["phase"], "liquid", "{fluid}");
+    }
+    // A mixture: CO2 in cold methane may freeze out below CO2's triple point; solid-fluid
+    // equilibrium is not modelled, and the run says so.
+    let (_, code, err) = run_json(&[
+        "state",
+        "--mix",
+        "methane=0.98,co2=0.02",
+        "-t",
+        "180 K",
+        "-p",
+        "30 bar",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(code, 3);
+    assert!(err.contains("freeze out"), "{err}");
+    // A saturation state below the triple point (methane, 90.6941 K, Setzmann & Wagner 1991)
+    // is metastable, and said to be.
+    let (_, code, err) = run_json(&["saturation", "--fluid", "methane", "-t", "85 K", "-m", "pr"]);
+    assert_eq!(code, 3);
+    assert!(err.contains("metastable"), "{err}");
+}

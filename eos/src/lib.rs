@@ -46,6 +46,7 @@ pub mod phase;
 pub mod properties;
 pub mod pure;
 pub mod residual;
+pub mod solid;
 pub mod state;
 pub mod tp_explicit;
 pub mod translated;

@@ -17,6 +17,9 @@ pub enum Phase {
     SaturatedVapor,
     /// Liquid and vapour together in equilibrium.
     TwoPhase,
+    /// The stable phase is a solid (below the triple point above the sublimation pressure, or
+    /// above the melting pressure, [`crate::solid`]); no model here describes it.
+    Solid,
 }
 
 impl Phase {
@@ -30,6 +33,7 @@ impl Phase {
             Phase::SaturatedLiquid => "saturated-liquid",
             Phase::SaturatedVapor => "saturated-vapor",
             Phase::TwoPhase => "two-phase",
+            Phase::Solid => "solid",
         }
     }
 }

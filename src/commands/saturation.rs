@@ -167,7 +167,10 @@ pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
         .into_iter()
         .filter(|id| !all || build(id, &feed).ok().flatten().is_some())
         .collect();
-    let Answers { results, warnings } = each_model::run(&ids, |id| {
+    let Answers {
+        results,
+        mut warnings,
+    } = each_model::run(&ids, |id| {
         let Some(built) = build(id, &feed)? else {
             return Err(CliError::BadInput(format!(
                 "{} has no {} formulation here; models for it: {}",
@@ -224,6 +227,19 @@ pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
             reference_state: built.reference_state,
         })
     })?;
+    // Below the triple point the liquid-vapour equilibrium a model computes is metastable.
+    if let Some(tt) = crate::solid_check::triple_point(&feed) {
+        for r in results.iter().filter(|r| r.temperature_k < tt) {
+            warnings.push(format!(
+                "{}: the saturation state at {} K is below the triple point of {} ({tt} K): \
+                 there the liquid is metastable and the stable equilibrium is solid-vapour \
+                 (sublimation), which no model here describes",
+                r.model,
+                r.temperature_k,
+                feed.label()
+            ));
+        }
+    }
     Ok(SaturationReport {
         tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
         fluid: feed.label(),

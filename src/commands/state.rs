@@ -11,6 +11,7 @@ use crate::report::state::{
 };
 use crate::units::{self, Density};
 use eos::pure::Spec;
+use eos::solid::SolidCheck;
 use eos::state::RootChoice;
 
 /// The two properties that fix the state, in SI.
@@ -135,9 +136,38 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
             split.join(", ")
         ));
     }
-    let (notes, more) = extrapolation_warnings(&feed, &results);
+    // The solid region is the fluid's, not a model's: said once, in full.
+    for r in &results {
+        if let SolidCheck::Solid(why) | SolidCheck::MaybeSolid(why) =
+            crate::solid_check::pure(&feed, r.temperature_k, r.pressure_pa)
+        {
+            let text = format!(
+                "{why}; no model here describes a solid: the values shown are those of each \
+                 model's metastable fluid"
+            );
+            if !warnings.contains(&text) {
+                warnings.push(text);
+            }
+        }
+    }
+    for r in &results {
+        warnings.extend(
+            r.warnings
+                .iter()
+                .filter(|w| *w != IN_SOLID && *w != MAYBE_SOLID)
+                .map(|w| format!("{}: {w}", r.model)),
+        );
+    }
+    if let Some(r) = results.first() {
+        warnings.extend(crate::solid_check::freeze_out(&feed, r.temperature_k));
+    }
+    // Only the models that take the component table's ideal-gas heat capacity depend on
+    // its fitted range; the reference formulations and IF97 carry their own ideal part.
+    let table_cp = |r: &ModelResult| !models::OWN_IDEAL_GAS.contains(&r.model.as_str());
+    let using: Vec<ModelResult> = results.iter().filter(|r| table_cp(r)).cloned().collect();
+    let (notes, more) = extrapolation_warnings(&feed, &using);
     warnings.extend(more);
-    for r in &mut results {
+    for r in results.iter_mut().filter(|r| table_cp(r)) {
         r.notes.extend(notes.iter().cloned());
     }
     Ok(StateReport {
@@ -247,6 +277,19 @@ fn compute(
     if let Some(phase) = named {
         state.phase = phase;
     }
+    let mut warnings =
+        crate::range::outside(built, feed, state.props.t, state.props.p, state.props.rho);
+    warnings.append(&mut state.warnings);
+    warnings.extend(crate::range::impossible(&state.props));
+    match crate::solid_check::pure(feed, state.props.t, state.props.p) {
+        SolidCheck::Solid(_) => {
+            warnings.push(IN_SOLID.to_string());
+            state.phase = eos::phase::Phase::Solid;
+        }
+        SolidCheck::MaybeSolid(_) => warnings.push(MAYBE_SOLID.to_string()),
+        SolidCheck::Fluid => {}
+    }
+    let cv_withheld = crate::range::withhold_impossible(&mut state.props);
     let pr = &state.props;
     let (dev, of) = ideal_gas_error(asked, pr.z);
     let mut notes = built.notes.clone();
@@ -256,9 +299,6 @@ fn compute(
              the state is mechanically unstable (dP/drho <= 0)"
                 .to_string(),
         );
-    }
-    for w in &state.warnings {
-        notes.push(format!("outside the published range: {w}"));
     }
     if let (Some(m), false) = (helmholtz, matches!(given, Given::Tp(..))) {
         let st =
@@ -293,7 +333,7 @@ fn compute(
         internal_energy_j_mol: pr.u,
         enthalpy_j_kg: pr.h / mm,
         entropy_j_kg_k: pr.s / mm,
-        cv_j_mol_k: Some(pr.cv),
+        cv_j_mol_k: (!cv_withheld).then_some(pr.cv),
         cp_j_mol_k: pr.cp,
         speed_of_sound_m_s: pr.w,
         joule_thomson_k_pa: pr.jt,
@@ -305,6 +345,7 @@ fn compute(
         phases: Vec::new(),
         fugacity: fugacities(feed, &pr.ln_phi, x, pr.p),
         notes,
+        warnings,
     };
     check_finite(&result)?;
     Ok(result)
@@ -402,10 +443,16 @@ fn two_phase(
         ],
         fugacity: fugacities(feed, &vap.ln_phi, &split.y, p),
         notes,
+        warnings: crate::range::outside(built, feed, t, p, split.rho_l),
     };
     check_finite(&result)?;
     Ok(result)
 }
+
+/// A result's own warning in the solid region (the report says why, once).
+const IN_SOLID: &str = "in the solid region: the values are those of the model's metastable fluid";
+/// A result's own warning where a solid may form.
+const MAYBE_SOLID: &str = "a solid may form at this state (see the report's warnings)";
 
 /// The ideal gas's error, in percent of the model's answer, in the quantity the inputs leave
 /// free: (ideal - model) / model. With T and density given that is the pressure

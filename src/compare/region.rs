@@ -80,7 +80,7 @@ pub fn is_near_critical(t: f64, p: f64, tc: f64, pc: f64) -> bool {
 /// Some(false) vapour-like, None above the critical temperature.
 pub fn liquid_side(phase: Phase) -> Option<bool> {
     match phase {
-        Phase::Liquid | Phase::SaturatedLiquid => Some(true),
+        Phase::Liquid | Phase::SaturatedLiquid | Phase::Solid => Some(true),
         Phase::Vapor | Phase::SaturatedVapor => Some(false),
         Phase::Gas | Phase::Supercritical | Phase::TwoPhase => None,
     }

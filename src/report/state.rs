@@ -121,6 +121,9 @@ pub struct ModelResult {
     pub fugacity: Vec<FugacityRow>,
     /// Basis notes (k_ij used or missing).
     pub notes: Vec<String>,
+    /// What the user must know about this model's values: outside its range, in the solid
+    /// region, thermodynamically impossible (each also in the report's warnings).
+    pub warnings: Vec<String>,
 }
 
 /// One phase of a split state.

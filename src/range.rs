@@ -1,0 +1,120 @@
+//! Where a computed state stands against its model's range of validity: every model's range
+//! read from one place (the reference formulations' published ranges through
+//! [`eos::pure::PureFluid::range`], the numeric ranges of [`eos::catalogue`], the virial
+//! series' density limit), and the results no stable fluid can have (a negative heat
+//! capacity, a negative Z, a falling isotherm). A state outside is still computed where the
+//! user asks for it, but carries these warnings next to its values, and the run ends with
+//! exit code 3.
+
+use crate::feed::Feed;
+use crate::models::BuiltModel;
+use eos::constants::R;
+use eos::properties::Properties;
+
+/// How far beyond half the critical density the truncated virial series is still taken as
+/// within its range: none (common practice: the two-term series holds to about rho_c / 2).
+const VIRIAL_MAX_DENSITY_OVER_CRITICAL: f64 = 0.5;
+
+/// The largest |Z - 1| the truncated series is taken to describe: at half the critical
+/// density B rho is about -0.3 to -0.4 for simple gases (B(Tc) is about -Vc, common
+/// practice), so a larger correction means the series is used where it has no meaning.
+const VIRIAL_MAX_CORRECTION: f64 = 0.5;
+
+/// Warnings for a state of `built` at (T, P) with molar density `rho`: outside the model's
+/// published range, or (for the truncated virial equation) beyond its density limit.
+pub fn outside(built: &BuiltModel, feed: &Feed, t: f64, p: f64, rho: f64) -> Vec<String> {
+    let mut out = Vec::new();
+    if let Some(r) = built.pure.as_ref().map(|f| f.range()).filter(|r| r.stated) {
+        if t < r.t_min || t > r.t_max || p > r.p_max {
+            out.push(format!(
+                "outside the published range of {} ({} K to {} K, up to {} MPa): T = {} K, \
+                 P = {} MPa; the value is an extrapolation",
+                built.name,
+                r.t_min,
+                r.t_max,
+                r.p_max / 1e6,
+                round(t),
+                round(p / 1e6)
+            ));
+        }
+    }
+    if built.id == "virial" {
+        let rho_c = pseudo_critical_density(feed);
+        let z = p / (rho * R * t);
+        if rho > VIRIAL_MAX_DENSITY_OVER_CRITICAL * rho_c || (z - 1.0).abs() > VIRIAL_MAX_CORRECTION
+        {
+            out.push(format!(
+                "beyond the range of the truncated virial equation: it holds up to about half \
+                 the critical density, where B rho stays a correction well below 0.5 (common \
+                 practice); here rho / rho_c = {:.3} and Z - 1 = {:.3}",
+                rho / rho_c,
+                z - 1.0
+            ));
+        }
+    }
+    out
+}
+
+/// Warnings for results no mechanically and thermally stable fluid can have, with the values
+/// that are then withheld (set to `None` by [`withhold_impossible`]).
+pub fn impossible(props: &Properties) -> Vec<String> {
+    let mut out = Vec::new();
+    if props.z <= 0.0 {
+        out.push(format!(
+            "thermodynamically impossible: Z = {:.4} is not positive; the model is far outside \
+             its range",
+            props.z
+        ));
+    }
+    if props.cv <= 0.0 {
+        out.push(format!(
+            "thermodynamically impossible: cv = {:.4} J/(mol K) is not positive; cv and the \
+             properties derived from it are withheld",
+            props.cv
+        ));
+    }
+    if let Some(cp) = props.cp.filter(|&cp| cp <= 0.0) {
+        out.push(format!(
+            "thermodynamically impossible: cp = {cp:.4} J/(mol K) is not positive; cp and the \
+             properties derived from it are withheld"
+        ));
+    }
+    out
+}
+
+/// Removes the caloric values that [`impossible`] found impossible: cv, cp and what derives
+/// from them (speed of sound, Joule-Thomson coefficient, isentropic exponent).
+pub fn withhold_impossible(props: &mut Properties) -> bool {
+    let bad_cv = props.cv <= 0.0;
+    let bad_cp = props.cp.is_some_and(|cp| cp <= 0.0);
+    if bad_cv || bad_cp {
+        props.cp = None;
+        props.w = None;
+        props.jt = None;
+        props.isentropic_exponent = None;
+    }
+    bad_cv
+}
+
+/// A critical molar density (mol/m3) of the feed: Kay's rule on the components' critical
+/// volumes, each from its table value or, where none is given, from Zc = 0.29 (a typical
+/// value for light gases, common practice).
+fn pseudo_critical_density(feed: &Feed) -> f64 {
+    let vc: f64 = feed
+        .records
+        .iter()
+        .zip(&feed.mole)
+        .map(|(r, x)| x * r.vc_m3_mol.unwrap_or(0.29 * R * r.tc_k / r.pc_pa))
+        .sum();
+    1.0 / vc
+}
+
+/// A number as a reader would write it: six significant figures, no floating-point dust.
+fn round(v: f64) -> f64 {
+    if v == 0.0 || !v.is_finite() {
+        return v;
+    }
+    let digits = 5 - v.abs().log10().floor() as i32;
+    let scale = 10f64.powi(digits);
+    (v * scale).round() / scale
+}
