@@ -397,3 +397,43 @@ fn solids_are_not_reported_as_fluids() {
     assert_eq!(code, 3);
     assert!(err.contains("metastable"), "{err}");
 }
+
+#[test]
+fn flows_and_vessels_say_when_their_answer_is_not_a_gas_or_not_a_number() {
+    // A gas with 5 % n-pentane at 250 K and 30 bar condenses (a split by the stability test
+    // and flash of the tool, checked against published envelopes in eos/tests/envelope.rs):
+    // the flow command once reported its actual volume as a gas flow, exit 0.
+    let (v, code, err) = run_json(&[
+        "flow",
+        "--mix",
+        "methane=0.8,propane=0.15,n-pentane=0.05",
+        "--flow",
+        "1000 kg/h",
+        "-t",
+        "250 K",
+        "-p",
+        "30 bar",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(code, 3, "{err}");
+    assert!(err.contains("splits into vapour and liquid"), "{err}");
+    let actual = v["results"][0]["volumes"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .find(|x| x["base"] == "actual")
+        .unwrap()
+        .clone();
+    assert_eq!(actual["phase"], "two-phase");
+    // A 1e308 m3 vessel: its mass overflows; it once printed a null mass with exit 0.
+    let out = zf()
+        .args([
+            "vessel", "--fluid", "nitrogen", "--volume", "1e308 m3", "-t", "15 degC",
+        ])
+        .args(["-p", "200 bar", "-m", "pr", "--format", "json"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(2));
+    assert!(out.stdout.is_empty());
+}

@@ -64,7 +64,17 @@ pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
         )));
     }
     let x = feed.mole.clone();
-    let (results, warnings) = per_model(&args.model, &feed, |pair| one(pair, flow, actual, &x))?;
+    let (results, mut warnings) =
+        per_model(&args.model, &feed, |pair| one(pair, flow, actual, &x))?;
+    for r in &results {
+        for v in r.volumes.iter().filter(|v| v.phase == "two-phase") {
+            warnings.push(format!(
+                "{}: the feed splits into vapour and liquid at the {} conditions ({} K, {} Pa): \
+                 the volume there is that of both phases together, not of a gas flow",
+                r.model, v.base, v.temperature_k, v.pressure_pa
+            ));
+        }
+    }
     let (kind, value_si, b) = match flow {
         Flow::Mass(q) => ("mass", q, None),
         Flow::Molar(q) => ("molar", q, None),
@@ -117,6 +127,7 @@ fn one(
             temperature_k: b.t,
             pressure_pa: b.p,
             z: s.z,
+            phase: s.phase.to_string(),
             volume_flow_m3_s: Compared::new(n * v, ni * vi),
         });
     }
@@ -128,6 +139,7 @@ fn one(
             temperature_k: t,
             pressure_pa: p,
             z: s.z,
+            phase: s.phase.to_string(),
             volume_flow_m3_s: Compared::new(n * v, ni * vi),
         });
     }

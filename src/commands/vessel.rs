@@ -178,6 +178,13 @@ fn one(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, CliError> {
     let e = ctx(id);
     let inv = vessel::inventory(m, inp.v, inp.t, inp.p, x).map_err(&e)?;
     let inv_i = vessel::inventory(ig, inp.v, inp.t, inp.p, x).map_err(&e)?;
+    if !(inv.mass.is_finite() && inv_i.mass.is_finite()) {
+        return Err(CliError::BadInput(format!(
+            "model {id}: the contents of {:e} m3 overflow a floating-point number; give the \
+             vessel's real volume",
+            inp.v
+        )));
+    }
     let (vb, base_state) = molar_volume(m, inp.base.t, inp.base.p, x).map_err(&e)?;
     let (vb_i, _) = molar_volume(ig, inp.base.t, inp.base.p, x).map_err(&e)?;
     let mut notes = pair.built.notes.clone();

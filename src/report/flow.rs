@@ -37,8 +37,11 @@ pub struct VolumeAt {
     pub base: String,
     pub temperature_k: f64,
     pub pressure_pa: f64,
-    /// The model's Z there.
+    /// The model's Z there (bulk, for a split state).
     pub z: f64,
+    /// The model's phase there ("two-phase" for a feed that splits: the flow is then not
+    /// a gas flow, and the run warns).
+    pub phase: String,
     pub volume_flow_m3_s: Compared,
 }
 
