@@ -28,8 +28,9 @@ pub fn untrack(path: &Path) {
     pending().retain(|p| p != path);
 }
 
-/// Installs (once) the Ctrl-C handler that removes every temporary output file and exits with
-/// status 130, so an interrupted run leaves no partial file behind.
+/// Installs (once) the handler of Ctrl-C and of the termination signals (SIGTERM, SIGHUP) that
+/// removes every temporary output file and exits with status 130, so an interrupted or killed
+/// run leaves no partial file behind.
 pub fn clean_up_on_interrupt() {
     static ONCE: Once = Once::new();
     ONCE.call_once(|| {
@@ -53,6 +54,58 @@ fn same_file(a: &Path, b: &Path) -> bool {
     }
 }
 
+/// Refuses to write over anything but a regular file (a folder, a symbolic link, a named
+/// pipe, a device, a socket: each named), and over an existing file unless `force`.
+pub fn check_target(path: &Path, force: bool) -> Result<(), CliError> {
+    let shown = path.display();
+    let Ok(meta) = fs::symlink_metadata(path) else {
+        return Ok(());
+    };
+    let ft = meta.file_type();
+    let what = if ft.is_dir() {
+        Some("a folder")
+    } else if ft.is_symlink() {
+        Some("a symbolic link")
+    } else if ft.is_file() {
+        None
+    } else {
+        Some(special_kind(&ft))
+    };
+    if let Some(what) = what {
+        return Err(CliError::BadInput(format!(
+            "--output \"{shown}\" is {what}; zfactor writes only regular files and never \
+             replaces anything else, even with --force; give a file name"
+        )));
+    }
+    if !force {
+        return Err(CliError::BadInput(format!(
+            "\"{shown}\" exists already; pass --force to overwrite it"
+        )));
+    }
+    Ok(())
+}
+
+/// The kind of a file that is neither a regular file, a folder nor a link.
+#[cfg(unix)]
+fn special_kind(ft: &fs::FileType) -> &'static str {
+    use std::os::unix::fs::FileTypeExt;
+    if ft.is_fifo() {
+        "a named pipe (FIFO)"
+    } else if ft.is_char_device() || ft.is_block_device() {
+        "a device file"
+    } else if ft.is_socket() {
+        "a socket"
+    } else {
+        "not a regular file"
+    }
+}
+
+/// The kind of a file that is neither a regular file, a folder nor a link.
+#[cfg(not(unix))]
+fn special_kind(_ft: &fs::FileType) -> &'static str {
+    "not a regular file"
+}
+
 /// Writes `bytes` to `path`. Refuses a path that is one of `inputs`, and an existing file
 /// unless `force`.
 pub fn write(path: &Path, bytes: &[u8], force: bool, inputs: &[&Path]) -> Result<(), CliError> {
@@ -74,16 +127,7 @@ where
             "--output \"{shown}\" is one of the input files; choose another name"
         )));
     }
-    if path.is_dir() {
-        return Err(CliError::BadInput(format!(
-            "--output \"{shown}\" is a folder; give a file name"
-        )));
-    }
-    if path.exists() && !force {
-        return Err(CliError::BadInput(format!(
-            "\"{shown}\" exists already; pass --force to overwrite it"
-        )));
-    }
+    check_target(path, force)?;
     let dir = match path.parent() {
         Some(d) if !d.as_os_str().is_empty() => d.to_path_buf(),
         _ => PathBuf::from("."),

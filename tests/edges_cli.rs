@@ -437,3 +437,92 @@ fn flows_and_vessels_say_when_their_answer_is_not_a_gas_or_not_a_number() {
     assert_eq!(out.status.code(), Some(2));
     assert!(out.stdout.is_empty());
 }
+
+/// Runs a command and returns (exit code, stderr).
+fn run_plain(args: &[&str]) -> (i32, String) {
+    let out = zf().args(args).output().unwrap();
+    (
+        out.status.code().unwrap_or(-1),
+        String::from_utf8_lossy(&out.stderr).to_string(),
+    )
+}
+
+#[test]
+fn no_command_writes_over_a_users_file_without_being_asked() {
+    let dir = tempfile::tempdir().unwrap();
+    let sheet = dir.path().join("sheet.csv");
+    std::fs::write(
+        &sheet,
+        "fluid,T [K],P [bar],density [kg/m3]\nmethane,300,50,35.0\n",
+    )
+    .unwrap();
+    let copy = dir.path().join("sheet.audit.csv");
+    std::fs::write(&copy, "a file of the user's\n").unwrap();
+    // The audit once overwrote its default output name without asking.
+    let (code, err) = run_plain(&["audit", sheet.to_str().unwrap()]);
+    assert_eq!(code, 2, "{err}");
+    assert!(err.contains("--force"), "{err}");
+    assert_eq!(
+        std::fs::read_to_string(&copy).unwrap(),
+        "a file of the user's\n"
+    );
+    let (code, err) = run_plain(&["audit", sheet.to_str().unwrap(), "--force"]);
+    assert!(matches!(code, 0 | 3), "{err}");
+    assert!(std::fs::read_to_string(&copy)
+        .unwrap()
+        .contains("zfactor_model"));
+
+    // --force never replaces what is not a regular file: a symbolic link (its target stays)
+    // or a named pipe.
+    let target = dir.path().join("target.csv");
+    std::fs::write(&target, "kept\n").unwrap();
+    let link = dir.path().join("link.csv");
+    #[cfg(unix)]
+    {
+        std::os::unix::fs::symlink(&target, &link).unwrap();
+        let table = |out: &str| {
+            run_plain(&[
+                "table", "--fluid", "methane", "-t", "300 K", "-p", "10 bar", "-m", "pr", "-f",
+                "csv", "--force", "--output", out,
+            ])
+        };
+        let (code, err) = table(link.to_str().unwrap());
+        assert_eq!(code, 2, "{err}");
+        assert!(err.contains("symbolic link"), "{err}");
+        assert!(std::fs::symlink_metadata(&link)
+            .unwrap()
+            .file_type()
+            .is_symlink());
+        assert_eq!(std::fs::read_to_string(&target).unwrap(), "kept\n");
+        let fifo = dir.path().join("pipe.csv");
+        let made = std::process::Command::new("mkfifo")
+            .arg(&fifo)
+            .status()
+            .unwrap();
+        assert!(made.success());
+        let (code, err) = table(fifo.to_str().unwrap());
+        assert_eq!(code, 2, "{err}");
+        assert!(err.contains("named pipe"), "{err}");
+    }
+
+    // CSV text under an .xlsx name was written silently.
+    let wrong = dir.path().join("basis.xlsx");
+    let (code, err) = run_plain(&[
+        "table",
+        "--fluid",
+        "methane",
+        "-t",
+        "300 K",
+        "-p",
+        "10 bar",
+        "-m",
+        "pr",
+        "-f",
+        "csv",
+        "--output",
+        wrong.to_str().unwrap(),
+    ]);
+    assert_eq!(code, 2, "{err}");
+    assert!(err.contains("--format xlsx"), "{err}");
+    assert!(!wrong.exists());
+}

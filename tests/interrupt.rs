@@ -1,6 +1,6 @@
-//! An interrupted run (Ctrl-C, SIGINT) leaves no partial output file: the output is written
-//! to a temporary file and renamed only when complete, and the interrupt handler removes
-//! any temporary file before the process exits.
+//! An interrupted or killed run (Ctrl-C's SIGINT, SIGTERM, SIGHUP) leaves no partial output
+//! file: the output is written to a temporary file and renamed only when complete, and the
+//! signal handler removes any temporary file before the process exits.
 
 #![cfg(unix)]
 
@@ -9,6 +9,17 @@ use std::time::{Duration, Instant};
 
 #[test]
 fn ctrl_c_leaves_no_file_behind() {
+    leaves_no_file_behind("INT");
+}
+
+#[test]
+fn termination_and_hangup_leave_no_file_behind() {
+    // SIGTERM and SIGHUP once left the hidden temporary file behind.
+    leaves_no_file_behind("TERM");
+    leaves_no_file_behind("HUP");
+}
+
+fn leaves_no_file_behind(signal: &str) {
     let dir = tempfile::tempdir().unwrap();
     let out = dir.path().join("basis.csv");
     // A long design table: 4,000,000 states of a mixture (the largest grid accepted; some
@@ -35,7 +46,7 @@ fn ctrl_c_leaves_no_file_behind() {
         .unwrap();
     std::thread::sleep(Duration::from_millis(800));
     let status = Command::new("kill")
-        .args(["-INT", &child.id().to_string()])
+        .args([&format!("-{signal}"), &child.id().to_string()])
         .status()
         .unwrap();
     assert!(status.success());
@@ -46,11 +57,11 @@ fn ctrl_c_leaves_no_file_behind() {
         }
         assert!(
             start.elapsed() < Duration::from_secs(30),
-            "no exit after SIGINT"
+            "no exit after SIG{signal}"
         );
         std::thread::sleep(Duration::from_millis(20));
     };
-    assert_eq!(code, Some(130), "exit status after an interrupt");
+    assert_eq!(code, Some(130), "exit status after SIG{signal}");
     let left: Vec<_> = std::fs::read_dir(dir.path()).unwrap().collect();
     assert!(left.is_empty(), "files left behind: {left:?}");
 }

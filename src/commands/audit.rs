@@ -73,6 +73,9 @@ pub struct AuditArgs {
     /// in the same folder).
     #[arg(long, short = 'o')]
     pub output: Option<PathBuf>,
+    /// Replace an existing copy (never anything but a regular file).
+    #[arg(long)]
+    pub force: bool,
     /// Output format of the summary.
     #[arg(long, short = 'f', value_enum, default_value = "table")]
     pub format: Format,
@@ -169,7 +172,7 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
         .output
         .clone()
         .unwrap_or_else(|| default_output(&args.file, kind));
-    check_output(&args.file, &output)?;
+    check_output(&args.file, &output, args.force)?;
     if kind_of(&output)? != kind {
         return Err(CliError::BadInput(format!(
             "--output \"{}\" must have the input's kind ({})",

@@ -233,7 +233,7 @@ fn tmp_path(dest: &Path) -> PathBuf {
 }
 
 /// Refuses an output that is the input (by canonical path).
-pub fn check_output(input: &Path, output: &Path) -> Result<(), CliError> {
+pub fn check_output(input: &Path, output: &Path, force: bool) -> Result<(), CliError> {
     let canon_in = std::fs::canonicalize(input).ok();
     let parent = output
         .parent()
@@ -249,7 +249,7 @@ pub fn check_output(input: &Path, output: &Path) -> Result<(), CliError> {
             output.display()
         )));
     }
-    Ok(())
+    crate::output_file::check_target(output, force)
 }
 
 fn out_err(e: impl std::fmt::Display) -> CliError {

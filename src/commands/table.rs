@@ -29,6 +29,9 @@ pub fn run(args: &TableArgs) -> Result<Exit, CliError> {
             "--format xlsx writes a workbook: give --output FILE.xlsx".to_string(),
         ));
     }
+    if let Some(path) = &args.output {
+        check_extension(Path::new(path), args.format)?;
+    }
     let report = build(args)?;
     let bytes = crate::render::grid_table::render(&report, args.format)?;
     match &args.output {
@@ -46,6 +49,39 @@ pub fn run(args: &TableArgs) -> Result<Exit, CliError> {
         eprintln!("caution: {}", crate::CAUTION);
     }
     Ok(super::exit_for(&report.warnings))
+}
+
+/// Refuses an output name whose extension says another format than the one written (a CSV
+/// text named .xlsx opens as a broken workbook).
+fn check_extension(path: &Path, format: TableFormat) -> Result<(), CliError> {
+    let ext = path
+        .extension()
+        .map(|e| e.to_string_lossy().to_ascii_lowercase());
+    let said = match ext.as_deref() {
+        Some("csv") => TableFormat::Csv,
+        Some("json") => TableFormat::Json,
+        Some("md" | "markdown") => TableFormat::Markdown,
+        Some("xlsx" | "xlsm" | "xls") => TableFormat::Xlsx,
+        _ => return Ok(()),
+    };
+    if said == format {
+        return Ok(());
+    }
+    let name = |f: TableFormat| match f {
+        TableFormat::Table => "table",
+        TableFormat::Csv => "csv",
+        TableFormat::Json => "json",
+        TableFormat::Markdown => "markdown",
+        TableFormat::Xlsx => "xlsx",
+    };
+    Err(CliError::BadInput(format!(
+        "--output \"{}\" names a {} file but --format is {}; use --format {} or a name that \
+         matches the format",
+        path.display(),
+        name(said),
+        name(format),
+        name(said)
+    )))
 }
 
 /// Computes the table.
