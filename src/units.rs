@@ -314,6 +314,29 @@ impl Density {
 
 /// Reads a mass or molar density (must be above zero).
 pub fn density(input: &str) -> Result<Density, UnitError> {
+    let d = density_reading(input)?;
+    let beyond = match d {
+        Density::Mass(x) => x > MAX_MASS_DENSITY,
+        Density::Molar(x) => x > MAX_MOLAR_DENSITY,
+    };
+    if beyond {
+        return Err(UnitError {
+            input: input.to_string(),
+            quantity: "density",
+            problem: format!(
+                "no fluid is that dense (limits: {MAX_MASS_DENSITY:e} kg/m3, {MAX_MOLAR_DENSITY:e} mol/m3)"
+            ),
+            accepted: DENSITY_UNITS,
+        });
+    }
+    Ok(d)
+}
+
+/// Reads a density as written, however large: for values that are findings rather than
+/// inputs (a spreadsheet's density computed with a gas constant in the wrong units is the
+/// audit's best catch, not an unreadable cell). Only a non-finite or non-positive value is
+/// refused.
+pub fn density_reading(input: &str) -> Result<Density, UnitError> {
     let (v, unit) = split(input, "density", DENSITY_UNITS)?;
     let u: String = unit
         .chars()
@@ -342,19 +365,8 @@ pub fn density(input: &str) -> Result<Density, UnitError> {
     let raw = match d {
         Density::Mass(x) | Density::Molar(x) => x,
     };
-    let beyond = match d {
-        Density::Mass(x) => x > MAX_MASS_DENSITY,
-        Density::Molar(x) => x > MAX_MOLAR_DENSITY,
-    };
-    if !raw.is_finite() || beyond {
-        return Err(UnitError {
-            input: input.to_string(),
-            quantity: "density",
-            problem: format!(
-                "no fluid is that dense (limits: {MAX_MASS_DENSITY:e} kg/m3, {MAX_MOLAR_DENSITY:e} mol/m3)"
-            ),
-            accepted: DENSITY_UNITS,
-        });
+    if !raw.is_finite() {
+        return Err(too_large(input, "density", DENSITY_UNITS));
     }
     if raw <= 0.0 {
         return Err(UnitError {

@@ -526,3 +526,114 @@ fn no_command_writes_over_a_users_file_without_being_asked() {
     assert!(err.contains("--format xlsx"), "{err}");
     assert!(!wrong.exists());
 }
+
+#[test]
+fn audit_inputs_are_read_as_a_careful_engineer_would() {
+    let dir = tempfile::tempdir().unwrap();
+    let at = |name: &str| dir.path().join(name);
+    let audit = |file: &std::path::Path, extra: &[&str]| {
+        let mut args = vec![
+            "audit",
+            file.to_str().unwrap(),
+            "--format",
+            "json",
+            "--force",
+        ];
+        args.extend_from_slice(extra);
+        let out = zf().args(&args).output().unwrap();
+        (
+            out.status.code().unwrap_or(-1),
+            serde_json::from_slice::<Value>(&out.stdout).unwrap_or(Value::Null),
+            String::from_utf8_lossy(&out.stderr).to_string(),
+        )
+    };
+    // A workbook whose table starts at B3: a text pressure in the second data row is cell
+    // D5 of sheet "data", and the message says so.
+    let book = at("book.xlsx");
+    let mut wb = rust_xlsxwriter::Workbook::new();
+    let ws = wb.add_worksheet();
+    ws.set_name("data").unwrap();
+    for (c, h) in ["fluid", "T [K]", "P [bar]", "density [kg/m3]"]
+        .iter()
+        .enumerate()
+    {
+        ws.write_string(2, 1 + c as u16, *h).unwrap();
+    }
+    for r in [3u32, 4] {
+        ws.write_string(r, 1, "nitrogen").unwrap();
+        ws.write_number(r, 2, 300.0).unwrap();
+        ws.write_number(r, 4, 11.3).unwrap();
+    }
+    ws.write_number(3, 3, 10.0).unwrap();
+    ws.write_string(4, 3, "ten").unwrap();
+    wb.save(&book).unwrap();
+    let (_, v, _) = audit(&book, &["-m", "ideal"]);
+    assert_eq!(v["bad"][0]["row"], 5, "{v}");
+    assert!(
+        v["bad"][0]["column"].as_str().unwrap().starts_with("D "),
+        "{v}"
+    );
+
+    // A CSV file renamed .xlsx: said so, not a zip error.
+    let fake = at("fake.xlsx");
+    std::fs::write(
+        &fake,
+        "fluid,T [K],P [bar],density [kg/m3]\nmethane,300,50,35\n",
+    )
+    .unwrap();
+    let (code, _, err) = audit(&fake, &[]);
+    assert_eq!(code, 2);
+    assert!(err.contains("looks like CSV text"), "{err}");
+    // A header and no rows is an error, and leaves no copy.
+    let empty = at("empty.csv");
+    std::fs::write(&empty, "fluid,T [K],P [bar],density [kg/m3]\n").unwrap();
+    let (code, _, err) = audit(&empty, &[]);
+    assert_eq!(code, 2, "{err}");
+    assert!(err.contains("no rows"), "{err}");
+    assert!(!at("empty.audit.csv").exists());
+
+    // Fractions that sum to 0.95 are refused with their sum (they were scaled silently);
+    // a density computed with R in m3 atm/(mol K) (8.2057366e-5, CODATA R over 101325 Pa)
+    // is a finding with its cause, not an unreadable cell. The sheet's density is the
+    // reference equation's times R / 8.2057366e-5.
+    let (v, _, _) = run_json(&[
+        "state",
+        "--fluid",
+        "methane",
+        "-t",
+        "300 K",
+        "-p",
+        "50 bar",
+        "-m",
+        "reference",
+    ]);
+    let rho = result(&v, "reference")["mass_density_kg_m3"]
+        .as_f64()
+        .unwrap();
+    let wrong = rho * R / 8.205_736_6e-5;
+    let sheet = at("sheet.csv");
+    std::fs::write(
+        &sheet,
+        format!(
+            "fluid,T [K],P [bar],density\n\"methane=0.9,ethane=0.05\",300,50,35\n\
+             methane,300,50,{wrong}\n"
+        ),
+    )
+    .unwrap();
+    let (_, v, _) = audit(&sheet, &[]);
+    let bad = v["bad"].as_array().unwrap();
+    assert_eq!(bad.len(), 1, "{v}");
+    assert_eq!(bad[0]["row"], 2);
+    assert!(
+        bad[0]["message"].as_str().unwrap().contains("sum to 0.95"),
+        "{v}"
+    );
+    let flagged = v["flagged"].as_array().unwrap();
+    assert_eq!(flagged.len(), 1, "{v}");
+    assert!(
+        flagged[0]["reconciling_causes"]
+            .to_string()
+            .contains("m3 atm/(mol K)"),
+        "{v}"
+    );
+}

@@ -292,6 +292,13 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
         Ok(sink)
     });
     let sink = written?;
+    if report.rows_read == 0 {
+        sink.abandon();
+        return Err(CliError::BadInput(format!(
+            "\"{}\" has a header and no rows: nothing to audit",
+            args.file.display()
+        )));
+    }
     sink.finish()?;
     if report.rows_flagged > 0 {
         report.warnings.push(format!(

@@ -78,6 +78,7 @@ impl Source {
                 })
             }
             Kind::Xlsx => {
+                not_a_workbook(path).map_err(err)?;
                 let mut wb: Xlsx<_> = open_workbook(path).map_err(|e| err(format!("{e}")))?;
                 let names = wb.sheet_names();
                 let name = match sheet {
@@ -190,6 +191,30 @@ impl Source {
         }
         out
     }
+}
+
+/// Ok when the file starts as an .xlsx workbook does (a zip archive, "PK\x03\x04"); else a
+/// message that says what it looks like instead (a CSV file renamed .xlsx is the usual case).
+fn not_a_workbook(path: &Path) -> Result<(), String> {
+    use std::io::Read;
+    let mut head = [0u8; 512];
+    let n = File::open(path)
+        .and_then(|mut f| f.read(&mut head))
+        .map_err(|e| e.to_string())?;
+    let head = &head[..n];
+    if head.starts_with(b"PK\x03\x04") {
+        return Ok(());
+    }
+    let text = std::str::from_utf8(head).is_ok_and(|t| !t.contains('\0'));
+    Err(if text && head.contains(&b',') {
+        "this is not an .xlsx workbook; it looks like CSV text: give it a .csv name".to_string()
+    } else if text {
+        "this is not an .xlsx workbook; it looks like plain text".to_string()
+    } else {
+        "this is not an .xlsx workbook (an .xlsx file is a zip archive; this one is not: an \
+         old .xls workbook must be saved as .xlsx first)"
+            .to_string()
+    })
 }
 
 /// Text of a workbook cell; numbers in their shortest exact form.

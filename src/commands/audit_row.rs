@@ -368,10 +368,24 @@ fn model_for(asked: &str, feed: &Feed) -> String {
     }
 }
 
-/// A fluid cell: a component name, or "name=fraction,..." pairs (normalised to sum to one).
+/// How far a row's fractions may sum from one (or 100 %) and be scaled to it: the rounding
+/// of fractions printed to three or four digits (common practice). A larger miss is a bad
+/// row that quotes the sum.
+const AUDIT_SUM_TOLERANCE: f64 = 1e-3;
+
+/// A fluid cell: a component name, or "name=fraction,..." pairs (scaled to sum to one when
+/// they miss it by rounding only, refused otherwise).
 fn read_fluid(text: &str, basis: Basis) -> Result<Feed, String> {
     if text.contains('=') || text.contains(':') {
-        feed::parse_mix(text, basis, true).map_err(|e| e.to_string())
+        let feed = feed::parse_mix(text, basis, true).map_err(|e| e.to_string())?;
+        let full = if feed.percent { 100.0 } else { 1.0 };
+        match feed.normalized_from {
+            Some(sum) if (sum - full).abs() > AUDIT_SUM_TOLERANCE * full => Err(format!(
+                "the fractions of \"{text}\" sum to {sum}, not {full}: more than rounding \
+                 (0.1 %); correct the composition"
+            )),
+            _ => Ok(feed),
+        }
     } else {
         let args = crate::cli::FluidArgs {
             fluid: Some(text.to_string()),
@@ -555,7 +569,7 @@ fn read_and_compute(
         }
         Quantity::Density => {
             let v = with_unit(vc, Some("kg/m3"))?;
-            units::density(&v)
+            units::density_reading(&v)
                 .map(|d| d.molar(mm) * mm)
                 .map_err(|e| bad(vc, e.to_string()))?
         }

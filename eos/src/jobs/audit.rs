@@ -228,10 +228,12 @@ impl Cause {
 
 /// Wrong gas constants seen in sheets: numbers of other units or of one gas, used where
 /// R in J/(mol K) belongs (values from memory of the usual unit tables).
-pub const WRONG_GAS_CONSTANTS: [(f64, &str); 8] = [
+pub const WRONG_GAS_CONSTANTS: [(f64, &str); 10] = [
     (8_314.462_618, "J/(kmol K)"),
     (0.083_144_626, "L bar/(mol K)"),
     (0.082_057_366, "L atm/(mol K)"),
+    (8.205_736_6e-5, "m3 atm/(mol K)"),
+    (8.314_462_6e-5, "m3 bar/(mol K)"),
     (82.057_366, "cm3 atm/(mol K)"),
     (10.731_577, "psia ft3/(lbmol R)"),
     (1.987_204, "cal/(mol K)"),
