@@ -637,3 +637,50 @@ fn audit_inputs_are_read_as_a_careful_engineer_would() {
         "{v}"
     );
 }
+
+#[test]
+fn if97_answers_on_the_boundaries_of_its_range() {
+    // IAPWS R7-97(2012): 273.15-1073.15 K up to 100 MPa, and 1073.15-2273.15 K up to 50 MPa,
+    // boundaries included. These states were refused because a numerical derivative stepped
+    // past a boundary; at 1073.15 K and 50 MPa (regions 2 and 5 meet) cv came out negative.
+    // Checked against IAPWS-95 inside its range (IF97's stated consistency: well within 1 %
+    // in cp and w away from the critical point).
+    for (t, p) in [
+        ("300 K", "100 MPa"),
+        ("273.16 K", "1 bar"),
+        ("1073.15 K", "100 MPa"),
+        ("1073.15 K", "50 MPa"),
+        ("2273.15 K", "10 bar"),
+        ("2273.15 K", "50 MPa"),
+    ] {
+        let (v, _, err) = run_json(&[
+            "state",
+            "--fluid",
+            "water",
+            "-t",
+            t,
+            "-p",
+            p,
+            "-m",
+            "if97,reference",
+        ]);
+        let a = result(&v, "if97");
+        assert!(a["cp_j_mol_k"].as_f64().is_some(), "{t} {p}: {a} {err}");
+        if t == "2273.15 K" {
+            continue; // beyond IAPWS-95's 1273 K
+        }
+        let b = result(&v, "reference");
+        for key in ["z", "cp_j_mol_k", "speed_of_sound_m_s"] {
+            let (x, y) = (a[key].as_f64().unwrap(), b[key].as_f64().unwrap());
+            assert!((x / y - 1.0).abs() < 5e-3, "{t} {p} {key}: {x} vs {y}");
+        }
+        let (x, y) = (
+            a["joule_thomson_k_pa"].as_f64().unwrap(),
+            b["joule_thomson_k_pa"].as_f64().unwrap(),
+        );
+        assert!(
+            (x - y).abs() < 0.02 * y.abs() + 1e-9,
+            "{t} {p} JT: {x} vs {y}"
+        );
+    }
+}

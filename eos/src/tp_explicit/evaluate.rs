@@ -34,6 +34,31 @@ fn ideal_part(
     })
 }
 
+/// df/dx at x by a central difference of step `step`; where one side lies outside the
+/// model's range (a state on its boundary, such as IF97 at 100 MPa or 273.15 K), by a
+/// one-sided difference from `fx` = f(x) towards the side that is inside; and where the two
+/// one-sided quotients disagree by more than a factor of two (x on a boundary between two
+/// of the model's equations, such as IF97's regions 2 and 5 at 1073.15 K, where f jumps),
+/// by the smaller one, which stays on one equation.
+fn derivative(f: &dyn Fn(f64) -> Result<f64>, x: f64, step: f64, fx: f64) -> Result<f64> {
+    match (f(x + step), f(x - step)) {
+        (Ok(a), Ok(b)) => {
+            let (fwd, bwd) = ((a - fx) / step, (fx - b) / step);
+            let agree = fwd * bwd > 0.0 && (fwd / bwd).abs() <= 2.0 && (bwd / fwd).abs() <= 2.0;
+            Ok(if agree {
+                (a - b) / (2.0 * step)
+            } else if fwd.abs() < bwd.abs() {
+                fwd
+            } else {
+                bwd
+            })
+        }
+        (Ok(a), Err(_)) => Ok((a - fx) / step),
+        (Err(_), Ok(b)) => Ok((fx - b) / step),
+        (Err(e), Err(_)) => Err(e),
+    }
+}
+
 /// (h_dep, s_dep, ln phi of the mixture) at one state.
 fn departures(
     model: &dyn TpModel,
@@ -85,18 +110,32 @@ pub fn evaluate(
     let s = R * (ig.s_r - (p / P_REF).ln() - mixing) + s_dep;
 
     let (dt, dp) = (STEP * t, STEP * p);
-    let v = |t: f64, p: f64| -> Result<f64> { Ok(model.point(t, p, x, root)?.z * R * t / p) };
-    let dvdt = (v(t + dt, p)? - v(t - dt, p)?) / (2.0 * dt);
-    let dvdp = (v(t, p + dp)? - v(t, p - dp)?) / (2.0 * dp);
-    let hd = |t: f64| -> Result<f64> {
-        let ig = ideal_part(model, t, x, model.point(t, p, x, root)?.ideal);
-        Ok(R * ig.h_r + departures(model, t, p, x, root)?.0)
-    };
-    let cp_num = (hd(t + dt)? - hd(t - dt)?) / (2.0 * dt);
     let vol = 1.0 / rho;
+    let v = |t: f64, p: f64| -> Result<f64> { Ok(model.point(t, p, x, root)?.z * R * t / p) };
+    let dvdt_num = derivative(&|t| v(t, p), t, dt, vol)?;
+    let (cp_num, cv, dvdp, dvdt) = match pt.caloric {
+        // The model's own heat capacities and speed of sound (IF97's region equations):
+        // (dv/dP)_T from w^2 = -(cp/cv) v^2 / (M (dv/dP)_T), and |(dv/dT)_P| from
+        // cp - cv = -T (dv/dT)^2 / (dv/dP)_T, its sign from the difference quotient (which
+        // may straddle a region boundary, where its size would be wrong).
+        Some(c) => {
+            let dvdp = -(c.cp / c.cv) * vol * vol / (m * c.w * c.w);
+            let size = (-(c.cp - c.cv) * dvdp / t).max(0.0).sqrt();
+            (c.cp, c.cv, dvdp, size.copysign(dvdt_num))
+        }
+        None => {
+            let dvdt = dvdt_num;
+            let dvdp = derivative(&|p| v(t, p), p, dp, vol)?;
+            let hd = |t: f64| -> Result<f64> {
+                let ig = ideal_part(model, t, x, model.point(t, p, x, root)?.ideal);
+                Ok(R * ig.h_r + departures(model, t, p, x, root)?.0)
+            };
+            let cp = derivative(&hd, t, dt, h)?;
+            (cp, cp + t * dvdt * dvdt / dvdp, dvdp, dvdt)
+        }
+    };
     let stable = dvdp < 0.0;
     let cp = stable.then_some(cp_num);
-    let cv = cp_num + t * dvdt * dvdt / dvdp;
     let w = cp.and_then(|cp| {
         let w2 = -(cp / cv) * vol * vol / (m * dvdp);
         (w2 > 0.0).then(|| w2.sqrt())

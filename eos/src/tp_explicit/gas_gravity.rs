@@ -71,6 +71,7 @@ impl TpModel for GravityModel {
             s_dep: None,
             ideal: None,
             warnings: g.warnings.iter().map(|w| w.to_string()).collect(),
+            caloric: None,
         })
     }
 

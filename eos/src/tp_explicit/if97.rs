@@ -11,7 +11,7 @@
 //! away from the critical point and within 0.86 % within 5 % of Tc and 30 % of Pc; enthalpy
 //! within 3.9 kJ/kg (the largest near the critical point).
 
-use super::{TpModel, TpPoint};
+use super::{Caloric, TpModel, TpPoint};
 use crate::component::Component;
 use crate::constants::{P_REF, R};
 use crate::error::Result;
@@ -75,6 +75,11 @@ impl TpModel for If97Model {
                 s_r: M_WATER * s_ig_ref_p / R,
             }),
             warnings: Vec::new(),
+            caloric: Some(Caloric {
+                cp: M_WATER * st.cp,
+                cv: M_WATER * st.cv,
+                w: st.w,
+            }),
         })
     }
 

@@ -39,6 +39,7 @@ impl TpModel for LeeKeslerModel {
             s_dep: Some(s.s_dep),
             ideal: None,
             warnings: Vec::new(),
+            caloric: None,
         })
     }
 

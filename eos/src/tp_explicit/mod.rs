@@ -45,6 +45,18 @@ pub struct TpPoint {
     pub ideal: Option<IdealGasValues>,
     /// Inputs outside the model's published range (the value is still returned).
     pub warnings: Vec<String>,
+    /// The model's own cp, cv and speed of sound, where it has analytic ones (IF97); else
+    /// they come from numerical derivatives.
+    pub caloric: Option<Caloric>,
+}
+
+/// Heat capacities (J/(mol K)) and speed of sound (m/s) of a state, from a model's own
+/// equations.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Caloric {
+    pub cp: f64,
+    pub cv: f64,
+    pub w: f64,
 }
 
 /// A model that gives Z (and possibly departure functions) at (T, P).
