@@ -210,11 +210,27 @@ pub fn roots(f: &Formulation, t: f64, p: f64) -> ([f64; 2], usize) {
             None => 2.0 * f.rhoc,
         };
         if let Some(l) = solve_branch(f, t, p, Branch::Liquid, start.max(1.01 * f.rhoc)) {
-            if n == 0 || (l - out[0]).abs() > 1e-9 * l {
+            let spurious = dome_middle(f, t).is_some_and(|mid| l < mid);
+            if !spurious && (n == 0 || (l - out[0]).abs() > 1e-9 * l) {
                 out[n] = l;
                 n += 1;
             }
         }
     }
     (out, n)
+}
+
+/// The density halfway between the saturated vapour and liquid at T (from the ancillary
+/// equations; `None` above Tc or without them). A "liquid" root below it lies in the middle
+/// of the two-phase dome, on one of the spurious loops that multiparameter equations of state
+/// have there (Span, *Multiparameter Equations of State*, Springer 2000, ch. 3); it is no
+/// phase. Found at 597 K and about 10 bar in IAPWS-95 (a root at 343 kg/m3 with a positive
+/// slope and the lowest Gibbs energy), where it ended a compressor calculation.
+fn dome_middle(f: &Formulation, t: f64) -> Option<f64> {
+    if t >= f.tc {
+        return None;
+    }
+    let liquid = f.rhol_anc.as_ref()?.reduced(t, f.tc) * f.rhoc;
+    let vapour = f.rhov_anc.as_ref()?.reduced(t, f.tc) * f.rhoc;
+    Some(0.5 * (liquid + vapour))
 }
