@@ -717,3 +717,18 @@ fn steam_compression_answers_at_every_efficiency() {
     }
     assert!((last - 721.2).abs() < 1.5, "{last}");
 }
+
+#[test]
+fn an_envelope_branch_that_leaves_the_physical_range_stops_without_a_number() {
+    // Methane-water with Peng-Robinson and no k_ij: the dew branch climbs without bound
+    // (it once printed a cricondenbar of about 1,000,000 bar). 1000 MPa is the top of the
+    // reference formulations' ranges (IAPWS-95; Setzmann & Wagner 1991).
+    let (v, code, err) = run_json(&["envelope", "--mix", "methane=0.5,water=0.5", "-m", "pr"]);
+    assert_eq!(code, 3, "{err}");
+    assert!(v["cricondenbar"].is_null(), "{}", v["cricondenbar"]);
+    assert_eq!(v["stop"], "left the physical range");
+    for p in v["points"].as_array().unwrap() {
+        assert!(p["pressure_pa"].as_f64().unwrap() <= 1.2e9, "{p}");
+    }
+    assert!(err.contains("1000 MPa"), "{err}");
+}

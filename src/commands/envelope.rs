@@ -251,8 +251,28 @@ fn mixture(
         });
     }
     report.critical_point = env.critical.map(|c| tp(c.t, c.p));
-    report.cricondenbar = Some(tp(env.cricondenbar.t, env.cricondenbar.p));
-    report.cricondentherm = Some(tp(env.cricondentherm.t, env.cricondentherm.p));
+    // An extreme at the end of a trace that did not close is only where the trace stopped:
+    // no number is given for it.
+    let at_end = |e: &eos::equilibrium::envelope::TP| {
+        env.stop != EnvelopeStop::Complete
+            && env
+                .points
+                .last()
+                .is_some_and(|l| (l.p - e.p).abs() <= 1e-6 * e.p && (l.t - e.t).abs() <= 1e-6 * e.t)
+    };
+    let extreme = |e: &eos::equilibrium::envelope::TP, name: &str, warnings: &mut Vec<String>| {
+        if at_end(e) {
+            warnings.push(format!(
+                "no {name} is reported: the highest point of the part traced is where the \
+                 trace stopped, not an extreme of the envelope"
+            ));
+            None
+        } else {
+            Some(tp(e.t, e.p))
+        }
+    };
+    report.cricondenbar = extreme(&env.cricondenbar, "cricondenbar", &mut report.warnings);
+    report.cricondentherm = extreme(&env.cricondentherm, "cricondentherm", &mut report.warnings);
     report.stop = match env.stop {
         EnvelopeStop::Complete => "complete".to_string(),
         EnvelopeStop::MaxPoints => {
@@ -272,6 +292,17 @@ fn mixture(
                 at.p / units::PA_PER_BAR
             ));
             "step failed".to_string()
+        }
+        EnvelopeStop::LeftPhysicalRange(at) => {
+            report.warnings.push(format!(
+                "the trace stopped at T = {:.3} K, P = {:.1} bar: the branch climbs beyond {} \
+                 MPa, where no model here describes a fluid (an artefact of the model, often of \
+                 a missing k_ij or a liquid-liquid split); the envelope beyond it is not shown",
+                at.t,
+                at.p / units::PA_PER_BAR,
+                eos::equilibrium::envelope::P_PHYSICAL_MAX / 1e6
+            ));
+            "left the physical range".to_string()
         }
     };
     if env.critical.is_none() {

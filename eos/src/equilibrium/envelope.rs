@@ -90,7 +90,15 @@ pub enum EnvelopeStop {
     MaxPoints,
     /// No step could be corrected, even after halving, at this point.
     StepFailed(TP),
+    /// The branch left the physical range (above [`P_PHYSICAL_MAX`]) at this point: it
+    /// describes no real fluid there (a methane-water envelope of a cubic climbs to 100 GPa).
+    LeftPhysicalRange(TP),
 }
+
+/// The highest pressure a traced branch may reach, Pa: 1000 MPa, the top of the reference
+/// formulations' ranges (IAPWS R6-95(2018); Setzmann & Wagner 1991); beyond it no model here
+/// describes a fluid, and an envelope that climbs there follows an artefact of its model.
+pub const P_PHYSICAL_MAX: f64 = 1e9;
 
 /// A traced phase envelope.
 #[derive(Debug, Clone, PartialEq)]
@@ -284,6 +292,10 @@ pub fn trace(model: &dyn Model, z: &[f64], options: EnvelopeOptions) -> Result<E
         }
         if !(x[n].exp() > 1.0 && x[n].exp() < 1e5) {
             stop = EnvelopeStop::StepFailed(here);
+            break;
+        }
+        if p > P_PHYSICAL_MAX {
+            stop = EnvelopeStop::LeftPhysicalRange(TP { t: x[n].exp(), p });
             break;
         }
     }
