@@ -469,6 +469,14 @@ fn from_flash(
             r.molar_density_mol_m3 = s.rho;
             r.mass_density_kg_m3 = s.rho * mm;
             r.phases = vec![phase(feed, s.phase.to_string(), 1.0, 1.0, &pr, z)];
+            if s.tm_min < 0.0 {
+                r.notes.push(format!(
+                    "on the phase boundary: the stability test finds the feed unstable only by \
+                     tm = {:.2e}, below the solvers' resolution, and no split with a finite \
+                     amount of a second phase exists; reported as one phase",
+                    s.tm_min
+                ));
+            }
         }
         FlashResult::TwoPhase(s) => {
             let vap = evaluate(m, s.t, s.rho_v, &s.y);
