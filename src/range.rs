@@ -20,6 +20,58 @@ const VIRIAL_MAX_DENSITY_OVER_CRITICAL: f64 = 0.5;
 /// practice), so a larger correction means the series is used where it has no meaning.
 const VIRIAL_MAX_CORRECTION: f64 = 0.5;
 
+/// What a model's range and the fluid's solid phase say about states, prepared once for a
+/// (model, feed) pair so that a grid of any size checks each state cheaply.
+pub struct StateCheck {
+    range: Option<eos::pure::FluidRange>,
+    virial_rho_c: Option<f64>,
+    solid: Option<(eos::solid::SolidLines, String)>,
+}
+
+impl StateCheck {
+    /// The checks of `built` for `feed`.
+    pub fn new(built: &BuiltModel, feed: &Feed) -> Self {
+        StateCheck {
+            range: built.pure.as_ref().map(|f| f.range()).filter(|r| r.stated),
+            virial_rho_c: (built.id == "virial").then(|| pseudo_critical_density(feed)),
+            solid: crate::solid_check::pure_lines(feed),
+        }
+    }
+
+    /// A short flag for a table's flag column, or `None` for a state inside the model's
+    /// range and outside the solid region: "outside range", "solid", "solid may form",
+    /// joined by "; ".
+    pub fn flag(&self, t: f64, p: f64, rho: f64) -> Option<String> {
+        let mut f = Vec::new();
+        if self
+            .range
+            .is_some_and(|r| t < r.t_min || t > r.t_max || p > r.p_max)
+        {
+            f.push("outside range");
+        }
+        if let Some(rho_c) = self.virial_rho_c {
+            if beyond_virial(t, p, rho, rho_c) {
+                f.push("outside range");
+            }
+        }
+        if let Some((l, name)) = &self.solid {
+            match eos::solid::check(l, name, t, p) {
+                eos::solid::SolidCheck::Solid(_) => f.push("solid"),
+                eos::solid::SolidCheck::MaybeSolid(_) => f.push("solid may form"),
+                eos::solid::SolidCheck::Fluid => {}
+            }
+        }
+        f.dedup();
+        (!f.is_empty()).then(|| f.join("; "))
+    }
+}
+
+/// True when the truncated virial series is used beyond its range.
+fn beyond_virial(t: f64, p: f64, rho: f64, rho_c: f64) -> bool {
+    let z = p / (rho * R * t);
+    rho > VIRIAL_MAX_DENSITY_OVER_CRITICAL * rho_c || (z - 1.0).abs() > VIRIAL_MAX_CORRECTION
+}
+
 /// Warnings for a state of `built` at (T, P) with molar density `rho`: outside the model's
 /// published range, or (for the truncated virial equation) beyond its density limit.
 pub fn outside(built: &BuiltModel, feed: &Feed, t: f64, p: f64, rho: f64) -> Vec<String> {
@@ -41,8 +93,7 @@ pub fn outside(built: &BuiltModel, feed: &Feed, t: f64, p: f64, rho: f64) -> Vec
     if built.id == "virial" {
         let rho_c = pseudo_critical_density(feed);
         let z = p / (rho * R * t);
-        if rho > VIRIAL_MAX_DENSITY_OVER_CRITICAL * rho_c || (z - 1.0).abs() > VIRIAL_MAX_CORRECTION
-        {
+        if beyond_virial(t, p, rho, rho_c) {
             out.push(format!(
                 "beyond the range of the truncated virial equation: it holds up to about half \
                  the critical density, where B rho stays a correction well below 0.5 (common \

@@ -16,22 +16,24 @@ fn lines(r: &ComponentRecord) -> Option<solid::SolidLines> {
     solid::lines(&r.id, t, p)
 }
 
+/// The solid curves of a pure feed with its name, where any are known; `None` for mixtures.
+pub fn pure_lines(feed: &Feed) -> Option<(solid::SolidLines, String)> {
+    let r = feed.records.first().filter(|_| feed.is_pure())?;
+    lines(r).map(|l| (l, r.name.clone()))
+}
+
 /// Where a pure feed at (T, P) stands against its solid phase; mixtures are always
 /// [`SolidCheck::Fluid`] here (see [`freeze_out`]).
 pub fn pure(feed: &Feed, t: f64, p: f64) -> SolidCheck {
-    match (feed.is_pure(), feed.records.first().and_then(|r| lines(r))) {
-        (true, Some(l)) => solid::check(&l, &feed.records[0].name, t, p),
-        _ => SolidCheck::Fluid,
+    match pure_lines(feed) {
+        Some((l, name)) => solid::check(&l, &name, t, p),
+        None => SolidCheck::Fluid,
     }
 }
 
 /// The triple-point temperature (K) of a pure feed, where known.
 pub fn triple_point(feed: &Feed) -> Option<f64> {
-    feed.records
-        .first()
-        .filter(|_| feed.is_pure())
-        .and_then(|r| lines(r))
-        .map(|l| l.t_triple)
+    pure_lines(feed).map(|(l, _)| l.t_triple)
 }
 
 /// Cautions for the components of a mixture at T below their triple-point temperature: they

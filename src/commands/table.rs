@@ -13,6 +13,7 @@ use crate::exit::Exit;
 use crate::feed::{self, Feed};
 use crate::models::{self, BuiltModel};
 use crate::phase_screen::{self, PhaseScreen};
+use crate::range::StateCheck;
 use crate::report::table::{
     ComponentSource, TableBasis, TableColumn, TableReport, TableRow, UnitNote,
 };
@@ -114,13 +115,14 @@ pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
         None
     };
     let total = t.len() * p.len();
+    let check = StateCheck::new(&built, &feed);
     let bar = crate::progress::bar(total, "computing");
     let (rows, method) = match &batch {
         Some(b) => {
             let z = crate::zgrid::z_grid(b, &t, &p, |n| crate::progress::inc(&bar, n))
                 .map_err(|e| from_eos(&format!("model {}", built.id), e))?;
             (
-                rows_from_z(&sel, &feed, &t, &p, &z),
+                rows_from_z(&sel, &feed, &check, &t, &p, &z),
                 "Z from the cubic in Z for each state (batch kernel, root of lowest Gibbs \
                  energy); density from P/(Z R T)"
                     .to_string(),
@@ -130,7 +132,7 @@ pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
             let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
             let screen = PhaseScreen::new(&built, &feed.mole, &t, total, p_low);
             (
-                rows_from_states(&sel, &built, &feed, &t, &p, &screen, &bar),
+                rows_from_states(&sel, &built, &feed, &check, &t, &p, &screen, &bar),
                 format!(
                     "each state from (T, P) with the root of lowest Gibbs energy; {} (a state \
                      that splits into two phases is flagged); every property from the model",
@@ -142,6 +144,14 @@ pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
     crate::progress::finish(bar);
     let failed = rows.iter().filter(|r| r.error.is_some()).count();
     let mut warnings = Vec::new();
+    let flagged = rows.iter().filter(|r| r.flag.is_some()).count();
+    if flagged > 0 {
+        warnings.push(format!(
+            "{flagged} of {} states are outside the model's range or in the solid region (see \
+             the flag column): their values are extrapolations",
+            rows.len()
+        ));
+    }
     if failed > 0 {
         warnings.push(format!(
             "{failed} of {} states could not be computed (see their error)",
@@ -165,7 +175,14 @@ pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
     })
 }
 
-fn rows_from_z(sel: &Selection, feed: &Feed, t: &[f64], p: &[f64], z: &[f64]) -> Vec<TableRow> {
+fn rows_from_z(
+    sel: &Selection,
+    feed: &Feed,
+    check: &StateCheck,
+    t: &[f64],
+    p: &[f64],
+    z: &[f64],
+) -> Vec<TableRow> {
     let mm = feed.molar_mass();
     let np = p.len();
     let mut rows = Vec::with_capacity(z.len());
@@ -188,6 +205,9 @@ fn rows_from_z(sel: &Selection, feed: &Feed, t: &[f64], p: &[f64], z: &[f64]) ->
                         }
                     })
                     .collect(),
+                flag: ok
+                    .then(|| check.flag(ti, pj, pj / (zv * eos::constants::R * ti)))
+                    .flatten(),
                 error: (!ok).then(|| format!("no physical root (Z = {zv})")),
             });
         }
@@ -195,10 +215,12 @@ fn rows_from_z(sel: &Selection, feed: &Feed, t: &[f64], p: &[f64], z: &[f64]) ->
     rows
 }
 
+#[allow(clippy::too_many_arguments)]
 fn rows_from_states(
     sel: &Selection,
     built: &BuiltModel,
     feed: &Feed,
+    check: &StateCheck,
     t: &[f64],
     p: &[f64],
     screen: &PhaseScreen,
@@ -222,6 +244,7 @@ fn rows_from_states(
                     pressure_pa: pj,
                     phase: sel.phase.then_some("two-phase"),
                     values: vec![None; sel.properties.len()],
+                    flag: None,
                     error: Some(format!(
                         "model {}: the mixture splits into vapour ({beta:.4} mol/mol) and \
                          liquid here; single-phase values would be meaningless (see `zfactor \
@@ -240,6 +263,11 @@ fn rows_from_states(
                         .iter()
                         .map(|pr| table_property::from_state(pr, &s.props))
                         .collect(),
+                    flag: if s.warnings.is_empty() {
+                        check.flag(ti, pj, s.props.rho)
+                    } else {
+                        Some("outside range".to_string())
+                    },
                     error: None,
                 },
                 Err(e) => TableRow {
@@ -247,6 +275,7 @@ fn rows_from_states(
                     pressure_pa: pj,
                     phase: None,
                     values: vec![None; sel.properties.len()],
+                    flag: None,
                     error: Some(format!("model {}: {e}", built.id)),
                 },
             };

@@ -40,12 +40,21 @@ fn display_header(r: &TableReport) -> Vec<String> {
     for c in &r.columns {
         h.push(format!("{} [{}]", c.name, display(c.key).0));
     }
+    if flags(r) {
+        h.push("flag".to_string());
+    }
     h
+}
+
+/// True when any row carries a flag (the display formats then show the flag column).
+fn flags(r: &TableReport) -> bool {
+    r.rows.iter().any(|row| row.flag.is_some())
 }
 
 /// Rows in display units as text.
 fn display_rows(r: &TableReport) -> Vec<Vec<String>> {
     let phase = r.rows.iter().any(|row| row.phase.is_some());
+    let flagged = flags(r);
     r.rows
         .iter()
         .map(|row| {
@@ -58,6 +67,9 @@ fn display_rows(r: &TableReport) -> Vec<Vec<String>> {
             }
             for (c, v) in r.columns.iter().zip(&row.values) {
                 cells.push(v.map_or_else(|| "-".to_string(), |v| sig(v * display(c.key).1, SIG)));
+            }
+            if flagged {
+                cells.push(row.flag.clone().unwrap_or_default());
             }
             cells
         })
@@ -217,6 +229,7 @@ pub fn csv(r: &TableReport) -> Result<String, CliError> {
         header.push("phase".to_string());
     }
     header.extend(r.columns.iter().map(|c| c.key.to_string()));
+    header.push("flag".to_string());
     header.push("error".to_string());
     w.write_record(&header).map_err(e)?;
     // One formatting buffer for every cell (a million-row table formats millions of
@@ -239,6 +252,8 @@ pub fn csv(r: &TableReport) -> Result<String, CliError> {
                 None => w.write_field("").map_err(e)?,
             }
         }
+        w.write_field(row.flag.as_deref().unwrap_or_default())
+            .map_err(e)?;
         w.write_field(row.error.as_deref().unwrap_or_default())
             .map_err(e)?;
         w.write_record(None::<&[u8]>).map_err(e)?;
@@ -266,6 +281,7 @@ pub fn xlsx(r: &TableReport) -> Result<Vec<u8>, CliError> {
         }
         ws.set_freeze_panes(1, 0).map_err(x)?;
         let phase = r.rows.iter().any(|row| row.phase.is_some());
+        let flagged = flags(r);
         for (i, row) in r.rows.iter().enumerate() {
             let rr = (i + 1) as u32;
             ws.write_number(rr, 0, row.temperature_k).map_err(x)?;
@@ -283,6 +299,9 @@ pub fn xlsx(r: &TableReport) -> Result<Vec<u8>, CliError> {
                     None => ws.write_string(rr, c, "-").map_err(x)?,
                 };
                 c += 1;
+            }
+            if let Some(f) = row.flag.as_deref().filter(|_| flagged) {
+                ws.write_string(rr, c, f).map_err(x)?;
             }
         }
     }

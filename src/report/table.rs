@@ -98,6 +98,9 @@ pub struct TableRow {
     pub phase: Option<&'static str>,
     /// Values in the order of `columns`, SI (null where not defined or not computed).
     pub values: Vec<Option<f64>>,
+    /// Where the state stands against the model's range and the solid region: "outside
+    /// range", "solid", "solid may form" (joined by "; "); null inside.
+    pub flag: Option<String>,
     /// Why this state has no values.
     pub error: Option<String>,
 }
