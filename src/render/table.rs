@@ -274,6 +274,29 @@ pub fn models(r: &crate::report::models::ModelsReport) -> String {
         t.add_row(vec!["name".to_string(), m.name.to_string()]);
         t.add_row(vec!["source".to_string(), m.citation.to_string()]);
         t.add_row(vec!["validity".to_string(), m.validity.to_string()]);
+        for f in &m.fluid_ranges {
+            t.add_row(vec![
+                format!("range, {}", f.fluid),
+                format!(
+                    "{} K to {} K, up to {} MPa ({})",
+                    f.t_min_k,
+                    f.t_max_k,
+                    f.p_max_pa / 1e6,
+                    f.formulation
+                ),
+            ]);
+        }
+        t.add_row(vec![
+            "gas density".to_string(),
+            if m.density_uncertainty_pct > 0.0 {
+                format!(
+                    "typically within {} % inside its range (the audit names no cause within it)",
+                    m.density_uncertainty_pct
+                )
+            } else {
+                "no bound: its error, Z - 1, is what the other models measure".to_string()
+            },
+        ]);
         for g in &m.good_at {
             t.add_row(vec!["good at".to_string(), g.to_string()]);
         }
@@ -290,5 +313,9 @@ pub fn models(r: &crate::report::models::ModelsReport) -> String {
     }
     t.set_content_arrangement(ContentArrangement::Dynamic);
     t.set_width(120);
-    format!("{t}\n`zfactor models ID` shows one model with its source, strengths and weaknesses.\n")
+    format!(
+        "{t}\n`zfactor models ID` shows one model with its source, its range for each fluid, \
+         strengths and weaknesses. A state outside a model's range is still computed, with a \
+         warning beside it and exit code 3.\n"
+    )
 }
