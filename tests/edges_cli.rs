@@ -732,3 +732,22 @@ fn an_envelope_branch_that_leaves_the_physical_range_stops_without_a_number() {
     }
     assert!(err.contains("1000 MPa"), "{err}");
 }
+
+#[test]
+fn a_flash_below_a_components_triple_point_warns_of_freeze_out() {
+    // CO2 (triple point 216.592 K, Span & Wagner 1996) in methane at 200 K: the flash is of
+    // the fluid phases only; solid CO2 may form and is not modelled.
+    let (_, code, err) = run_json(&[
+        "flash",
+        "--mix",
+        "methane=0.95,co2=0.05",
+        "-t",
+        "200 K",
+        "-p",
+        "40 bar",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(code, 3, "{err}");
+    assert!(err.contains("carbon dioxide may freeze out"), "{err}");
+}

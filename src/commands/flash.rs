@@ -229,7 +229,8 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
     for r in &mut results {
         let (notes, more) = cp_extrapolation(&feed, r.temperature_k);
         r.notes.extend(notes);
-        for w in more {
+        let freeze = crate::solid_check::freeze_out(&feed, r.temperature_k);
+        for w in more.into_iter().chain(freeze) {
             if !warnings.contains(&w) {
                 warnings.push(w);
             }
