@@ -751,3 +751,49 @@ fn a_flash_below_a_components_triple_point_warns_of_freeze_out() {
     assert_eq!(code, 3, "{err}");
     assert!(err.contains("carbon dioxide may freeze out"), "{err}");
 }
+
+#[test]
+fn the_engineering_jobs_flag_states_outside_range_or_solid() {
+    // Dry ice in a vessel at 200 K and 100 bar (CO2 triple point 216.592 K, Span & Wagner
+    // 1996); a methane compressor whose reference-equation discharge passes 625 K, the top of
+    // Setzmann & Wagner (1991)'s range.
+    let (_, code, err) = run_json(&[
+        "vessel", "--fluid", "co2", "--volume", "1 m3", "-t", "200 K", "-p", "100 bar", "-m", "pr",
+    ]);
+    assert_eq!(code, 3, "{err}");
+    assert!(err.contains("solid"), "{err}");
+    let (_, code, err) = run_json(&[
+        "compress",
+        "--fluid",
+        "methane",
+        "--suction-pressure",
+        "1 bar",
+        "--suction-temperature",
+        "500 K",
+        "--discharge-pressure",
+        "20 bar",
+        "--isentropic-efficiency",
+        "0.7",
+        "-m",
+        "reference",
+    ]);
+    assert_eq!(code, 3, "{err}");
+    assert!(
+        err.contains("discharge") && err.contains("published range"),
+        "{err}"
+    );
+    // Relief inputs for methane at 1000 K: beyond the reference equation's 625 K.
+    let (_, code, err) = run_json(&[
+        "relief",
+        "--fluid",
+        "methane",
+        "-t",
+        "1000 K",
+        "-p",
+        "10 bar",
+        "-m",
+        "reference",
+    ]);
+    assert_eq!(code, 3, "{err}");
+    assert!(err.contains("published range"), "{err}");
+}

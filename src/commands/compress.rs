@@ -93,7 +93,13 @@ pub fn run(args: &CompressArgs) -> Result<CompressReport, CliError> {
         .transpose()?;
     let x = feed.mole.clone();
     let (mut results, mut warnings) = per_model(&args.model, &feed, |pair| {
-        one(pair, p1, t1, p2, eff, flow, &x)
+        let mut r = one(pair, p1, t1, p2, eff, flow, &x)?;
+        let edge = [("suction", &r.suction), ("discharge", &r.discharge)]
+            .iter()
+            .flat_map(|(what, s)| jc::edge_notes(pair, &feed, what, s))
+            .collect::<Vec<_>>();
+        r.notes.extend(edge);
+        Ok(r)
     })?;
     for r in &mut results {
         for n in &r.notes {

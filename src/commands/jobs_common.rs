@@ -5,10 +5,11 @@
 use crate::error::{from_eos, CliError};
 use crate::feed::Feed;
 use crate::models::{self, BuiltModel};
-use crate::report::jobs_common::FluidReport;
+use crate::report::jobs_common::{FluidReport, StateReport};
 use crate::units::{self, KG_PER_LB, M3_PER_FT3};
 use eos::ideal::IdealGas;
 use eos::jobs::BaseConditions;
+use eos::solid::SolidCheck;
 
 /// Seconds per hour and per day.
 const S_PER_H: f64 = 3600.0;
@@ -179,6 +180,24 @@ pub fn per_model<T>(
         })
     })?;
     Ok((answers.results, answers.warnings))
+}
+
+/// Warnings (each as a note starting "warning: ", which the jobs raise to the report) for a
+/// state of a job that lies outside its model's range or in the solid region, or where a
+/// mixture component may freeze out: the same checks as `zfactor state`.
+pub fn edge_notes(pair: &Pair, feed: &Feed, what: &str, s: &StateReport) -> Vec<String> {
+    let (t, p) = (s.temperature_k, s.pressure_pa);
+    let rho = s.mass_density_kg_m3 / feed.molar_mass();
+    let mut out: Vec<String> = crate::range::outside(&pair.built, feed, t, p, rho);
+    if let SolidCheck::Solid(why) | SolidCheck::MaybeSolid(why) =
+        crate::solid_check::pure(feed, t, p)
+    {
+        out.push(format!("{why}; the values are those of a metastable fluid"));
+    }
+    out.extend(crate::solid_check::freeze_out(feed, t));
+    out.into_iter()
+        .map(|w| format!("warning: {what}: {w}"))
+        .collect()
 }
 
 /// Maps a library error with the model's id as context.

@@ -143,7 +143,12 @@ pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
         )));
     }
     let x = feed.mole.clone();
-    let (mut results, mut warnings) = per_model(&args.model, &feed, |pair| one(pair, &input, &x))?;
+    let (mut results, mut warnings) = per_model(&args.model, &feed, |pair| {
+        let mut r = one(pair, &input, &x)?;
+        let edge = jc::edge_notes(pair, &feed, "contents", &r.state);
+        r.notes.extend(edge);
+        Ok(r)
+    })?;
     for r in &mut results {
         for n in &r.notes {
             if let Some(w) = n.strip_prefix("warning: ") {
