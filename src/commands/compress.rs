@@ -92,21 +92,18 @@ pub fn run(args: &CompressArgs) -> Result<CompressReport, CliError> {
         .map(|f| jc::flow(f, "--flow", base))
         .transpose()?;
     let x = feed.mole.clone();
-    let (mut results, mut warnings) = per_model(&args.model, &feed, |pair| {
+    let (results, mut warnings) = per_model(&args.model, &feed, |pair| {
         let mut r = one(pair, p1, t1, p2, eff, flow, &x)?;
-        let edge = [("suction", &r.suction), ("discharge", &r.discharge)]
-            .iter()
-            .flat_map(|(what, s)| jc::edge_notes(pair, &feed, what, s))
-            .collect::<Vec<_>>();
+        let edge = jc::edge_notes(
+            pair,
+            &feed,
+            &[("suction", &r.suction), ("discharge", &r.discharge)],
+        );
         r.notes.extend(edge);
         Ok(r)
     })?;
-    for r in &mut results {
-        for n in &r.notes {
-            if let Some(w) = n.strip_prefix("warning: ") {
-                warnings.push(format!("{}: {w}", r.model));
-            }
-        }
+    for r in &results {
+        warnings.extend(jc::raised(&r.model, &r.notes));
     }
     let flow_base: Option<BaseReport> = match flow {
         Some(Flow::Standard(_, b)) => Some(b.into()),

@@ -185,7 +185,23 @@ pub fn per_model<T>(
 /// Warnings (each as a note starting "warning: ", which the jobs raise to the report) for a
 /// state of a job that lies outside its model's range or in the solid region, or where a
 /// mixture component may freeze out: the same checks as `zfactor state`.
-pub fn edge_notes(pair: &Pair, feed: &Feed, what: &str, s: &StateReport) -> Vec<String> {
+pub fn edge_notes(pair: &Pair, feed: &Feed, states: &[(&str, &StateReport)]) -> Vec<String> {
+    states
+        .iter()
+        .flat_map(|(what, s)| edge_notes_of(pair, feed, what, s))
+        .collect()
+}
+
+/// The warnings a job's notes carry ("warning: ..."), as report warnings naming the model.
+pub fn raised(model: &str, notes: &[String]) -> Vec<String> {
+    notes
+        .iter()
+        .filter_map(|n| n.strip_prefix("warning: "))
+        .map(|w| format!("{model}: {w}"))
+        .collect()
+}
+
+fn edge_notes_of(pair: &Pair, feed: &Feed, what: &str, s: &StateReport) -> Vec<String> {
     let (t, p) = (s.temperature_k, s.pressure_pa);
     let rho = s.mass_density_kg_m3 / feed.molar_mass();
     let mut out: Vec<String> = crate::range::outside(&pair.built, feed, t, p, rho);

@@ -100,21 +100,14 @@ pub fn run(args: &ProcessArgs) -> Result<ProcessReport, CliError> {
         )));
     }
     let x = feed.mole.clone();
-    let (mut results, mut warnings) = per_model(&args.model, &feed, |pair| {
+    let (results, mut warnings) = per_model(&args.model, &feed, |pair| {
         let mut r = one(pair, t1, p1, path, end, &x)?;
-        let edge = [("start", &r.start), ("end", &r.end)]
-            .iter()
-            .flat_map(|(what, s)| jc::edge_notes(pair, &feed, what, s))
-            .collect::<Vec<_>>();
+        let edge = jc::edge_notes(pair, &feed, &[("start", &r.start), ("end", &r.end)]);
         r.notes.extend(edge);
         Ok(r)
     })?;
-    for r in &mut results {
-        for n in &r.notes {
-            if let Some(w) = n.strip_prefix("warning: ") {
-                warnings.push(format!("{}: {w}", r.model));
-            }
-        }
+    for r in &results {
+        warnings.extend(jc::raised(&r.model, &r.notes));
     }
     let (et, ep) = match end {
         End::Temperature(t) => (Some(t), None),

@@ -41,16 +41,12 @@ pub fn run(args: &ReliefArgs) -> Result<ReliefReport, CliError> {
     let x = feed.mole.clone();
     let (results, mut warnings) = per_model(&args.model, &feed, |pair| {
         let mut r = one(pair, t, p, &x)?;
-        let edge = jc::edge_notes(pair, &feed, "relieving state", &r.state);
+        let edge = jc::edge_notes(pair, &feed, &[("relieving state", &r.state)]);
         r.notes.extend(edge);
         Ok(r)
     })?;
     for r in &results {
-        for n in &r.notes {
-            if let Some(w) = n.strip_prefix("warning: ") {
-                warnings.push(format!("{}: {w}", r.model));
-            }
-        }
+        warnings.extend(jc::raised(&r.model, &r.notes));
         if r.z_outside_range {
             warnings.push(format!(
                 "{}: Z = {:.4} is outside {}-{}: ideal-gas relief sizing formulas lose \

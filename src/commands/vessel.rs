@@ -143,18 +143,14 @@ pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
         )));
     }
     let x = feed.mole.clone();
-    let (mut results, mut warnings) = per_model(&args.model, &feed, |pair| {
+    let (results, mut warnings) = per_model(&args.model, &feed, |pair| {
         let mut r = one(pair, &input, &x)?;
-        let edge = jc::edge_notes(pair, &feed, "contents", &r.state);
+        let edge = jc::edge_notes(pair, &feed, &[("contents", &r.state)]);
         r.notes.extend(edge);
         Ok(r)
     })?;
-    for r in &mut results {
-        for n in &r.notes {
-            if let Some(w) = n.strip_prefix("warning: ") {
-                warnings.push(format!("{}: {w}", r.model));
-            }
-        }
+    for r in &results {
+        warnings.extend(jc::raised(&r.model, &r.notes));
     }
     Ok(VesselReport {
         tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
