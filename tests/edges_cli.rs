@@ -797,3 +797,28 @@ fn the_engineering_jobs_flag_states_outside_range_or_solid() {
     assert_eq!(code, 3, "{err}");
     assert!(err.contains("published range"), "{err}");
 }
+
+#[test]
+fn a_comparison_says_where_its_reference_is_extrapolated() {
+    // Setzmann & Wagner (1991) cover methane to 625 K: at 700 K and 800 K the deviations
+    // are measured against an extrapolation, and the points say so.
+    let (v, code, err) = run_json(&[
+        "compare",
+        "--fluid",
+        "methane",
+        "-t",
+        "500..800 K step 100",
+        "-p",
+        "10 bar,100 bar",
+        "-m",
+        "pr,srk",
+    ]);
+    assert_eq!(code, 3, "{err}");
+    for p in v["points"].as_array().unwrap() {
+        let t = p["temperature_k"].as_f64().unwrap();
+        assert_eq!(p["reference_flag"].is_string(), t > 625.0, "{p}");
+        for m in p["values"].as_array().unwrap() {
+            assert!(m["flag"].is_null(), "{m}");
+        }
+    }
+}

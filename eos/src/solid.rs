@@ -13,9 +13,9 @@
 //! - nitrogen: R. Span et al., J. Phys. Chem. Ref. Data 29 (2000) 1361, melting and
 //!   sublimation equations; coefficients from memory, checked only for continuity at the
 //!   triple point;
-//! - methane: U. Setzmann, W. Wagner, J. Phys. Chem. Ref. Data 20 (1991) 1061, melting
-//!   equation; coefficients from memory, checked only for continuity; no sublimation curve
-//!   here.
+//! - methane: the triple point of U. Setzmann, W. Wagner, J. Phys. Chem. Ref. Data 20 (1991)
+//!   1061 (90.6941 K, 11.696 kPa); its melting equation is not used: the coefficients as
+//!   recalled gave a melting pressure that turns negative above 450 K, so they are wrong.
 //!
 //! A fluid without a sublimation curve is solid below its triple-point temperature at any
 //! pressure above its triple-point pressure (the sublimation pressure is lower there), and
@@ -72,11 +72,6 @@ fn n2_sublimation(t: f64) -> Option<f64> {
         .then(|| 12_523.0 * (63.151 / t * (-13.088_692 * (1.0 - t / 63.151))).exp())
 }
 
-fn ch4_melting(t: f64) -> Option<f64> {
-    let x = t / 90.694_1 - 1.0;
-    (t >= 90.694_1).then_some(11_696.0 * (1.0 + 24_756.8 * x - 7_366.02 * x * x))
-}
-
 fn water_melting(t: f64) -> Option<f64> {
     ice::melting_pressure_high(t)
 }
@@ -117,13 +112,13 @@ pub fn lines(id: &str, t_triple: Option<f64>, p_triple: Option<f64>) -> Option<S
             Some(n2_sublimation),
             "Span et al. (2000), from memory",
         )),
-        "methane" => Some(known(
-            90.694_1,
-            11_696.0,
-            ch4_melting,
-            None,
-            "Setzmann & Wagner (1991), from memory",
-        )),
+        "methane" => Some(SolidLines {
+            t_triple: 90.694_1,
+            p_triple: Some(11_696.0),
+            melting: None,
+            sublimation: None,
+            source: "Setzmann & Wagner (1991)",
+        }),
         _ => t_triple.map(|t| SolidLines {
             t_triple: t,
             p_triple,
@@ -217,7 +212,7 @@ mod tests {
 
     #[test]
     fn the_curves_meet_at_the_triple_point() {
-        for id in ["co2", "nitrogen", "methane"] {
+        for id in ["co2", "nitrogen"] {
             let l = of(id);
             let pt = l.p_triple.unwrap();
             let m = (l.melting.unwrap())(l.t_triple).unwrap();
@@ -249,6 +244,11 @@ mod tests {
         assert!(!solid("water", 300.0, 1e8));
         assert!(solid("nitrogen", 50.0, 1e5));
         assert!(solid("methane", 80.0, 1e5));
+        // Methane at 500 K and 10 bar is a gas (its melting pressure there is in the GPa
+        // range, common practice): no curve here may say otherwise.
+        assert!(!solid("methane", 500.0, 1e6));
+        assert!(!solid("nitrogen", 500.0, 1e6));
+        assert!(!solid("co2", 500.0, 1e6));
         let hydrogen = lines("hydrogen", Some(13.957), None).unwrap();
         assert!(matches!(
             check(&hydrogen, "hydrogen", 10.0, 1e6),

@@ -15,6 +15,7 @@ use crate::compare::stats::Accumulator;
 use crate::error::CliError;
 use crate::feed::{self, Feed};
 use crate::models::{self, BuiltModel};
+use crate::range::StateCheck;
 use crate::report::compare::{
     Band, CompareReport, GridAxes, IdealGasMap, ModelStats, PointReport, PointValue, ReferenceInfo,
     RegionStats, StateAt,
@@ -443,7 +444,38 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
         .filter(|r| r.region == Region::TwoPhase)
         .count();
 
-    let points = point_reports(&built, &dyn_models, &results, &states, &feed);
+    let reference_model = match &reference {
+        Reference::Model(b) => Some(b),
+        _ => None,
+    };
+    let points = point_reports(
+        &built,
+        &dyn_models,
+        reference_model,
+        &results,
+        &states,
+        &feed,
+    );
+    let flagged = points
+        .iter()
+        .filter(|p| p.values.iter().any(|v| v.flag.is_some()))
+        .count();
+    let reference_flagged = points.iter().filter(|p| p.reference_flag.is_some()).count();
+    if flagged > 0 {
+        warnings.push(format!(
+            "at {flagged} of {} states a model is outside its range or in the solid region \
+             (see the points' \"flag\"): its values there are extrapolations",
+            points.len()
+        ));
+    }
+    if reference_flagged > 0 {
+        warnings.push(format!(
+            "at {reference_flagged} of {} states the reference itself is outside its range or \
+             in the solid region (see the points' \"reference_flag\"): deviations there are \
+             measured against an extrapolation",
+            points.len()
+        ));
+    }
     let band = if has_reference {
         None
     } else {
@@ -598,11 +630,14 @@ fn model_stats(
 fn point_reports(
     built: &[BuiltModel],
     dyn_models: &[&BuiltModel],
+    reference: Option<&BuiltModel>,
     results: &[PointResult],
     states: &States,
     feed: &Feed,
 ) -> Vec<PointReport> {
     let mm = feed.molar_mass();
+    let checks: Vec<StateCheck> = built.iter().map(|b| StateCheck::new(b, feed)).collect();
+    let reference_check = reference.map(|b| StateCheck::new(b, feed));
     results
         .iter()
         .zip(&states.points)
@@ -620,11 +655,17 @@ fn point_reports(
                 source: meta.source.clone(),
                 reference_z,
                 reference_density_kg_m3: r.ref_rho.map(|rho| rho * mm),
+                reference_flag: reference_check
+                    .as_ref()
+                    .zip(r.ref_rho)
+                    .and_then(|(c, rho)| c.flag(pt.t, pt.p, rho)),
                 values: built
                     .iter()
+                    .zip(&checks)
                     .zip(&r.answers)
                     .zip(&r.dev_pct)
-                    .map(|((b, a), d)| PointValue {
+                    .map(|(((b, c), a), d)| PointValue {
+                        flag: a.rho().and_then(|rho| c.flag(pt.t, pt.p, rho)),
                         model: b.id.clone(),
                         z: a.z(),
                         molar_density_mol_m3: a.rho(),

@@ -124,6 +124,8 @@ pub struct PointValue {
     pub deviation_pct: Option<f64>,
     /// Why the model has no value here.
     pub error: Option<String>,
+    /// "outside range", "solid", "solid may form" where the state is so for this model.
+    pub flag: Option<String>,
 }
 
 /// One point.
@@ -139,6 +141,9 @@ pub struct PointReport {
     pub source: Option<String>,
     pub reference_z: Option<f64>,
     pub reference_density_kg_m3: Option<f64>,
+    /// Where the reference model itself is outside its range or in the solid region: the
+    /// deviations at this point are measured against an extrapolation.
+    pub reference_flag: Option<String>,
     /// Every model's value and deviation.
     pub values: Vec<PointValue>,
     /// Spread of the real-gas models' densities, percent of their mean.
