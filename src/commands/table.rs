@@ -33,6 +33,9 @@ pub fn run(args: &TableArgs) -> Result<Exit, CliError> {
     if let Some(path) = &args.output {
         check_extension(Path::new(path), args.format)?;
     }
+    if args.format == TableFormat::Csv {
+        return stream_csv(args);
+    }
     let report = build(args)?;
     let bytes = crate::render::grid_table::render(&report, args.format)?;
     match &args.output {
@@ -85,204 +88,324 @@ fn check_extension(path: &Path, format: TableFormat) -> Result<(), CliError> {
     )))
 }
 
-/// Computes the table.
+/// Computes the table (every row in memory: the formats that need the whole table at once;
+/// CSV is streamed, [`stream_csv`]).
 pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
-    let ambient = units::ambient_pressure(&args.ambient)?;
-    let sel = table_property::parse(&args.properties)?;
-    let ids = models::resolve_ids(&args.model, &feed)?;
-    if ids.len() != 1 || args.model.trim().eq_ignore_ascii_case("all") {
-        return Err(CliError::BadInput(format!(
-            "--model \"{}\": a table is for one model; give one id ({})",
-            args.model,
-            models::ALL_IDS.join(", ")
-        )));
-    }
-    let built = models::build(&ids[0], &feed)?;
-    let t = grid::parse_axis(&args.temperatures, units::temperature)
-        .map_err(|e| CliError::BadInput(format!("--temperatures: {e}")))?;
-    let p = grid::parse_axis(&args.pressures, |s| {
-        units::pressure_reading(s, ambient).map(|r| r.0)
+    let plan = Plan::new(args)?;
+    let bar = crate::progress::bar(plan.total(), "computing");
+    let rows = plan.rows(0..plan.total(), &bar);
+    crate::progress::finish(bar);
+    let mut tally = Tally::default();
+    tally.add(&rows);
+    Ok(TableReport {
+        basis: plan.basis.clone(),
+        columns: plan.columns(),
+        warnings: tally.warnings(rows.len()),
+        rows,
     })
-    .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
-    grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;
-    // The Z-only batch kernel has no phase check: it serves pure fluids, whose root of lowest
-    // Gibbs energy is the stable phase; a mixture takes the per-state path with its flash.
-    let fast = feed.is_pure() && !sel.phase && sel.properties.iter().all(|p| p.from_z);
-    let batch = if fast {
-        crate::zgrid::batch_model(&built.id, &feed)
-    } else {
-        None
-    };
-    let total = t.len() * p.len();
-    let check = StateCheck::new(&built, &feed);
+}
+
+/// States per chunk of a streamed table: a few megabytes of CSV, whatever the grid's size.
+const CHUNK: usize = 1 << 16;
+
+/// Computes the table a chunk of states at a time (in grid order, each chunk on all cores)
+/// and writes its CSV as it goes, so that memory does not grow with the grid.
+fn stream_csv(args: &TableArgs) -> Result<Exit, CliError> {
+    use std::io::Write;
+    let plan = Plan::new(args)?;
+    let total = plan.total();
+    let phase = plan.sel.phase;
+    let columns = plan.columns();
     let bar = crate::progress::bar(total, "computing");
-    let (rows, method) = match &batch {
-        Some(b) => {
-            let z = crate::zgrid::z_grid(b, &t, &p, |n| crate::progress::inc(&bar, n))
-                .map_err(|e| from_eos(&format!("model {}", built.id), e))?;
-            (
-                rows_from_z(&sel, &feed, &check, &t, &p, &z),
-                "Z from the cubic in Z for each state (batch kernel, root of lowest Gibbs \
-                 energy); density from P/(Z R T)"
-                    .to_string(),
-            )
+    let mut tally = Tally::default();
+    let mut write_all = |out: &mut dyn Write| -> Result<(), CliError> {
+        let io = |e: std::io::Error| CliError::Output(e.to_string());
+        let head = crate::render::grid_table::csv_head(&plan.basis, &columns, phase)?;
+        out.write_all(head.as_bytes()).map_err(io)?;
+        let mut start = 0;
+        while start < total {
+            let end = (start + CHUNK).min(total);
+            let rows = plan.rows(start..end, &bar);
+            tally.add(&rows);
+            let bytes = crate::render::grid_table::csv_rows(&rows, phase)?;
+            out.write_all(&bytes).map_err(io)?;
+            start = end;
+        }
+        out.flush().map_err(io)
+    };
+    match &args.output {
+        Some(path) => {
+            // The table reads no file, so there is no input it could overwrite.
+            crate::output_file::write_with(Path::new(path), args.force, &[], |f, _| {
+                let mut w = std::io::BufWriter::with_capacity(1 << 20, f);
+                write_all(&mut w)
+            })?;
+            crate::progress::finish(bar);
+            eprintln!("wrote {path}");
         }
         None => {
-            let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
-            let screen = PhaseScreen::new(&built, &feed.mole, &t, total, p_low);
-            (
-                rows_from_states(&sel, &built, &feed, &check, &t, &p, &screen, &bar),
-                format!(
+            let stdout = std::io::stdout();
+            let mut lock = stdout.lock();
+            write_all(&mut lock)?;
+            crate::progress::finish(bar);
+        }
+    }
+    let warnings = tally.warnings(total);
+    for w in &warnings {
+        eprintln!("warning: {w}");
+    }
+    eprintln!("caution: {}", crate::CAUTION);
+    Ok(super::exit_for(&warnings))
+}
+
+/// Counts of the rows that need a warning.
+#[derive(Default)]
+struct Tally {
+    failed: usize,
+    flagged: usize,
+}
+
+impl Tally {
+    fn add(&mut self, rows: &[TableRow]) {
+        self.failed += rows.iter().filter(|r| r.error.is_some()).count();
+        self.flagged += rows.iter().filter(|r| r.flag.is_some()).count();
+    }
+
+    fn warnings(&self, total: usize) -> Vec<String> {
+        let mut warnings = Vec::new();
+        if self.flagged > 0 {
+            warnings.push(format!(
+                "{} of {total} states are outside the model's range or in the solid region \
+                 (see the flag column): their values are extrapolations",
+                self.flagged
+            ));
+        }
+        if self.failed > 0 {
+            warnings.push(format!(
+                "{} of {total} states could not be computed (see their error)",
+                self.failed
+            ));
+        }
+        warnings
+    }
+}
+
+/// Everything a table's rows need, prepared once: the model, the grid, the Z of the fast
+/// path, the phase screen and the range checks.
+struct Plan {
+    sel: Selection,
+    feed: Feed,
+    built: BuiltModel,
+    check: StateCheck,
+    t: Vec<f64>,
+    p: Vec<f64>,
+    /// Z of every state, temperature outer, when the batch kernel serves the table.
+    z: Option<Vec<f64>>,
+    screen: PhaseScreen,
+    basis: TableBasis,
+}
+
+impl Plan {
+    fn new(args: &TableArgs) -> Result<Plan, CliError> {
+        let feed = feed::read(&args.fluid)?;
+        let ambient = units::ambient_pressure(&args.ambient)?;
+        let sel = table_property::parse(&args.properties)?;
+        let ids = models::resolve_ids(&args.model, &feed)?;
+        if ids.len() != 1 || args.model.trim().eq_ignore_ascii_case("all") {
+            return Err(CliError::BadInput(format!(
+                "--model \"{}\": a table is for one model; give one id ({})",
+                args.model,
+                models::ALL_IDS.join(", ")
+            )));
+        }
+        let built = models::build(&ids[0], &feed)?;
+        let t = grid::parse_axis(&args.temperatures, units::temperature)
+            .map_err(|e| CliError::BadInput(format!("--temperatures: {e}")))?;
+        let p = grid::parse_axis(&args.pressures, |s| {
+            units::pressure_reading(s, ambient).map(|r| r.0)
+        })
+        .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
+        grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;
+        // The Z-only batch kernel has no phase check: it serves pure fluids, whose root of
+        // lowest Gibbs energy is the stable phase; a mixture takes the per-state path with
+        // its flash.
+        let fast = feed.is_pure() && !sel.phase && sel.properties.iter().all(|p| p.from_z);
+        let batch = if fast {
+            crate::zgrid::batch_model(&built.id, &feed)
+        } else {
+            None
+        };
+        let total = t.len() * p.len();
+        let check = StateCheck::new(&built, &feed);
+        let (z, screen, method) = match &batch {
+            Some(b) => {
+                let bar = crate::progress::bar(total, "computing Z");
+                let z = crate::zgrid::z_grid(b, &t, &p, |n| crate::progress::inc(&bar, n))
+                    .map_err(|e| from_eos(&format!("model {}", built.id), e))?;
+                crate::progress::finish(bar);
+                (
+                    Some(z),
+                    PhaseScreen::default(),
+                    "Z from the cubic in Z for each state (batch kernel, root of lowest Gibbs \
+                     energy); density from P/(Z R T)"
+                        .to_string(),
+                )
+            }
+            None => {
+                let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
+                let screen = PhaseScreen::new(&built, &feed.mole, &t, total, p_low);
+                let method = format!(
                     "each state from (T, P) with the root of lowest Gibbs energy; {} (a state \
                      that splits into two phases is flagged); every property from the model",
                     phase_screen::method_note(screen.is_active())
-                ),
-            )
-        }
-    };
-    crate::progress::finish(bar);
-    let failed = rows.iter().filter(|r| r.error.is_some()).count();
-    let mut warnings = Vec::new();
-    let flagged = rows.iter().filter(|r| r.flag.is_some()).count();
-    if flagged > 0 {
-        warnings.push(format!(
-            "{flagged} of {} states are outside the model's range or in the solid region (see \
-             the flag column): their values are extrapolations",
-            rows.len()
-        ));
-    }
-    if failed > 0 {
-        warnings.push(format!(
-            "{failed} of {} states could not be computed (see their error)",
-            rows.len()
-        ));
-    }
-    let columns = sel
-        .properties
-        .iter()
-        .map(|p| TableColumn {
-            key: p.key,
-            name: p.name,
-            unit_si: p.unit_si,
-        })
-        .collect();
-    Ok(TableReport {
-        basis: basis(args, &feed, &built, &sel, ambient, method),
-        columns,
-        rows,
-        warnings,
-    })
-}
-
-fn rows_from_z(
-    sel: &Selection,
-    feed: &Feed,
-    check: &StateCheck,
-    t: &[f64],
-    p: &[f64],
-    z: &[f64],
-) -> Vec<TableRow> {
-    let mm = feed.molar_mass();
-    let np = p.len();
-    let mut rows = Vec::with_capacity(z.len());
-    for (i, &ti) in t.iter().enumerate() {
-        for (j, &pj) in p.iter().enumerate() {
-            let zv = z[i * np + j];
-            let ok = zv.is_finite() && zv > 0.0;
-            rows.push(TableRow {
-                temperature_k: ti,
-                pressure_pa: pj,
-                phase: None,
-                values: sel
-                    .properties
-                    .iter()
-                    .map(|pr| {
-                        if ok {
-                            table_property::from_z(pr, zv, ti, pj, mm)
-                        } else {
-                            None
-                        }
-                    })
-                    .collect(),
-                flag: ok
-                    .then(|| check.flag(ti, pj, pj / (zv * eos::constants::R * ti)))
-                    .flatten(),
-                error: (!ok).then(|| format!("no physical root (Z = {zv})")),
-            });
-        }
-    }
-    rows
-}
-
-#[allow(clippy::too_many_arguments)]
-fn rows_from_states(
-    sel: &Selection,
-    built: &BuiltModel,
-    feed: &Feed,
-    check: &StateCheck,
-    t: &[f64],
-    p: &[f64],
-    screen: &PhaseScreen,
-    bar: &Option<indicatif::ProgressBar>,
-) -> Vec<TableRow> {
-    let states: Vec<(f64, f64)> = t
-        .iter()
-        .flat_map(|&ti| p.iter().map(move |&pj| (ti, pj)))
-        .collect();
-    states
-        .par_iter()
-        .map(|&(ti, pj)| {
-            let split = screen
-                .needs_test(ti, pj)
-                .then(|| split_fraction(built, feed, ti, pj))
-                .flatten();
-            if let Some(beta) = split {
-                crate::progress::inc(bar, 1);
-                return TableRow {
-                    temperature_k: ti,
-                    pressure_pa: pj,
-                    phase: sel.phase.then_some("two-phase"),
-                    values: vec![None; sel.properties.len()],
-                    flag: None,
-                    error: Some(format!(
-                        "model {}: the mixture splits into vapour ({beta:.4} mol/mol) and \
-                         liquid here; single-phase values would be meaningless (see `zfactor \
-                         state` for the phases)",
-                        built.id
-                    )),
-                };
+                );
+                (None, screen, method)
             }
-            let row = match built.at_tp(ti, pj, &feed.mole, RootChoice::LowestGibbs) {
-                Ok(s) => TableRow {
-                    temperature_k: ti,
-                    pressure_pa: pj,
-                    phase: sel.phase.then(|| s.phase.as_str()),
-                    values: sel
-                        .properties
-                        .iter()
-                        .map(|pr| table_property::from_state(pr, &s.props))
-                        .collect(),
-                    flag: if s.warnings.is_empty() {
-                        check.flag(ti, pj, s.props.rho)
-                    } else {
-                        Some("outside range".to_string())
-                    },
-                    error: None,
-                },
-                Err(e) => TableRow {
-                    temperature_k: ti,
-                    pressure_pa: pj,
-                    phase: None,
-                    values: vec![None; sel.properties.len()],
-                    flag: None,
-                    error: Some(format!("model {}: {e}", built.id)),
-                },
-            };
-            crate::progress::inc(bar, 1);
-            row
+        };
+        let basis = basis(args, &feed, &built, &sel, ambient, method);
+        Ok(Plan {
+            sel,
+            feed,
+            built,
+            check,
+            t,
+            p,
+            z,
+            screen,
+            basis,
         })
-        .collect()
+    }
+
+    fn total(&self) -> usize {
+        self.t.len() * self.p.len()
+    }
+
+    fn columns(&self) -> Vec<TableColumn> {
+        self.sel
+            .properties
+            .iter()
+            .map(|p| TableColumn {
+                key: p.key,
+                name: p.name,
+                unit_si: p.unit_si,
+            })
+            .collect()
+    }
+
+    /// The rows of states `range` (index k is temperature k / np, pressure k % np), computed
+    /// in parallel, in order.
+    fn rows(
+        &self,
+        range: std::ops::Range<usize>,
+        bar: &Option<indicatif::ProgressBar>,
+    ) -> Vec<TableRow> {
+        let np = self.p.len();
+        let at = |k: usize| (self.t[k / np], self.p[k % np]);
+        match &self.z {
+            Some(z) => {
+                let rows = range
+                    .map(|k| {
+                        let (t, p) = at(k);
+                        row_from_z(&self.sel, &self.feed, &self.check, t, p, z[k])
+                    })
+                    .collect::<Vec<_>>();
+                crate::progress::inc(bar, rows.len() as u64);
+                rows
+            }
+            None => range
+                .into_par_iter()
+                .map(|k| {
+                    let (t, p) = at(k);
+                    let row = row_from_state(self, t, p);
+                    crate::progress::inc(bar, 1);
+                    row
+                })
+                .collect(),
+        }
+    }
+}
+
+fn row_from_z(
+    sel: &Selection,
+    feed: &Feed,
+    check: &StateCheck,
+    t: f64,
+    p: f64,
+    z: f64,
+) -> TableRow {
+    let mm = feed.molar_mass();
+    let ok = z.is_finite() && z > 0.0;
+    TableRow {
+        temperature_k: t,
+        pressure_pa: p,
+        phase: None,
+        values: sel
+            .properties
+            .iter()
+            .map(|pr| {
+                if ok {
+                    table_property::from_z(pr, z, t, p, mm)
+                } else {
+                    None
+                }
+            })
+            .collect(),
+        flag: ok
+            .then(|| check.flag(t, p, p / (z * eos::constants::R * t)))
+            .flatten(),
+        error: (!ok).then(|| format!("no physical root (Z = {z})")),
+    }
+}
+
+/// One state of the per-state path: flashed first where the screen says so (a split has no
+/// single-phase values), then the model's stable root with its range and solid flags.
+fn row_from_state(plan: &Plan, t: f64, p: f64) -> TableRow {
+    let (sel, built, feed) = (&plan.sel, &plan.built, &plan.feed);
+    let split = plan
+        .screen
+        .needs_test(t, p)
+        .then(|| split_fraction(built, feed, t, p))
+        .flatten();
+    if let Some(beta) = split {
+        return TableRow {
+            temperature_k: t,
+            pressure_pa: p,
+            phase: sel.phase.then_some("two-phase"),
+            values: vec![None; sel.properties.len()],
+            flag: None,
+            error: Some(format!(
+                "model {}: the mixture splits into vapour ({beta:.4} mol/mol) and liquid here; \
+                 single-phase values would be meaningless (see `zfactor state` for the phases)",
+                built.id
+            )),
+        };
+    }
+    match built.at_tp(t, p, &feed.mole, RootChoice::LowestGibbs) {
+        Ok(s) => TableRow {
+            temperature_k: t,
+            pressure_pa: p,
+            phase: sel.phase.then(|| s.phase.as_str()),
+            values: sel
+                .properties
+                .iter()
+                .map(|pr| table_property::from_state(pr, &s.props))
+                .collect(),
+            flag: if s.warnings.is_empty() {
+                plan.check.flag(t, p, s.props.rho)
+            } else {
+                Some("outside range".to_string())
+            },
+            error: None,
+        },
+        Err(e) => TableRow {
+            temperature_k: t,
+            pressure_pa: p,
+            phase: None,
+            values: vec![None; sel.properties.len()],
+            flag: None,
+            error: Some(format!("model {}: {e}", built.id)),
+        },
+    }
 }
 
 /// The vapour fraction when a mixture splits at (T, P) with this model (flash with models

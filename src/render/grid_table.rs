@@ -5,7 +5,7 @@
 use crate::cli::TableFormat;
 use crate::error::CliError;
 use crate::render::number::sig;
-use crate::report::table::{TableBasis, TableReport};
+use crate::report::table::{TableBasis, TableColumn, TableReport, TableRow};
 use crate::table_property::ALL;
 use crate::units::PA_PER_BAR;
 use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
@@ -215,23 +215,47 @@ pub fn markdown(r: &TableReport) -> String {
 
 /// CSV in SI units, the basis as `#` comment lines first.
 pub fn csv(r: &TableReport) -> Result<String, CliError> {
-    use std::fmt::Write as _;
-    // About 64 bytes a row; the basis lines go first into the same buffer.
-    let mut out = Vec::with_capacity(1024 + 64 * r.rows.len());
-    for (k, v) in basis_lines(&r.basis) {
+    let phase = r.rows.iter().any(|row| row.phase.is_some());
+    let mut out = csv_head(&r.basis, &r.columns, phase)?;
+    let rows = csv_rows(&r.rows, phase)?;
+    out.push_str(&String::from_utf8(rows).map_err(|e| CliError::Output(e.to_string()))?);
+    Ok(out)
+}
+
+/// The basis as `#` comment lines and the header row of the CSV table; `phase` when the rows
+/// carry a phase column.
+pub fn csv_head(
+    basis: &TableBasis,
+    columns: &[TableColumn],
+    phase: bool,
+) -> Result<String, CliError> {
+    let mut out = Vec::with_capacity(2048);
+    for (k, v) in basis_lines(basis) {
         out.extend_from_slice(format!("# {k}: {}\n", v.replace('\n', " ")).as_bytes());
     }
     let mut w = csv::Writer::from_writer(out);
     let e = |e: csv::Error| CliError::Output(e.to_string());
-    let phase = r.rows.iter().any(|row| row.phase.is_some());
     let mut header = vec!["temperature_k".to_string(), "pressure_pa".to_string()];
     if phase {
         header.push("phase".to_string());
     }
-    header.extend(r.columns.iter().map(|c| c.key.to_string()));
+    header.extend(columns.iter().map(|c| c.key.to_string()));
     header.push("flag".to_string());
     header.push("error".to_string());
     w.write_record(&header).map_err(e)?;
+    let bytes = w
+        .into_inner()
+        .map_err(|e| CliError::Output(e.to_string()))?;
+    String::from_utf8(bytes).map_err(|e| CliError::Output(e.to_string()))
+}
+
+/// Rows of the CSV table, SI units (about 64 bytes a row).
+pub fn csv_rows(rows: &[TableRow], phase: bool) -> Result<Vec<u8>, CliError> {
+    use std::fmt::Write as _;
+    let mut w = csv::WriterBuilder::new()
+        .has_headers(false)
+        .from_writer(Vec::with_capacity(64 * rows.len()));
+    let e = |e: csv::Error| CliError::Output(e.to_string());
     // One formatting buffer for every cell (a million-row table formats millions of
     // numbers).
     let mut cell = String::new();
@@ -240,7 +264,7 @@ pub fn csv(r: &TableReport) -> Result<String, CliError> {
         let _ = write!(cell, "{v:e}");
         w.write_field(&cell)
     };
-    for row in &r.rows {
+    for row in rows {
         number(&mut w, row.temperature_k).map_err(e)?;
         number(&mut w, row.pressure_pa).map_err(e)?;
         if phase {
@@ -258,10 +282,7 @@ pub fn csv(r: &TableReport) -> Result<String, CliError> {
             .map_err(e)?;
         w.write_record(None::<&[u8]>).map_err(e)?;
     }
-    let bytes = w
-        .into_inner()
-        .map_err(|e| CliError::Output(e.to_string()))?;
-    String::from_utf8(bytes).map_err(|e| CliError::Output(e.to_string()))
+    w.into_inner().map_err(|e| CliError::Output(e.to_string()))
 }
 
 /// An Excel workbook: sheet "table" (display units, numbers as numbers) and sheet "basis".
