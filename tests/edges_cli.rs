@@ -868,3 +868,20 @@ fn a_streamed_table_is_the_whole_table_in_grid_order() {
     let z = result(&v, "pr")["z"].as_f64().unwrap();
     assert!((last[2] / z - 1.0).abs() < 1e-12, "{} vs {z}", last[2]);
 }
+
+#[test]
+fn a_default_comparison_inside_every_range_ends_with_exit_zero() {
+    // Exit 3 means "read the warnings"; a default `compare` (models "all", the reference
+    // formulation as the reference) once exited 3 only because the reference was left out of
+    // the compared models. Methane at 200-400 K and 1-150 bar is inside every range.
+    let (_, code, err) = run_json(&[
+        "compare",
+        "--fluid",
+        "methane",
+        "-t",
+        "200..400 K step 50",
+        "-p",
+        "1..150 bar n 5",
+    ]);
+    assert_eq!(code, 0, "{err}");
+}

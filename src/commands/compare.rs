@@ -333,12 +333,17 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
     let mut warnings = Vec::new();
     let mut ids = models::resolve_ids(&args.model, &feed)?;
     if let Reference::Model(r) = &reference {
+        // "all" includes the reference formulation, which is then the reference and not a
+        // compared model: nothing the user must read. Only a list that names it is warned.
+        let named = !args.model.trim().eq_ignore_ascii_case("all");
         if ids.contains(&r.id) {
             ids.retain(|i| i != &r.id);
-            warnings.push(format!(
-                "{} is the reference and is left out of the compared models",
-                r.id
-            ));
+            if named {
+                warnings.push(format!(
+                    "{} is the reference and is left out of the compared models",
+                    r.id
+                ));
+            }
         }
     }
     if ids.is_empty() {
