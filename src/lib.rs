@@ -10,6 +10,9 @@
 //! - [`commands`]: one function per command, returning a report.
 //! - [`report`]: the report structs; [`render`]: one file per output format.
 
+// User input must never panic: no unwrap or expect outside tests.
+#![cfg_attr(not(test), deny(clippy::unwrap_used, clippy::expect_used))]
+
 pub mod cli;
 pub mod commands;
 pub mod compare;

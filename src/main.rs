@@ -3,6 +3,9 @@
 //! `main` only runs the command, prints one error message and maps it to an exit code; all
 //! the work is in [`zfactor::run`].
 
+// User input must never panic: no unwrap or expect outside tests.
+#![cfg_attr(not(test), deny(clippy::unwrap_used, clippy::expect_used))]
+
 use std::process::ExitCode;
 
 /// mimalloc's per-thread heaps: the audit and the grids allocate from every core at once, and

@@ -25,6 +25,9 @@
 //! assert!(s.props.z > 0.85 && s.props.z < 0.95);
 //! ```
 
+// User input must never panic: no unwrap or expect outside tests.
+#![cfg_attr(not(test), deny(clippy::unwrap_used, clippy::expect_used))]
+
 pub mod batch;
 pub mod catalogue;
 pub mod component;

@@ -71,6 +71,9 @@
 //! [`search`](mod@search) (substring search), [`kij`](mod@kij) (interaction parameters), [`source`](mod@source)
 //! (citations), [`record`] (the record type), [`error`] (typed errors).
 
+// User input must never panic: no unwrap or expect outside tests.
+#![cfg_attr(not(test), deny(clippy::unwrap_used, clippy::expect_used))]
+
 pub mod data;
 pub mod error;
 pub mod kij;
