@@ -32,9 +32,17 @@ impl StateCheck {
     /// The checks of `built` for `feed`.
     pub fn new(built: &BuiltModel, feed: &Feed) -> Self {
         StateCheck {
+            solid: crate::solid_check::pure_lines(feed),
+            ..Self::range_only(built, feed)
+        }
+    }
+
+    /// The range checks alone (no solid curves).
+    fn range_only(built: &BuiltModel, feed: &Feed) -> Self {
+        StateCheck {
             range: built.pure.as_ref().map(|f| f.range()).filter(|r| r.stated),
             virial_rho_c: (built.id == "virial").then(|| pseudo_critical_density(feed)),
-            solid: crate::solid_check::pure_lines(feed),
+            solid: None,
         }
     }
 
@@ -43,16 +51,8 @@ impl StateCheck {
     /// joined by "; ".
     pub fn flag(&self, t: f64, p: f64, rho: f64) -> Option<String> {
         let mut f = Vec::new();
-        if self
-            .range
-            .is_some_and(|r| t < r.t_min || t > r.t_max || p > r.p_max)
-        {
+        if self.outside_range(t, p).is_some() || self.beyond_virial(t, p, rho).is_some() {
             f.push("outside range");
-        }
-        if let Some(rho_c) = self.virial_rho_c {
-            if beyond_virial(t, p, rho, rho_c) {
-                f.push("outside range");
-            }
         }
         if let Some((l, name)) = &self.solid {
             match eos::solid::check(l, name, t, p) {
@@ -61,47 +61,47 @@ impl StateCheck {
                 eos::solid::SolidCheck::Fluid => {}
             }
         }
-        f.dedup();
         (!f.is_empty()).then(|| f.join("; "))
     }
-}
 
-/// True when the truncated virial series is used beyond its range.
-fn beyond_virial(t: f64, p: f64, rho: f64, rho_c: f64) -> bool {
-    let z = p / (rho * R * t);
-    rho > VIRIAL_MAX_DENSITY_OVER_CRITICAL * rho_c || (z - 1.0).abs() > VIRIAL_MAX_CORRECTION
+    /// The published range when (T, P) lies outside it.
+    fn outside_range(&self, t: f64, p: f64) -> Option<eos::pure::FluidRange> {
+        self.range
+            .filter(|r| t < r.t_min || t > r.t_max || p > r.p_max)
+    }
+
+    /// (rho / rho_c, Z - 1) when the truncated virial series is used beyond its range.
+    fn beyond_virial(&self, t: f64, p: f64, rho: f64) -> Option<(f64, f64)> {
+        let rho_c = self.virial_rho_c?;
+        let z = p / (rho * R * t);
+        (rho > VIRIAL_MAX_DENSITY_OVER_CRITICAL * rho_c || (z - 1.0).abs() > VIRIAL_MAX_CORRECTION)
+            .then_some((rho / rho_c, z - 1.0))
+    }
 }
 
 /// Warnings for a state of `built` at (T, P) with molar density `rho`: outside the model's
 /// published range, or (for the truncated virial equation) beyond its density limit.
 pub fn outside(built: &BuiltModel, feed: &Feed, t: f64, p: f64, rho: f64) -> Vec<String> {
+    let check = StateCheck::range_only(built, feed);
     let mut out = Vec::new();
-    if let Some(r) = built.pure.as_ref().map(|f| f.range()).filter(|r| r.stated) {
-        if t < r.t_min || t > r.t_max || p > r.p_max {
-            out.push(format!(
-                "outside the published range of {} ({} K to {} K, up to {} MPa): T = {} K, \
-                 P = {} MPa; the value is an extrapolation",
-                built.name,
-                r.t_min,
-                r.t_max,
-                r.p_max / 1e6,
-                round(t),
-                round(p / 1e6)
-            ));
-        }
+    if let Some(r) = check.outside_range(t, p) {
+        out.push(format!(
+            "outside the published range of {} ({} K to {} K, up to {} MPa): T = {} K, P = {} \
+             MPa; the value is an extrapolation",
+            built.name,
+            r.t_min,
+            r.t_max,
+            r.p_max / 1e6,
+            round(t),
+            round(p / 1e6)
+        ));
     }
-    if built.id == "virial" {
-        let rho_c = pseudo_critical_density(feed);
-        let z = p / (rho * R * t);
-        if beyond_virial(t, p, rho, rho_c) {
-            out.push(format!(
-                "beyond the range of the truncated virial equation: it holds up to about half \
-                 the critical density, where B rho stays a correction well below 0.5 (common \
-                 practice); here rho / rho_c = {:.3} and Z - 1 = {:.3}",
-                rho / rho_c,
-                z - 1.0
-            ));
-        }
+    if let Some((rho_r, z1)) = check.beyond_virial(t, p, rho) {
+        out.push(format!(
+            "beyond the range of the truncated virial equation: it holds up to about half the \
+             critical density, where B rho stays a correction well below 0.5 (common practice); \
+             here rho / rho_c = {rho_r:.3} and Z - 1 = {z1:.3}"
+        ));
     }
     out
 }
