@@ -278,12 +278,11 @@ pub fn csv(r: &CompareReport) -> Result<String, CliError> {
 /// caution) on stderr.
 pub fn render(r: &CompareReport, format: crate::cli::Format) -> Result<(), CliError> {
     use crate::cli::Format;
-    let text = match format {
-        Format::Table => text(r),
-        Format::Csv => csv(r)?,
-        Format::Json => crate::render::json::to_string(r)?,
-    };
-    crate::render::emit(&text)?;
+    match format {
+        Format::Table => crate::render::emit(&text(r))?,
+        Format::Csv => crate::render::emit(&csv(r)?)?,
+        Format::Json => crate::render::json::to_stdout(r)?,
+    }
     match format {
         Format::Table => crate::render::side_notes(&r.warnings, None),
         _ => crate::render::side_notes(&r.warnings, Some(r.caution)),
