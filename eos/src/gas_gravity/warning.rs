@@ -18,11 +18,30 @@ pub struct RangeWarning {
 
 impl std::fmt::Display for RangeWarning {
     fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        // Four significant figures: the value is compared with a range given to two or three.
         write!(
             f,
             "{} = {} is outside {} to {} of {}",
-            self.quantity, self.value, self.min, self.max, self.correlation
+            self.quantity,
+            Sig4(self.value),
+            self.min,
+            self.max,
+            self.correlation
         )
+    }
+}
+
+/// A number written to four significant figures without trailing floating-point digits.
+struct Sig4(f64);
+
+impl std::fmt::Display for Sig4 {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        let v = self.0;
+        if v == 0.0 || !v.is_finite() {
+            return write!(f, "{v}");
+        }
+        let decimals = (3 - v.abs().log10().floor() as i32).max(0) as usize;
+        write!(f, "{v:.decimals$}")
     }
 }
 
@@ -43,5 +62,31 @@ pub(crate) fn check(
             min,
             max,
         });
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn a_warning_quotes_its_value_without_floating_point_dust() {
+        let w = RangeWarning {
+            correlation: "Sutton (1985)",
+            quantity: "gas gravity",
+            value: 0.553_862_460_167_030_9,
+            min: 0.57,
+            max: 1.68,
+        };
+        assert_eq!(
+            w.to_string(),
+            "gas gravity = 0.5539 is outside 0.57 to 1.68 of Sutton (1985)"
+        );
+        let w = RangeWarning {
+            value: 212.310_519_183_895_7,
+            quantity: "Ppr",
+            ..w
+        };
+        assert!(w.to_string().starts_with("Ppr = 212.3 is"), "{w}");
     }
 }
