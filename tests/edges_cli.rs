@@ -885,3 +885,35 @@ fn a_default_comparison_inside_every_range_ends_with_exit_zero() {
     ]);
     assert_eq!(code, 0, "{err}");
 }
+
+#[test]
+fn a_flash_warns_only_about_what_its_answer_depends_on() {
+    // A bubble point does not depend on the ideal-gas heat capacity; at -50 degC propane's
+    // and butane's fits (from 300 K) are extrapolated, which once gave exit 3 here. A (P, h)
+    // flash does depend on it, and still warns.
+    let gas = "methane=0.8,ethane=0.1,propane=0.06,n-butane=0.04";
+    let (_, code, err) = run_json(&[
+        "flash",
+        "--mix",
+        gas,
+        "-t",
+        "-50 degC",
+        "--bubble-pressure",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(code, 0, "{err}");
+    let (_, code, err) = run_json(&[
+        "flash",
+        "--mix",
+        gas,
+        "-p",
+        "30 bar",
+        "--enthalpy",
+        "-7 kJ/mol",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(code, 3, "{err}");
+    assert!(err.contains("extrapolated"), "{err}");
+}

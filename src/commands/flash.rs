@@ -226,8 +226,15 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
         check_triple_points(&feed, r.temperature_k, "the state found lies at")?;
         Ok(r)
     })?;
+    // The split at (T, P) and the bubble and dew points do not depend on the ideal-gas heat
+    // capacity; only the (P, h) and (P, s) flashes do. Elsewhere its extrapolation is a
+    // note on the printed h and s, not a warning about the answer.
+    let energy_spec = matches!(spec, Spec::Ph(..) | Spec::Ps(..));
     for r in &mut results {
-        let (notes, more) = cp_extrapolation(&feed, r.temperature_k);
+        let (mut notes, mut more) = cp_extrapolation(&feed, r.temperature_k);
+        if !energy_spec {
+            notes.append(&mut more);
+        }
         r.notes.extend(notes);
         let freeze = crate::solid_check::freeze_out(&feed, r.temperature_k);
         for w in more.into_iter().chain(freeze) {
