@@ -10,7 +10,7 @@ use fluids::ComponentRecord;
 /// curves, else its triple point (the reference formulation's, with its pressure, or the
 /// component table's temperature).
 fn lines(r: &ComponentRecord) -> Option<solid::SolidLines> {
-    let formulation = eos::helmholtz::reference_for(&r.id).map(|h| h.formulation());
+    let formulation = eos::helmholtz::reference_formulation(&r.id);
     let t = formulation.map(|f| f.t_triple).or(r.ttriple_k);
     let p = formulation.map(|f| f.p_triple);
     solid::lines(&r.id, t, p)

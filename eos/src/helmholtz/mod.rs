@@ -50,5 +50,5 @@ pub use derivs::Derivs;
 pub use fluid::{steam_table_zero, HelmholtzFluid};
 pub use formulation::{Formulation, Tier, Validity};
 pub use properties::FluidProperties;
-pub use registry::{formulation, keys, reference_for, technical_for};
+pub use registry::{formulation, keys, reference_for, reference_formulation, technical_for};
 pub use saturation::{Saturation, SaturationMethod};

@@ -171,13 +171,22 @@ fn normalise(name: &str) -> String {
 }
 
 fn find(name: &str, tier: Tier) -> Option<HelmholtzFluid> {
+    find_formulation(name, tier).map(HelmholtzFluid::new)
+}
+
+fn find_formulation(name: &str, tier: Tier) -> Option<&'static Formulation> {
     let n = normalise(name);
     ENTRIES
         .iter()
         .zip(PARSED.iter())
         .find(|(e, _)| e.meta.tier == tier && (e.names.contains(&n.as_str()) || e.meta.key == name))
         .and_then(|(_, f)| f.as_ref().ok())
-        .map(HelmholtzFluid::new)
+}
+
+/// The reference formulation's constants (triple point, range, ...) of a fluid by name,
+/// formula or key, without building the fluid (no density solves).
+pub fn reference_formulation(component_name_or_id: &str) -> Option<&'static Formulation> {
+    find_formulation(component_name_or_id, Tier::Reference)
 }
 
 /// The reference formulation of a fluid by name, formula or key: water/steam/h2o,
