@@ -1,10 +1,10 @@
-//! Reading an audited sheet (CSV streamed in chunks; .xlsx through calamine, with merged
-//! cells found) and writing its annotated copy atomically: a temporary file in the same
+//! Reading an audited sheet (CSV streamed in chunks; .xlsx row by row through
+//! [`crate::commands::audit_sheet`], with merged cells found) and writing its annotated copy atomically: a temporary file in the same
 //! folder, renamed over the output only when complete. The input is never written.
 
-use crate::commands::audit_row::{column_letter, BadCell};
+use crate::commands::audit_row::BadCell;
+use crate::commands::audit_sheet::Sheet;
 use crate::error::CliError;
-use calamine::{open_workbook, Data, Reader, Xlsx};
 use std::fs::File;
 use std::io::BufReader;
 use std::path::{Path, PathBuf};
@@ -46,11 +46,8 @@ pub enum Source {
         /// program shows a CSV file; the header is row 1).
         next_row: usize,
     },
-    Xlsx {
-        headers: Vec<String>,
-        rows: std::vec::IntoIter<RawRow>,
-        sheet: String,
-    },
+    /// A worksheet, read row by row.
+    Xlsx(Sheet),
 }
 
 impl Source {
@@ -79,61 +76,7 @@ impl Source {
             }
             Kind::Xlsx => {
                 not_a_workbook(path).map_err(err)?;
-                let mut wb: Xlsx<_> = open_workbook(path).map_err(|e| err(format!("{e}")))?;
-                let names = wb.sheet_names();
-                let name = match sheet {
-                    Some(s) => names.iter().find(|n| *n == s).cloned().ok_or_else(|| {
-                        err(format!(
-                            "no sheet \"{s}\"; the sheets are: {}",
-                            names.join(", ")
-                        ))
-                    })?,
-                    None => names
-                        .first()
-                        .cloned()
-                        .ok_or_else(|| err("the workbook has no sheet".to_string()))?,
-                };
-                let range = wb.worksheet_range(&name).map_err(|e| err(format!("{e}")))?;
-                let merged = wb
-                    .worksheet_merge_cells(&name)
-                    .transpose()
-                    .map_err(|e| err(format!("{e}")))?
-                    .unwrap_or_default();
-                let (r0, c0) = range.start().unwrap_or((0, 0));
-                let mut all = range.rows().enumerate().map(|(i, r)| {
-                    let abs = r0 as usize + i;
-                    let mut cells: Vec<String> = vec![String::new(); c0 as usize];
-                    cells.extend(r.iter().map(cell_text));
-                    (abs, cells)
-                });
-                let headers = all
-                    .next()
-                    .map(|(_, h)| h.into_iter().map(|s| s.trim().to_string()).collect())
-                    .ok_or_else(|| err(format!("sheet \"{name}\" is empty")))?;
-                let rows: Vec<RawRow> = all
-                    .map(|(abs, cells)| {
-                        let hit = merged.iter().find(|d| {
-                            d.start.0 as usize <= abs && abs <= d.end.0 as usize && d.start != d.end
-                        });
-                        let problem = hit.map(|d| BadCell {
-                            row: abs + 1,
-                            column: column_letter(d.start.1 as usize),
-                            message: format!(
-                                "merged cells {}{}:{}{}",
-                                column_letter(d.start.1 as usize),
-                                d.start.0 + 1,
-                                column_letter(d.end.1 as usize),
-                                d.end.0 + 1
-                            ),
-                        });
-                        (abs + 1, csv::StringRecord::from(cells), problem)
-                    })
-                    .collect();
-                Ok(Source::Xlsx {
-                    headers,
-                    rows: rows.into_iter(),
-                    sheet: name,
-                })
+                Ok(Source::Xlsx(Sheet::open(path, sheet).map_err(err)?))
             }
         }
     }
@@ -141,7 +84,8 @@ impl Source {
     /// The header row.
     pub fn headers(&self) -> &[String] {
         match self {
-            Source::Csv { headers, .. } | Source::Xlsx { headers, .. } => headers,
+            Source::Csv { headers, .. } => headers,
+            Source::Xlsx(sheet) => &sheet.headers,
         }
     }
 
@@ -149,7 +93,7 @@ impl Source {
     pub fn sheet(&self) -> Option<&str> {
         match self {
             Source::Csv { .. } => None,
-            Source::Xlsx { sheet, .. } => Some(sheet),
+            Source::Xlsx(sheet) => Some(&sheet.name),
         }
     }
 
@@ -187,7 +131,7 @@ impl Source {
                     }
                 }
             }
-            Source::Xlsx { rows, .. } => out.extend(rows.by_ref().take(n)),
+            Source::Xlsx(sheet) => sheet.next_rows(n, &mut out),
         }
         out
     }
@@ -217,20 +161,6 @@ fn not_a_workbook(path: &Path) -> Result<(), String> {
     })
 }
 
-/// Text of a workbook cell; numbers in their shortest exact form.
-fn cell_text(d: &Data) -> String {
-    match d {
-        Data::Empty => String::new(),
-        Data::String(s) => s.clone(),
-        Data::Float(f) => format!("{f}"),
-        Data::Int(i) => format!("{i}"),
-        Data::Bool(b) => format!("{b}"),
-        Data::DateTime(t) => format!("{t}"),
-        Data::DateTimeIso(s) | Data::DurationIso(s) => s.clone(),
-        Data::Error(e) => format!("#{e:?}"),
-    }
-}
-
 /// The annotated copy being written to a temporary file.
 pub enum Sink {
     Csv {
@@ -238,8 +168,10 @@ pub enum Sink {
         tmp: PathBuf,
         dest: PathBuf,
     },
+    /// A workbook whose one sheet is written row by row to a temporary file ("constant
+    /// memory" mode of rust_xlsxwriter), so memory does not grow with the sheet.
     Xlsx {
-        sheet: Box<rust_xlsxwriter::Worksheet>,
+        book: Box<rust_xlsxwriter::Workbook>,
         row: u32,
         tmp: PathBuf,
         dest: PathBuf,
@@ -297,12 +229,16 @@ impl Sink {
                     dest: dest.to_path_buf(),
                 }
             }
-            Kind::Xlsx => Sink::Xlsx {
-                sheet: Box::new(rust_xlsxwriter::Worksheet::new()),
-                row: 0,
-                tmp,
-                dest: dest.to_path_buf(),
-            },
+            Kind::Xlsx => {
+                let mut book = rust_xlsxwriter::Workbook::new();
+                book.add_worksheet_with_constant_memory();
+                Sink::Xlsx {
+                    book: Box::new(book),
+                    row: 0,
+                    tmp,
+                    dest: dest.to_path_buf(),
+                }
+            }
         })
     }
 
@@ -333,7 +269,8 @@ impl Sink {
                 let bytes = w.into_inner().map_err(out_err)?;
                 self.write_csv_bytes(&bytes)
             }
-            Sink::Xlsx { sheet, row, .. } => {
+            Sink::Xlsx { book, row, .. } => {
+                let sheet = book.worksheet_from_index(0).map_err(out_err)?;
                 let bold = rust_xlsxwriter::Format::new().set_bold();
                 for (c, text) in cells.iter().enumerate() {
                     let text = text.to_string();
@@ -362,11 +299,12 @@ impl Sink {
                 (tmp, dest)
             }
             Sink::Xlsx {
-                sheet, tmp, dest, ..
+                mut book,
+                tmp,
+                dest,
+                ..
             } => {
-                let mut wb = rust_xlsxwriter::Workbook::new();
-                wb.push_worksheet(*sheet);
-                if let Err(e) = wb.save(&tmp) {
+                if let Err(e) = book.save(&tmp) {
                     let _ = std::fs::remove_file(&tmp);
                     return Err(out_err(e));
                 }

@@ -5,8 +5,8 @@
 
 use crate::cli::CompareArgs;
 use crate::compare::advice::{self, Candidate};
-use crate::compare::data_file::{self, Contents, Need, Options, RefValue};
-use crate::compare::engine::{self, Against, Answer, PointInput, PointResult};
+use crate::compare::data_file::{self, Need, Options, RefValue, Row, Skipped};
+use crate::compare::engine::{self, Against, Answer, PointInput, PointResult, Screens};
 use crate::compare::grid;
 use crate::compare::ideal_map;
 use crate::compare::iso6976;
@@ -20,6 +20,7 @@ use crate::report::compare::{
     Band, CompareReport, GridAxes, IdealGasMap, ModelStats, PointReport, PointValue, ReferenceInfo,
     RegionStats, StateAt,
 };
+use crate::report::compare_points::{Encoding, PointStore, Policy};
 use crate::units;
 use eos::constants::R;
 
@@ -30,6 +31,10 @@ enum Reference {
     Nothing,
 }
 
+/// States evaluated and written per chunk: memory holds one chunk's results, whatever the
+/// size of the grid or the file.
+pub const CHUNK: usize = 16_384;
+
 /// Where a point came from in a file.
 #[derive(Debug, Clone, Default)]
 struct PointMeta {
@@ -37,15 +42,109 @@ struct PointMeta {
     source: Option<String>,
 }
 
+/// Where the states come from, read a chunk at a time.
+enum Rows {
+    /// A T-P grid, temperature-major; `next` is the index of the next state.
+    Grid {
+        t: Vec<f64>,
+        p: Vec<f64>,
+        next: usize,
+    },
+    /// A states or reference file, read row by row.
+    File {
+        reader: Box<data_file::Reader<std::io::BufReader<std::fs::File>>>,
+        /// For a pure fluid: rows whose component column names another fluid are left out.
+        only: Option<String>,
+        /// A states file: its Z or density column is not a reference.
+        states_only: bool,
+    },
+    /// Rows already read (the built-in data set).
+    Listed(std::vec::IntoIter<Row>),
+}
+
 /// The states and their origin.
 struct States {
-    points: Vec<PointInput>,
-    meta: Vec<PointMeta>,
+    rows: Rows,
     grid: Option<(Vec<f64>, Vec<f64>)>,
     /// (origin, T column, P column) of a file.
     file: Option<(String, String, String)>,
-    skipped: Vec<String>,
+    /// The number of states, when known beforehand (a grid, the data set), or an estimate
+    /// from the file's lines (for the progress bar).
+    expected: usize,
+    skipped: Skipped,
     from: &'static str,
+}
+
+impl States {
+    /// Up to `n` more states with their origin; none at the end.
+    fn next_chunk(&mut self, n: usize) -> Result<Vec<(PointInput, PointMeta)>, CliError> {
+        let point = |r: Row, keep_value: bool| {
+            (
+                PointInput {
+                    t: r.t,
+                    p: r.p,
+                    data: if keep_value { r.value } else { None },
+                    two_phase: r.two_phase,
+                },
+                PointMeta {
+                    line: Some(r.line),
+                    source: (!r.source.is_empty()).then_some(r.source),
+                },
+            )
+        };
+        match &mut self.rows {
+            Rows::Grid { t, p, next } => {
+                let total = t.len() * p.len();
+                let end = (*next + n).min(total);
+                let out = (*next..end)
+                    .map(|k| {
+                        (
+                            PointInput {
+                                t: t[k / p.len()],
+                                p: p[k % p.len()],
+                                data: None,
+                                two_phase: false,
+                            },
+                            PointMeta::default(),
+                        )
+                    })
+                    .collect();
+                *next = end;
+                Ok(out)
+            }
+            Rows::Listed(it) => Ok(it.by_ref().take(n).map(|r| point(r, true)).collect()),
+            Rows::File {
+                reader,
+                only,
+                states_only,
+            } => {
+                let mut out = Vec::new();
+                // Rows of other fluids are left out; read on until the chunk has rows or the
+                // file ends.
+                loop {
+                    let rows = reader
+                        .next_rows(n - out.len(), &mut self.skipped)
+                        .map_err(|e| CliError::BadInput(e.to_string()))?;
+                    if rows.is_empty() {
+                        return Ok(out);
+                    }
+                    out.extend(
+                        rows.into_iter()
+                            .filter(|r| match (only.as_deref(), r.component.as_deref()) {
+                                (Some(id), Some(name)) => {
+                                    fluids::find(name).is_ok_and(|f| f.id == id)
+                                }
+                                _ => true,
+                            })
+                            .map(|r| point(r, !*states_only)),
+                    );
+                    if out.len() == n {
+                        return Ok(out);
+                    }
+                }
+            }
+        }
+    }
 }
 
 /// Reads "1,2,5" (percent, a trailing % allowed) into ascending distinct tolerances.
@@ -75,61 +174,76 @@ pub fn parse_tolerances(text: &str) -> Result<Vec<f64>, CliError> {
     Ok(out)
 }
 
-fn read_file(path: &str) -> Result<String, CliError> {
-    std::fs::read_to_string(path)
-        .map_err(|e| CliError::BadInput(format!("cannot read \"{path}\": {e}")))
+/// Opens a states or reference file for reading row by row.
+fn open_file(
+    path: &str,
+    feed: &Feed,
+    ambient: f64,
+    need: Need,
+    skip_bad_rows: bool,
+    from: &'static str,
+) -> Result<States, CliError> {
+    let open = || {
+        std::fs::File::open(path)
+            .map_err(|e| CliError::BadInput(format!("cannot read \"{path}\": {e}")))
+    };
+    let reader = data_file::Reader::new(
+        std::io::BufReader::with_capacity(1 << 20, open()?),
+        path,
+        Options {
+            need,
+            molar_mass: feed.molar_mass(),
+            ambient_pa: ambient,
+            skip_bad_rows,
+        },
+    )
+    .map_err(|e| CliError::BadInput(e.to_string()))?;
+    let file = (
+        path.to_string(),
+        reader.t_column.clone(),
+        reader.p_column.clone(),
+    );
+    Ok(States {
+        rows: Rows::File {
+            reader: Box::new(reader),
+            only: feed.is_pure().then(|| feed.records[0].id.clone()),
+            states_only: need == Need::States,
+        },
+        grid: None,
+        file: Some(file),
+        expected: count_lines(open()?).saturating_sub(1),
+        skipped: Skipped::default(),
+        from,
+    })
 }
 
-fn from_contents(c: Contents, origin: &str, from: &'static str) -> States {
-    let points = c
-        .rows
-        .iter()
-        .map(|r| PointInput {
-            t: r.t,
-            p: r.p,
-            data: r.value,
-            two_phase: r.two_phase,
-        })
-        .collect();
-    let meta = c
-        .rows
-        .iter()
-        .map(|r| PointMeta {
-            line: Some(r.line),
-            source: (!r.source.is_empty()).then(|| r.source.clone()),
-        })
-        .collect();
-    States {
-        points,
-        meta,
-        grid: None,
-        file: Some((origin.to_string(), c.t_column, c.p_column)),
-        skipped: c.skipped,
-        from,
+/// Lines of a file (for the progress bar), read in blocks without keeping them.
+fn count_lines(f: std::fs::File) -> usize {
+    use std::io::Read;
+    let mut r = std::io::BufReader::with_capacity(1 << 20, f);
+    let mut buf = vec![0u8; 1 << 20];
+    let mut n = 0;
+    while let Ok(k) = r.read(&mut buf) {
+        if k == 0 {
+            break;
+        }
+        n += buf[..k].iter().filter(|&&b| b == b'\n').count();
     }
+    n
 }
 
 /// The grid or the states file.
 fn states_of(args: &CompareArgs, feed: &Feed, ambient: f64) -> Result<States, CliError> {
     if let Some(path) = &args.states {
-        let text = read_file(path)?;
-        let c = data_file::read(
-            &text,
-            path,
-            Options {
-                need: Need::States,
-                molar_mass: feed.molar_mass(),
-                ambient_pa: ambient,
-                skip_bad_rows: args.skip_bad_rows,
-            },
-        )
-        .map_err(|e| CliError::BadInput(e.to_string()))?;
-        let mut s = from_contents(c, path, "states file");
         // A states file carries no reference values even when it has a Z column.
-        for p in &mut s.points {
-            p.data = None;
-        }
-        return Ok(s);
+        return open_file(
+            path,
+            feed,
+            ambient,
+            Need::States,
+            args.skip_bad_rows,
+            "states file",
+        );
     }
     let (Some(tt), Some(pp)) = (&args.temperatures, &args.pressures) else {
         return Err(CliError::BadInput(
@@ -143,24 +257,16 @@ fn states_of(args: &CompareArgs, feed: &Feed, ambient: f64) -> Result<States, Cl
     let p = grid::parse_axis(pp, |s| units::pressure_reading(s, ambient).map(|r| r.0))
         .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
     grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;
-    let mut points = Vec::with_capacity(t.len() * p.len());
-    for &ti in &t {
-        for &pj in &p {
-            points.push(PointInput {
-                t: ti,
-                p: pj,
-                data: None,
-                two_phase: false,
-            });
-        }
-    }
-    let meta = vec![PointMeta::default(); points.len()];
     Ok(States {
-        points,
-        meta,
+        rows: Rows::Grid {
+            t: t.clone(),
+            p: p.clone(),
+            next: 0,
+        },
+        expected: t.len() * p.len(),
         grid: Some((t, p)),
         file: None,
-        skipped: Vec::new(),
+        skipped: Skipped::default(),
         from: "grid",
     })
 }
@@ -202,17 +308,15 @@ fn iso_states(feed: &Feed) -> Result<States, CliError> {
             feed.records[0].name
         )));
     }
-    let c = Contents {
-        rows,
-        skipped: Vec::new(),
-        t_column: all.t_column,
-        p_column: all.p_column,
-    };
-    Ok(from_contents(
-        c,
-        "built-in data set iso6976",
-        "reference data",
-    ))
+    let origin = "built-in data set iso6976".to_string();
+    Ok(States {
+        expected: rows.len(),
+        rows: Rows::Listed(rows.into_iter()),
+        grid: None,
+        file: Some((origin, all.t_column, all.p_column)),
+        skipped: Skipped::default(),
+        from: "reference data",
+    })
 }
 
 /// The reference and the states to compare at.
@@ -258,38 +362,19 @@ fn reference_and_states(
                         .to_string(),
                 ));
             }
-            let text = read_file(path)?;
-            let mut c = data_file::read(
-                &text,
-                path,
-                Options {
-                    need: Need::Reference,
-                    molar_mass: feed.molar_mass(),
-                    ambient_pa: ambient,
-                    skip_bad_rows: args.skip_bad_rows,
-                },
-            )
-            .map_err(|e| CliError::BadInput(e.to_string()))?;
-            if feed.is_pure() {
-                let id = &feed.records[0].id;
-                c.rows.retain(|r| {
-                    r.component
-                        .as_deref()
-                        .map_or(true, |name| fluids::find(name).is_ok_and(|f| &f.id == id))
-                });
-                if c.rows.is_empty() {
-                    return Err(CliError::BadInput(format!(
-                        "{path}: no row is for {} (see its component column)",
-                        feed.records[0].name
-                    )));
-                }
-            }
             Ok((
                 Reference::Data {
                     id: path.clone(),
                     citation: "the source column of the file, per point".to_string(),
                 },
-                from_contents(c, path, "reference data"),
+                open_file(
+                    path,
+                    feed,
+                    ambient,
+                    Need::Reference,
+                    args.skip_bad_rows,
+                    "reference data",
+                )?,
             ))
         }
         _ => {
@@ -322,6 +407,122 @@ pub fn dispatch(args: &CompareArgs) -> Result<crate::exit::Exit, CliError> {
     }
     crate::render::compare::render(&report, args.format)?;
     Ok(super::exit_for(&report.warnings))
+}
+
+/// What the points are kept for: the chosen output, and charts when asked.
+fn policy(args: &CompareArgs) -> Policy {
+    use crate::cli::Format;
+    if args.charts.is_some() {
+        return Policy::HoldAll;
+    }
+    match args.format {
+        Format::Table => Policy::HoldUpTo(crate::render::compare::MAX_TABLE_POINTS),
+        Format::Json => Policy::Spill {
+            after: CHUNK,
+            encoding: Encoding::Json,
+        },
+        Format::Csv => Policy::Spill {
+            after: CHUNK,
+            encoding: Encoding::Csv(crate::render::compare::csv_cells),
+        },
+    }
+}
+
+/// Per-region accumulators of one model.
+type RegionAccumulators = Vec<(Region, Accumulator<StateAt>)>;
+
+/// Everything summed over the points as they go by, so that no point need be kept.
+struct Tally {
+    /// Per model: all points, per region, failures.
+    all: Vec<Accumulator<StateAt>>,
+    per: Vec<RegionAccumulators>,
+    failed: Vec<usize>,
+    points: usize,
+    ref_failed: usize,
+    excluded_two_phase: usize,
+    flagged: usize,
+    reference_flagged: usize,
+    regions: Vec<Region>,
+    /// Spread between models: count, sum, maximum and where.
+    spreads: usize,
+    spread_sum: f64,
+    spread_max: Option<(f64, StateAt)>,
+    /// Z of the ideal-gas map's basis at each grid state, in grid order.
+    map_z: Vec<f64>,
+}
+
+impl Tally {
+    fn new(models: usize) -> Self {
+        let regions = || {
+            Region::ALL
+                .iter()
+                .filter(|r| r.is_used())
+                .map(|&r| (r, Accumulator::new()))
+                .collect()
+        };
+        Self {
+            all: vec![Accumulator::new(); models],
+            per: (0..models).map(|_| regions()).collect(),
+            failed: vec![0; models],
+            points: 0,
+            ref_failed: 0,
+            excluded_two_phase: 0,
+            flagged: 0,
+            reference_flagged: 0,
+            regions: Vec::new(),
+            spreads: 0,
+            spread_sum: 0.0,
+            spread_max: None,
+            map_z: Vec::new(),
+        }
+    }
+
+    /// Adds one point.
+    fn add(&mut self, r: &PointResult, report: &PointReport) {
+        let at = StateAt {
+            temperature_k: report.temperature_k,
+            pressure_pa: report.pressure_pa,
+        };
+        self.points += 1;
+        if !self.regions.contains(&r.region) {
+            self.regions.push(r.region);
+        }
+        if r.ref_error.is_some() {
+            self.ref_failed += 1;
+        }
+        if r.region == Region::TwoPhase {
+            self.excluded_two_phase += 1;
+        }
+        if report.values.iter().any(|v| v.flag.is_some()) {
+            self.flagged += 1;
+        }
+        if report.reference_flag.is_some() {
+            self.reference_flagged += 1;
+        }
+        for (k, a) in r.answers.iter().enumerate() {
+            if matches!(a, Answer::Failed(_)) {
+                self.failed[k] += 1;
+            }
+            if !r.region.is_used() {
+                continue;
+            }
+            if let Some(d) = r.dev_pct[k] {
+                self.all[k].add(at, d);
+                if let Some((_, acc)) = self.per[k].iter_mut().find(|(g, _)| *g == r.region) {
+                    acc.add(at, d);
+                }
+            }
+        }
+        if r.region != Region::TwoPhase {
+            if let Some(sp) = report.spread_pct {
+                self.spreads += 1;
+                self.spread_sum += sp;
+                if !self.spread_max.is_some_and(|(m, _)| sp <= m) {
+                    self.spread_max = Some((sp, at));
+                }
+            }
+        }
+    }
 }
 
 /// Runs the comparison.
@@ -362,62 +563,132 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
         Reference::Data { .. } => Against::Data,
         Reference::Nothing => Against::Nothing,
     };
-    let total = states.points.len() * (dyn_models.len() + 1);
-    let bar = crate::progress::bar(total, "comparing");
-    let step = (dyn_models.len() + 1) as u64;
-    let (mut results, screened) = engine::evaluate(
-        &dyn_models,
-        &against,
-        &namer,
-        &feed.mole,
-        &states.points,
-        || crate::progress::inc(&bar, step),
-    );
-    crate::progress::finish(bar);
+    let reference_model = match &reference {
+        Reference::Model(b) => Some(b),
+        _ => None,
+    };
+    let checks = Checks::new(&built, reference_model, &feed);
+    // The ideal-gas map's Z: the reference model's, or (without a reference) the most
+    // complete real-gas model's; none against data.
+    let map_basis: Option<Option<usize>> = match (&states.grid, &reference) {
+        (None, _) | (_, Reference::Data { .. }) => None,
+        (Some(_), Reference::Model(_)) => Some(None),
+        (Some(_), Reference::Nothing) => built
+            .iter()
+            .enumerate()
+            .filter(|(_, b)| b.id != "ideal")
+            .max_by_key(|(_, b)| advice::rank(&b.id).0)
+            .map(|(k, _)| Some(k)),
+    };
+    // A grid's phase screens are made once for the whole grid; a file's per chunk.
+    let grid_screens = states.grid.as_ref().map(|(t, p)| {
+        let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
+        Screens::new(
+            &dyn_models,
+            &against,
+            &namer,
+            &feed.mole,
+            t,
+            t.len() * p.len(),
+            p_low,
+        )
+    });
+    let mut screened = grid_screens.as_ref().is_some_and(Screens::is_active);
 
-    // Rows of a file that a model cannot compute: refused, or skipped with --skip-bad-rows.
-    if let Some((origin, tcol, pcol)) = &states.file {
-        let mut keep = vec![true; results.len()];
-        for (k, r) in results.iter().enumerate() {
-            let failure = r.ref_error.clone().or_else(|| {
-                r.answers.iter().find_map(|a| match a {
-                    Answer::Failed(e) => Some(e.clone()),
-                    Answer::Ok { .. } => None,
-                })
-            });
-            if let Some(e) = failure {
-                let line = states.meta[k].line.unwrap_or(0);
-                let msg = format!(
-                    "{origin}, line {line}, columns \"{tcol}\" and \"{pcol}\": the state is \
-                     outside a model's range: {e}"
-                );
-                if args.skip_bad_rows {
+    let step = (dyn_models.len() + 1) as u64;
+    let bar = crate::progress::bar(states.expected * (dyn_models.len() + 1), "comparing");
+    let mut tally = Tally::new(built.len());
+    let mut store = PointStore::new(policy(args));
+    loop {
+        let chunk = states.next_chunk(CHUNK)?;
+        if chunk.is_empty() {
+            break;
+        }
+        let (inputs, metas): (Vec<PointInput>, Vec<PointMeta>) = chunk.into_iter().unzip();
+        let tick = || crate::progress::inc(&bar, step);
+        let results = match &grid_screens {
+            Some(sc) => engine::evaluate_screened(
+                &dyn_models,
+                &against,
+                &namer,
+                &feed.mole,
+                &inputs,
+                sc,
+                tick,
+            ),
+            None => {
+                let (r, sc) =
+                    engine::evaluate(&dyn_models, &against, &namer, &feed.mole, &inputs, tick);
+                screened |= sc;
+                r
+            }
+        };
+        for ((r, pt), meta) in results.iter().zip(&inputs).zip(metas) {
+            // Rows of a file that a model cannot compute: refused, or skipped with
+            // --skip-bad-rows.
+            if let Some((origin, tcol, pcol)) = &states.file {
+                let failure = r.ref_error.clone().or_else(|| {
+                    r.answers.iter().find_map(|a| match a {
+                        Answer::Failed(e) => Some(e.clone()),
+                        Answer::Ok { .. } => None,
+                    })
+                });
+                if let Some(e) = failure {
+                    let line = meta.line.unwrap_or(0);
+                    let msg = format!(
+                        "{origin}, line {line}, columns \"{tcol}\" and \"{pcol}\": the state \
+                         is outside a model's range: {e}"
+                    );
+                    if !args.skip_bad_rows {
+                        return Err(CliError::BadInput(format!(
+                            "{msg} (pass --skip-bad-rows to leave such rows out)"
+                        )));
+                    }
                     states.skipped.push(msg);
-                    keep[k] = false;
-                } else {
-                    return Err(CliError::BadInput(format!(
-                        "{msg} (pass --skip-bad-rows to leave such rows out)"
-                    )));
+                    continue;
                 }
             }
-        }
-        let mut it = keep.iter();
-        results.retain(|_| *it.next().unwrap_or(&true));
-        let mut it = keep.iter();
-        states.points.retain(|_| *it.next().unwrap_or(&true));
-        let mut it = keep.iter();
-        states.meta.retain(|_| *it.next().unwrap_or(&true));
-        if results.is_empty() {
-            return Err(CliError::BadInput(format!(
-                "{origin}: every row was skipped: {}",
-                states.skipped.join("; ")
-            )));
+            let report = point_report(&built, &dyn_models, &checks, r, pt, meta, &feed);
+            if let Some(basis) = map_basis {
+                tally.map_z.push(match basis {
+                    None => r.ref_rho.map_or(f64::NAN, |rho| pt.p / (rho * R * pt.t)),
+                    Some(k) => r.answers[k].z().unwrap_or(f64::NAN),
+                });
+            }
+            tally.add(r, &report);
+            store.push(report).map_err(CliError::Output)?;
         }
     }
-    if !states.skipped.is_empty() {
+    crate::progress::finish(bar);
+    store.finish().map_err(CliError::Output)?;
+
+    if store.is_empty() {
+        let why = if states.skipped.count > 0 {
+            format!(
+                "every row was skipped: {}",
+                states.skipped.messages.join("; ")
+            )
+        } else {
+            format!(
+                "no row is for {} (see its component column)",
+                feed.records[0].name
+            )
+        };
+        let origin = states.file.as_ref().map_or("the states", |f| f.0.as_str());
+        return Err(CliError::BadInput(format!("{origin}: {why}")));
+    }
+    if states.skipped.count > 0 {
+        let listed = if states.skipped.count > states.skipped.messages.len() {
+            format!(
+                "; the first {} are listed in \"skipped\"",
+                states.skipped.messages.len()
+            )
+        } else {
+            "; see \"skipped\"".to_string()
+        };
         warnings.push(format!(
-            "{} row(s) skipped (--skip-bad-rows); see \"skipped\"",
-            states.skipped.len()
+            "{} row(s) skipped (--skip-bad-rows){listed}",
+            states.skipped.count
         ));
     }
 
@@ -425,71 +696,69 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
     let stats: Vec<ModelStats> = built
         .iter()
         .enumerate()
-        .map(|(k, b)| model_stats(k, b, &results, &states.points, has_reference))
+        .map(|(k, b)| model_stats(k, b, &tally, has_reference))
         .collect();
+    let n = tally.points;
     for s in &stats {
         if s.points_failed > 0 {
             warnings.push(format!(
-                "{} could not compute {} of {} states (see the points' \"error\")",
-                s.model,
-                s.points_failed,
-                results.len()
+                "{} could not compute {} of {n} states (see the points' \"error\")",
+                s.model, s.points_failed,
             ));
         }
     }
-    let ref_failed = results.iter().filter(|r| r.ref_error.is_some()).count();
-    if ref_failed > 0 {
+    if tally.ref_failed > 0 {
         warnings.push(format!(
-            "the reference could not compute {ref_failed} of {} states; they are left out",
-            results.len()
+            "the reference could not compute {} of {n} states; they are left out",
+            tally.ref_failed
         ));
     }
-    let excluded_two_phase = results
-        .iter()
-        .filter(|r| r.region == Region::TwoPhase)
-        .count();
-
-    let reference_model = match &reference {
-        Reference::Model(b) => Some(b),
-        _ => None,
-    };
-    let points = point_reports(
-        &built,
-        &dyn_models,
-        reference_model,
-        &results,
-        &states,
-        &feed,
-    );
-    let flagged = points
-        .iter()
-        .filter(|p| p.values.iter().any(|v| v.flag.is_some()))
-        .count();
-    let reference_flagged = points.iter().filter(|p| p.reference_flag.is_some()).count();
-    if flagged > 0 {
+    if tally.flagged > 0 {
         warnings.push(format!(
-            "at {flagged} of {} states a model is outside its range or in the solid region \
+            "at {} of {n} states a model is outside its range or in the solid region \
              (see the points' \"flag\"): its values there are extrapolations",
-            points.len()
+            tally.flagged
         ));
     }
-    if reference_flagged > 0 {
+    if tally.reference_flagged > 0 {
         warnings.push(format!(
-            "at {reference_flagged} of {} states the reference itself is outside its range or \
-             in the solid region (see the points' \"reference_flag\"): deviations there are \
-             measured against an extrapolation",
-            points.len()
+            "at {} of {n} states the reference itself is outside its range or in the solid \
+             region (see the points' \"reference_flag\"): deviations there are measured \
+             against an extrapolation",
+            tally.reference_flagged
         ));
     }
     let band = if has_reference {
         None
     } else {
-        band_of(&built, &points)
+        tally.spread_max.map(|(max, at)| Band {
+            models: built
+                .iter()
+                .filter(|b| b.id != "ideal")
+                .map(|b| b.id.clone())
+                .collect(),
+            mean_spread_pct: tally.spread_sum / tally.spreads as f64,
+            max_spread_pct: max,
+            max_at: at,
+        })
     };
-    let ideal_gas_map = states
-        .grid
-        .as_ref()
-        .and_then(|(t, p)| ideal_map_of(&reference, &built, &results, t, p, &tolerances));
+    let ideal_gas_map = match (&states.grid, map_basis) {
+        (Some((t, p)), Some(basis)) => {
+            let id = match (basis, &reference) {
+                (Some(k), _) => built[k].id.clone(),
+                (None, Reference::Model(b)) => b.id.clone(),
+                (None, _) => String::new(),
+            };
+            Some(ideal_map_of(
+                id,
+                std::mem::take(&mut tally.map_z),
+                t,
+                p,
+                &tolerances,
+            ))
+        }
+        _ => None,
+    };
     let reference_name = match &reference {
         Reference::Model(b) => b.id.clone(),
         Reference::Data { id, .. } => id.clone(),
@@ -516,9 +785,8 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
     } else {
         Vec::new()
     };
-    let mut regions: Vec<Region> = results.iter().map(|r| r.region).collect();
+    let mut regions = tally.regions.clone();
     regions.sort();
-    regions.dedup();
     let comp_ids: Vec<&str> = feed.records.iter().map(|r| r.id.as_str()).collect();
     let mut model_ids: Vec<&str> = ids.iter().map(String::as_str).collect();
     if let Reference::Model(b) = &reference {
@@ -554,57 +822,23 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
             pressures_pa: p.clone(),
         }),
         models: stats,
-        excluded_two_phase,
-        points,
+        excluded_two_phase: tally.excluded_two_phase,
+        points: store,
         band,
         ideal_gas_map,
         advice,
         weaknesses,
-        skipped_rows: states.skipped.len(),
-        skipped: states.skipped,
+        skipped_rows: states.skipped.count,
+        skipped: states.skipped.messages,
         charts: Vec::new(),
         warnings,
         caution: crate::CAUTION,
     })
 }
 
-fn at(points: &[PointInput], k: usize) -> StateAt {
-    StateAt {
-        temperature_k: points[k].t,
-        pressure_pa: points[k].p,
-    }
-}
-
 /// Statistics of model `k` over every point and per region.
-fn model_stats(
-    k: usize,
-    b: &BuiltModel,
-    results: &[PointResult],
-    points: &[PointInput],
-    has_reference: bool,
-) -> ModelStats {
-    let mut all = Accumulator::new();
-    let mut per: Vec<(Region, Accumulator)> = Region::ALL
-        .iter()
-        .filter(|r| r.is_used())
-        .map(|&r| (r, Accumulator::new()))
-        .collect();
-    let mut failed = 0;
-    for (i, r) in results.iter().enumerate() {
-        if matches!(r.answers[k], Answer::Failed(_)) {
-            failed += 1;
-        }
-        if !r.region.is_used() {
-            continue;
-        }
-        if let Some(d) = r.dev_pct[k] {
-            all.add(i, d);
-            if let Some((_, acc)) = per.iter_mut().find(|(reg, _)| *reg == r.region) {
-                acc.add(i, d);
-            }
-        }
-    }
-    let s = all.finish().filter(|_| has_reference);
+fn model_stats(k: usize, b: &BuiltModel, tally: &Tally, has_reference: bool) -> ModelStats {
+    let s = tally.all[k].finish().filter(|_| has_reference);
     ModelStats {
         model: b.id.clone(),
         model_name: b.name.clone(),
@@ -612,10 +846,10 @@ fn model_stats(
         mean_abs_dev_pct: s.map(|s| s.mean_abs_dev_pct),
         max_abs_dev_pct: s.map(|s| s.max_abs_dev_pct),
         bias_pct: s.map(|s| s.bias_pct),
-        max_at: s.map(|s| at(points, s.max_at)),
+        max_at: s.map(|s| s.max_at),
         points_used: s.map_or(0, |s| s.points),
-        points_failed: failed,
-        regions: per
+        points_failed: tally.failed[k],
+        regions: tally.per[k]
             .iter()
             .filter_map(|(reg, acc)| {
                 acc.finish().map(|s| RegionStats {
@@ -624,7 +858,7 @@ fn model_stats(
                     mean_abs_dev_pct: s.mean_abs_dev_pct,
                     max_abs_dev_pct: s.max_abs_dev_pct,
                     bias_pct: s.bias_pct,
-                    max_at: at(points, s.max_at),
+                    max_at: s.max_at,
                 })
             })
             .collect(),
@@ -632,133 +866,81 @@ fn model_stats(
     }
 }
 
-fn point_reports(
+/// The range and solid checks of the compared models and the reference model.
+struct Checks {
+    models: Vec<StateCheck>,
+    reference: Option<StateCheck>,
+}
+
+impl Checks {
+    fn new(built: &[BuiltModel], reference: Option<&BuiltModel>, feed: &Feed) -> Self {
+        Self {
+            models: built.iter().map(|b| StateCheck::new(b, feed)).collect(),
+            reference: reference.map(|b| StateCheck::new(b, feed)),
+        }
+    }
+}
+
+/// The report of one point.
+fn point_report(
     built: &[BuiltModel],
     dyn_models: &[&BuiltModel],
-    reference: Option<&BuiltModel>,
-    results: &[PointResult],
-    states: &States,
+    checks: &Checks,
+    r: &PointResult,
+    pt: &PointInput,
+    meta: PointMeta,
     feed: &Feed,
-) -> Vec<PointReport> {
+) -> PointReport {
     let mm = feed.molar_mass();
-    let checks: Vec<StateCheck> = built.iter().map(|b| StateCheck::new(b, feed)).collect();
-    let reference_check = reference.map(|b| StateCheck::new(b, feed));
-    results
-        .iter()
-        .zip(&states.points)
-        .zip(&states.meta)
-        .map(|((r, pt), meta)| {
-            let reference_z = match pt.data {
-                Some(RefValue::Z(z)) => Some(z),
-                _ => r.ref_rho.map(|rho| pt.p / (rho * R * pt.t)),
-            };
-            PointReport {
-                temperature_k: pt.t,
-                pressure_pa: pt.p,
-                phase: r.region.as_str(),
-                line: meta.line,
-                source: meta.source.clone(),
-                reference_z,
-                reference_density_kg_m3: r.ref_rho.map(|rho| rho * mm),
-                reference_flag: reference_check
-                    .as_ref()
-                    .zip(r.ref_rho)
-                    .and_then(|(c, rho)| c.flag(pt.t, pt.p, rho)),
-                values: built
-                    .iter()
-                    .zip(&checks)
-                    .zip(&r.answers)
-                    .zip(&r.dev_pct)
-                    .map(|(((b, c), a), d)| PointValue {
-                        flag: a.rho().and_then(|rho| c.flag(pt.t, pt.p, rho)),
-                        model: b.id.clone(),
-                        z: a.z(),
-                        molar_density_mol_m3: a.rho(),
-                        mass_density_kg_m3: a.rho().map(|rho| rho * mm),
-                        deviation_pct: *d,
-                        error: match a {
-                            Answer::Failed(e) => Some(e.clone()),
-                            Answer::Ok { .. } => None,
-                        },
-                    })
-                    .collect(),
-                spread_pct: engine::spread_pct(dyn_models, &r.answers),
-            }
-        })
-        .collect()
-}
-
-fn band_of(built: &[BuiltModel], points: &[PointReport]) -> Option<Band> {
-    let spreads: Vec<(usize, f64)> = points
-        .iter()
-        .enumerate()
-        .filter(|(_, p)| p.phase != Region::TwoPhase.as_str())
-        .filter_map(|(i, p)| p.spread_pct.map(|s| (i, s)))
-        .collect();
-    let (imax, max) = spreads.iter().copied().max_by(|a, b| a.1.total_cmp(&b.1))?;
-    let mean = spreads.iter().map(|s| s.1).sum::<f64>() / spreads.len() as f64;
-    Some(Band {
-        models: built
+    let reference_z = match pt.data {
+        Some(RefValue::Z(z)) => Some(z),
+        _ => r.ref_rho.map(|rho| pt.p / (rho * R * pt.t)),
+    };
+    PointReport {
+        temperature_k: pt.t,
+        pressure_pa: pt.p,
+        phase: r.region.as_str(),
+        line: meta.line,
+        source: meta.source,
+        reference_z,
+        reference_density_kg_m3: r.ref_rho.map(|rho| rho * mm),
+        reference_flag: checks
+            .reference
+            .as_ref()
+            .zip(r.ref_rho)
+            .and_then(|(c, rho)| c.flag(pt.t, pt.p, rho)),
+        values: built
             .iter()
-            .filter(|b| b.id != "ideal")
-            .map(|b| b.id.clone())
+            .zip(&checks.models)
+            .zip(&r.answers)
+            .zip(&r.dev_pct)
+            .map(|(((b, c), a), d)| PointValue {
+                flag: a.rho().and_then(|rho| c.flag(pt.t, pt.p, rho)),
+                model: b.id.clone(),
+                z: a.z(),
+                molar_density_mol_m3: a.rho(),
+                mass_density_kg_m3: a.rho().map(|rho| rho * mm),
+                deviation_pct: *d,
+                error: match a {
+                    Answer::Failed(e) => Some(e.clone()),
+                    Answer::Ok { .. } => None,
+                },
+            })
             .collect(),
-        mean_spread_pct: mean,
-        max_spread_pct: max,
-        max_at: StateAt {
-            temperature_k: points[imax].temperature_k,
-            pressure_pa: points[imax].pressure_pa,
-        },
-    })
+        spread_pct: engine::spread_pct(dyn_models, &r.answers),
+    }
 }
 
-/// The ideal-gas map from the reference model, or from the most complete real-gas model
-/// compared.
+/// The ideal-gas map from the Z of model `basis` at every grid state (grid order).
 fn ideal_map_of(
-    reference: &Reference,
-    built: &[BuiltModel],
-    results: &[PointResult],
+    basis: String,
+    z_flat: Vec<f64>,
     t: &[f64],
     p: &[f64],
     tolerances: &[f64],
-) -> Option<IdealGasMap> {
-    let np = p.len();
-    let z_of = |i: usize, j: usize| -> f64 {
-        let k = i * np + j;
-        match reference {
-            Reference::Model(_) => results[k]
-                .ref_rho
-                .map_or(f64::NAN, |rho| p[j] / (rho * R * t[i])),
-            _ => f64::NAN,
-        }
-    };
-    let (basis, z): (String, Vec<Vec<f64>>) = match reference {
-        Reference::Model(b) => (
-            b.id.clone(),
-            (0..t.len())
-                .map(|i| (0..np).map(|j| z_of(i, j)).collect())
-                .collect(),
-        ),
-        Reference::Data { .. } => return None,
-        Reference::Nothing => {
-            let k = built
-                .iter()
-                .enumerate()
-                .filter(|(_, b)| b.id != "ideal")
-                .max_by_key(|(_, b)| advice::rank(&b.id).0)
-                .map(|(k, _)| k)?;
-            (
-                built[k].id.clone(),
-                (0..t.len())
-                    .map(|i| {
-                        (0..np)
-                            .map(|j| results[i * np + j].answers[k].z().unwrap_or(f64::NAN))
-                            .collect()
-                    })
-                    .collect(),
-            )
-        }
-    };
+) -> IdealGasMap {
+    let z: Vec<Vec<f64>> = z_flat.chunks(p.len()).map(<[f64]>::to_vec).collect();
+    drop(z_flat);
     let error_pct = z
         .iter()
         .map(|row| {
@@ -767,11 +949,11 @@ fn ideal_map_of(
                 .collect()
         })
         .collect();
-    Some(IdealGasMap {
+    IdealGasMap {
         basis_model: basis,
         error_pct,
         tolerances: ideal_map::build(t, p, &z, tolerances),
-    })
+    }
 }
 
 #[cfg(test)]

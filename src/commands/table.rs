@@ -14,14 +14,15 @@ use crate::feed::{self, Feed};
 use crate::models::{self, BuiltModel};
 use crate::phase_screen::{self, PhaseScreen};
 use crate::range::StateCheck;
-use crate::report::table::{
-    ComponentSource, TableBasis, TableColumn, TableReport, TableRow, UnitNote,
-};
+use crate::report::table::{ComponentSource, TableBasis, TableColumn, TableRow, UnitNote};
 use crate::table_property::{self, Selection};
 use crate::units;
 use eos::state::RootChoice;
 use rayon::prelude::*;
 use std::path::Path;
+
+/// Rows of an .xlsx worksheet at most, the header row included (the format's limit).
+const XLSX_MAX_ROWS: usize = 1_048_576;
 
 /// Runs the command and writes the table.
 pub fn run(args: &TableArgs) -> Result<Exit, CliError> {
@@ -33,26 +34,7 @@ pub fn run(args: &TableArgs) -> Result<Exit, CliError> {
     if let Some(path) = &args.output {
         check_extension(Path::new(path), args.format)?;
     }
-    if args.format == TableFormat::Csv {
-        return stream_csv(args);
-    }
-    let report = build(args)?;
-    let bytes = crate::render::grid_table::render(&report, args.format)?;
-    match &args.output {
-        Some(path) => {
-            // The table reads no file, so there is no input it could overwrite.
-            crate::output_file::write(Path::new(path), &bytes, args.force, &[])?;
-            eprintln!("wrote {path}");
-        }
-        None => crate::render::emit(&String::from_utf8_lossy(&bytes))?,
-    }
-    for w in &report.warnings {
-        eprintln!("warning: {w}");
-    }
-    if args.format != TableFormat::Table {
-        eprintln!("caution: {}", crate::CAUTION);
-    }
-    Ok(super::exit_for(&report.warnings))
+    stream(args)
 }
 
 /// Refuses an output name whose extension says another format than the one written (a CSV
@@ -88,65 +70,67 @@ fn check_extension(path: &Path, format: TableFormat) -> Result<(), CliError> {
     )))
 }
 
-/// Computes the table (every row in memory: the formats that need the whole table at once;
-/// CSV is streamed, [`stream_csv`]).
-pub fn build(args: &TableArgs) -> Result<TableReport, CliError> {
-    let plan = Plan::new(args)?;
-    let bar = crate::progress::bar(plan.total(), "computing");
-    let rows = plan.rows(0..plan.total(), &bar);
-    crate::progress::finish(bar);
-    let mut tally = Tally::default();
-    tally.add(&rows);
-    Ok(TableReport {
-        basis: plan.basis.clone(),
-        columns: plan.columns(),
-        warnings: tally.warnings(rows.len()),
-        rows,
-    })
-}
-
-/// States per chunk of a streamed table: a few megabytes of CSV, whatever the grid's size.
+/// States per chunk: a few megabytes of output, whatever the grid's size.
 const CHUNK: usize = 1 << 16;
 
 /// Computes the table a chunk of states at a time (in grid order, each chunk on all cores)
-/// and writes its CSV as it goes, so that memory does not grow with the grid.
-fn stream_csv(args: &TableArgs) -> Result<Exit, CliError> {
+/// and writes it in the chosen format as it goes, so that memory does not grow with the
+/// grid.
+fn stream(args: &TableArgs) -> Result<Exit, CliError> {
     use std::io::Write;
     let plan = Plan::new(args)?;
     let total = plan.total();
+    if args.format == TableFormat::Xlsx && total >= XLSX_MAX_ROWS {
+        return Err(CliError::BadInput(format!(
+            "the grid has {total} states and an .xlsx sheet holds {} rows below its header; \
+             use --format csv for this grid, or fewer temperatures or pressures",
+            XLSX_MAX_ROWS - 1
+        )));
+    }
     let phase = plan.sel.phase;
     let columns = plan.columns();
     let bar = crate::progress::bar(total, "computing");
     let mut tally = Tally::default();
-    let mut write_all = |out: &mut dyn Write| -> Result<(), CliError> {
-        let io = |e: std::io::Error| CliError::Output(e.to_string());
-        let head = crate::render::grid_table::csv_head(&plan.basis, &columns, phase)?;
-        out.write_all(head.as_bytes()).map_err(io)?;
-        let mut start = 0;
+    let mut write_all = |out: &mut dyn Write, xlsx: Option<&Path>| -> Result<(), CliError> {
+        let first_end = CHUNK.min(total);
+        let first = plan.rows(0..first_end, &bar);
+        tally.add(&first);
+        let mut w = crate::render::grid_table::TableWriter::new(
+            args.format,
+            &plan.basis,
+            &columns,
+            phase,
+            &first,
+            first_end == total,
+            out,
+        )?;
+        w.rows(&first, out)?;
+        drop(first);
+        let mut start = first_end;
         while start < total {
             let end = (start + CHUNK).min(total);
             let rows = plan.rows(start..end, &bar);
             tally.add(&rows);
-            let bytes = crate::render::grid_table::csv_rows(&rows, phase)?;
-            out.write_all(&bytes).map_err(io)?;
+            w.rows(&rows, out)?;
             start = end;
         }
-        out.flush().map_err(io)
+        w.finish(&tally.warnings(total), out, xlsx)?;
+        out.flush().map_err(|e| CliError::Output(e.to_string()))
     };
     match &args.output {
         Some(path) => {
             // The table reads no file, so there is no input it could overwrite.
-            crate::output_file::write_with(Path::new(path), args.force, &[], |f, _| {
+            crate::output_file::write_with(Path::new(path), args.force, &[], |f, tmp| {
                 let mut w = std::io::BufWriter::with_capacity(1 << 20, f);
-                write_all(&mut w)
+                write_all(&mut w, Some(tmp))
             })?;
             crate::progress::finish(bar);
             eprintln!("wrote {path}");
         }
         None => {
             let stdout = std::io::stdout();
-            let mut lock = stdout.lock();
-            write_all(&mut lock)?;
+            let mut w = std::io::BufWriter::with_capacity(1 << 20, stdout.lock());
+            write_all(&mut w, None)?;
             crate::progress::finish(bar);
         }
     }
@@ -154,7 +138,9 @@ fn stream_csv(args: &TableArgs) -> Result<Exit, CliError> {
     for w in &warnings {
         eprintln!("warning: {w}");
     }
-    eprintln!("caution: {}", crate::CAUTION);
+    if args.format != TableFormat::Table {
+        eprintln!("caution: {}", crate::CAUTION);
+    }
     Ok(super::exit_for(&warnings))
 }
 

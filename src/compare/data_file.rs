@@ -157,118 +157,196 @@ fn kind_of(name: &str) -> Option<Kind> {
     }
 }
 
-/// Reads `text` (the file's contents) from `origin`.
-pub fn read(text: &str, origin: &str, opts: Options) -> Result<Contents, FileError> {
-    let ferr = |line: Option<usize>, column: Option<&str>, problem: String| FileError {
-        origin: origin.to_string(),
-        line,
-        column: column.map(str::to_string),
-        problem,
-    };
-    let mut rdr = csv::ReaderBuilder::new()
-        .flexible(true)
-        .trim(csv::Trim::All)
-        .from_reader(text.as_bytes());
-    let headers = rdr
-        .headers()
-        .map_err(|e| ferr(Some(1), None, format!("the header cannot be read: {e}")))?
-        .clone();
-    let mut cols: Vec<Column> = Vec::new();
-    for (i, h) in headers.iter().enumerate() {
-        let (name, unit) = split_header(h);
-        let Some(kind) = kind_of(&name) else { continue };
-        if let Some(c) = cols.iter().find(|c| c.kind == kind) {
-            return Err(ferr(
-                Some(1),
-                Some(h),
-                format!("the same quantity as column \"{}\"", c.header),
-            ));
+/// Skip messages kept in full; beyond these only the count grows, so a file of millions of
+/// bad rows read with `skip_bad_rows` stays bounded in memory.
+pub const MAX_SKIP_MESSAGES: usize = 1_000;
+
+/// Rows skipped with `skip_bad_rows`: every one counted, the first [`MAX_SKIP_MESSAGES`]
+/// kept with their message.
+#[derive(Debug, Clone, Default, PartialEq)]
+pub struct Skipped {
+    /// Rows skipped.
+    pub count: usize,
+    /// Their messages, the first [`MAX_SKIP_MESSAGES`] of them.
+    pub messages: Vec<String>,
+}
+
+impl Skipped {
+    /// Counts a skipped row and keeps its message while there is room.
+    pub fn push(&mut self, message: String) {
+        self.count += 1;
+        if self.messages.len() < MAX_SKIP_MESSAGES {
+            self.messages.push(message);
         }
-        check_unit(kind, &unit).map_err(|p| ferr(Some(1), Some(h), p))?;
-        cols.push(Column {
-            index: i,
-            kind,
-            header: h.to_string(),
-            unit,
-        });
     }
-    let found: Vec<&str> = headers.iter().collect();
-    let missing = |what: &str| {
-        ferr(
-            Some(1),
-            None,
-            format!(
-                "no {what} column; the header has: {}; write e.g. \
-                 \"T [K],P [bar],Z,source\" or \"T [degC],P [MPa],density [kg/m3],source\"",
-                found.join(", ")
-            ),
-        )
-    };
-    let has = |k: Kind| cols.iter().any(|c| c.kind == k);
-    if !has(Kind::T) {
-        return Err(missing("temperature (T [unit])"));
-    }
-    if !has(Kind::P) {
-        return Err(missing("pressure (P [unit])"));
-    }
-    if opts.need == Need::Reference {
-        if !has(Kind::Z) && !has(Kind::Density) {
-            return Err(missing("Z or density [unit]"));
+}
+
+/// A file read row by row: the header is checked on opening, rows are read in chunks with
+/// [`Reader::next_rows`], so memory does not grow with the file.
+pub struct Reader<R: std::io::Read> {
+    rdr: csv::Reader<R>,
+    record: csv::StringRecord,
+    cols: Vec<Column>,
+    opts: Options,
+    origin: String,
+    rows_read: usize,
+    /// The temperature column's header as written.
+    pub t_column: String,
+    /// The pressure column's header as written.
+    pub p_column: String,
+}
+
+impl<R: std::io::Read> Reader<R> {
+    /// Reads and checks the header of `input` from `origin`.
+    pub fn new(input: R, origin: &str, opts: Options) -> Result<Self, FileError> {
+        let ferr = |line: Option<usize>, column: Option<&str>, problem: String| FileError {
+            origin: origin.to_string(),
+            line,
+            column: column.map(str::to_string),
+            problem,
+        };
+        let mut rdr = csv::ReaderBuilder::new()
+            .flexible(true)
+            .trim(csv::Trim::All)
+            .from_reader(input);
+        let headers = rdr
+            .headers()
+            .map_err(|e| ferr(Some(1), None, format!("the header cannot be read: {e}")))?
+            .clone();
+        let mut cols: Vec<Column> = Vec::new();
+        for (i, h) in headers.iter().enumerate() {
+            let (name, unit) = split_header(h);
+            let Some(kind) = kind_of(&name) else { continue };
+            if let Some(c) = cols.iter().find(|c| c.kind == kind) {
+                return Err(ferr(
+                    Some(1),
+                    Some(h),
+                    format!("the same quantity as column \"{}\"", c.header),
+                ));
+            }
+            check_unit(kind, &unit).map_err(|p| ferr(Some(1), Some(h), p))?;
+            cols.push(Column {
+                index: i,
+                kind,
+                header: h.to_string(),
+                unit,
+            });
         }
-        if has(Kind::Z) && has(Kind::Density) {
-            return Err(ferr(
+        let found: Vec<&str> = headers.iter().collect();
+        let missing = |what: &str| {
+            ferr(
                 Some(1),
                 None,
-                "both Z and density columns; keep one as the reference value".to_string(),
-            ));
+                format!(
+                    "no {what} column; the header has: {}; write e.g. \
+                     \"T [K],P [bar],Z,source\" or \"T [degC],P [MPa],density [kg/m3],source\"",
+                    found.join(", ")
+                ),
+            )
+        };
+        let has = |k: Kind| cols.iter().any(|c| c.kind == k);
+        if !has(Kind::T) {
+            return Err(missing("temperature (T [unit])"));
         }
-        if !has(Kind::Source) {
-            return Err(missing("source"));
+        if !has(Kind::P) {
+            return Err(missing("pressure (P [unit])"));
+        }
+        if opts.need == Need::Reference {
+            if !has(Kind::Z) && !has(Kind::Density) {
+                return Err(missing("Z or density [unit]"));
+            }
+            if has(Kind::Z) && has(Kind::Density) {
+                return Err(ferr(
+                    Some(1),
+                    None,
+                    "both Z and density columns; keep one as the reference value".to_string(),
+                ));
+            }
+            if !has(Kind::Source) {
+                return Err(missing("source"));
+            }
+        }
+        let header_of = |k: Kind| {
+            cols.iter()
+                .find(|c| c.kind == k)
+                .map_or_else(String::new, |c| c.header.clone())
+        };
+        Ok(Self {
+            rdr,
+            record: csv::StringRecord::new(),
+            t_column: header_of(Kind::T),
+            p_column: header_of(Kind::P),
+            cols,
+            opts,
+            origin: origin.to_string(),
+            rows_read: 0,
+        })
+    }
+
+    fn error(&self, line: Option<usize>, column: Option<&str>, problem: String) -> FileError {
+        FileError {
+            origin: self.origin.clone(),
+            line,
+            column: column.map(str::to_string),
+            problem,
         }
     }
-    let header_of = |k: Kind| {
-        cols.iter()
-            .find(|c| c.kind == k)
-            .map_or_else(String::new, |c| c.header.clone())
-    };
-    let mut out = Contents {
-        t_column: header_of(Kind::T),
-        p_column: header_of(Kind::P),
-        ..Contents::default()
-    };
-    for rec in rdr.records() {
-        let rec = match rec {
-            Ok(r) => r,
-            Err(e) => {
-                let line = e.position().map(|p| p.line() as usize);
-                let err = ferr(line, None, format!("the line cannot be read: {e}"));
-                if opts.skip_bad_rows {
-                    out.skipped.push(err.to_string());
-                    continue;
-                }
-                return Err(err);
-            }
-        };
-        let line = rec.position().map_or(0, |p| p.line() as usize);
-        if rec.iter().all(str::is_empty) {
-            continue;
-        }
-        match read_row(&rec, line, &cols, opts) {
-            Ok(row) => out.rows.push(row),
-            Err((column, problem)) => {
-                let err = ferr(Some(line), Some(&column), problem);
-                if opts.skip_bad_rows {
-                    out.skipped.push(err.to_string());
-                } else {
+
+    /// Up to `n` more rows (none at the end of the file). A bad row is an error, or, with
+    /// `skip_bad_rows`, counted in `skipped`. At the end of a file that gave no usable row
+    /// at all, the error says so.
+    pub fn next_rows(&mut self, n: usize, skipped: &mut Skipped) -> Result<Vec<Row>, FileError> {
+        let mut out = Vec::with_capacity(n.min(1 << 16));
+        while out.len() < n {
+            match self.rdr.read_record(&mut self.record) {
+                Ok(false) => break,
+                Ok(true) => {}
+                Err(e) => {
+                    let line = e.position().map(|p| p.line() as usize);
+                    let err = self.error(line, None, format!("the line cannot be read: {e}"));
+                    if self.opts.skip_bad_rows {
+                        skipped.push(err.to_string());
+                        continue;
+                    }
                     return Err(err);
                 }
             }
+            let line = self.record.position().map_or(0, |p| p.line() as usize);
+            if self.record.iter().all(str::is_empty) {
+                continue;
+            }
+            match read_row(&self.record, line, &self.cols, self.opts) {
+                Ok(row) => out.push(row),
+                Err((column, problem)) => {
+                    let err = self.error(Some(line), Some(&column), problem);
+                    if self.opts.skip_bad_rows {
+                        skipped.push(err.to_string());
+                    } else {
+                        return Err(err);
+                    }
+                }
+            }
         }
+        self.rows_read += out.len();
+        if out.is_empty() && self.rows_read == 0 {
+            return Err(self.error(None, None, "no usable rows".to_string()));
+        }
+        Ok(out)
     }
-    if out.rows.is_empty() {
-        return Err(ferr(None, None, "no usable rows".to_string()));
-    }
-    Ok(out)
+}
+
+/// Reads `text` (the file's contents) from `origin`, every row at once (for small inputs
+/// such as the built-in data set; files are read with [`Reader`]).
+pub fn read(text: &str, origin: &str, opts: Options) -> Result<Contents, FileError> {
+    let mut reader = Reader::new(text.as_bytes(), origin, opts)?;
+    let mut skipped = Skipped::default();
+    let rows = reader.next_rows(usize::MAX, &mut skipped)?;
+    Ok(Contents {
+        rows,
+        skipped: skipped.messages,
+        t_column: reader.t_column,
+        p_column: reader.p_column,
+    })
 }
 
 /// Checks a header unit by reading a sample value with it.

@@ -119,11 +119,45 @@ pub fn answer(model: &BuiltModel, t: f64, p: f64, x: &[f64], screen: &PhaseScree
 }
 
 /// The phase screens of one grid: one per compared model, the reference model's and the
-/// naming model's.
-struct Screens {
+/// naming model's. Made once per grid ([`Screens::new`]) and shared by every chunk of it.
+pub struct Screens {
     models: Vec<PhaseScreen>,
     reference: PhaseScreen,
     namer: PhaseScreen,
+}
+
+impl Screens {
+    /// The screens for states at `temperatures` (K, repeats allowed), `states` states in all,
+    /// the lowest pressure `p_low` (Pa).
+    pub fn new(
+        models: &[&BuiltModel],
+        against: &Against<'_>,
+        namer: &BuiltModel,
+        x: &[f64],
+        temperatures: &[f64],
+        states: usize,
+        p_low: f64,
+    ) -> Self {
+        let screen = |m: &BuiltModel| PhaseScreen::new(m, x, temperatures, states, p_low);
+        Self {
+            models: models.iter().map(|m| screen(m)).collect(),
+            reference: match against {
+                Against::Model(m) => screen(m),
+                _ => PhaseScreen::default(),
+            },
+            // The naming model is asked only where it is not among the compared ones.
+            namer: if models.iter().any(|m| m.id == namer.id) {
+                PhaseScreen::default()
+            } else {
+                screen(namer)
+            },
+        }
+    }
+
+    /// True when an envelope screen spares states of the phase check.
+    pub fn is_active(&self) -> bool {
+        self.models.iter().any(PhaseScreen::is_active)
+    }
 }
 
 /// Evaluates one state.
@@ -223,30 +257,32 @@ where
 {
     let ts: Vec<f64> = points.iter().map(|pt| pt.t).collect();
     let p_low = points.iter().map(|pt| pt.p).fold(f64::INFINITY, f64::min);
-    let screen = |m: &BuiltModel| PhaseScreen::new(m, x, &ts, points.len(), p_low);
-    let screens = Screens {
-        models: models.iter().map(|m| screen(m)).collect(),
-        reference: match against {
-            Against::Model(m) => screen(m),
-            _ => PhaseScreen::default(),
-        },
-        // The naming model is asked only where it is not among the compared ones.
-        namer: if models.iter().any(|m| m.id == namer.id) {
-            PhaseScreen::default()
-        } else {
-            screen(namer)
-        },
-    };
-    let screened = screens.models.iter().any(PhaseScreen::is_active);
-    let results = points
+    let screens = Screens::new(models, against, namer, x, &ts, points.len(), p_low);
+    let results = evaluate_screened(models, against, namer, x, points, &screens, tick);
+    (results, screens.is_active())
+}
+
+/// [`evaluate`] with screens made beforehand (for a grid evaluated in chunks).
+pub fn evaluate_screened<F>(
+    models: &[&BuiltModel],
+    against: &Against<'_>,
+    namer: &BuiltModel,
+    x: &[f64],
+    points: &[PointInput],
+    screens: &Screens,
+    tick: F,
+) -> Vec<PointResult>
+where
+    F: Fn() + Sync,
+{
+    points
         .par_iter()
         .map(|pt| {
-            let r = evaluate_one(models, against, namer, x, pt, &screens);
+            let r = evaluate_one(models, against, namer, x, pt, screens);
             tick();
             r
         })
-        .collect();
-    (results, screened)
+        .collect()
 }
 
 /// Spread of the real-gas models' densities at one state, percent of their mean:

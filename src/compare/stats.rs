@@ -4,8 +4,8 @@
 //! over the N points used:
 //!
 //! - mean absolute deviation  MAD  = (1/N) sum |d_k|
-//! - maximum absolute deviation     = max |d_k|, with the index of the point where it occurs
-//!   (the first such point when several tie)
+//! - maximum absolute deviation     = max |d_k|, with where it occurs (the point's index or
+//!   its state, as the caller chooses; the first such point when several tie)
 //! - bias                           = (1/N) sum d_k
 //!
 //! These are the usual summary statistics of equation-of-state comparisons (average absolute
@@ -16,18 +16,30 @@ use serde::Serialize;
 
 /// Running statistics; add points with [`Accumulator::add`], read with
 /// [`Accumulator::finish`].
-#[derive(Debug, Clone, Copy, Default)]
-pub struct Accumulator {
+#[derive(Debug, Clone, Copy)]
+pub struct Accumulator<P: Copy = usize> {
     n: usize,
     sum_abs: f64,
     sum: f64,
     max_abs: f64,
-    max_at: Option<usize>,
+    max_at: Option<P>,
+}
+
+impl<P: Copy> Default for Accumulator<P> {
+    fn default() -> Self {
+        Self {
+            n: 0,
+            sum_abs: 0.0,
+            sum: 0.0,
+            max_abs: 0.0,
+            max_at: None,
+        }
+    }
 }
 
 /// The summary of one model over one set of points.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
-pub struct DeviationStats {
+pub struct DeviationStats<P: Copy = usize> {
     /// Number of points used.
     pub points: usize,
     /// Mean absolute deviation, percent.
@@ -36,19 +48,19 @@ pub struct DeviationStats {
     pub max_abs_dev_pct: f64,
     /// Mean signed deviation, percent.
     pub bias_pct: f64,
-    /// Index (into the caller's point list) of the maximum.
-    pub max_at: usize,
+    /// Where the maximum is (an index into the caller's point list, or a state).
+    pub max_at: P,
 }
 
-impl Accumulator {
+impl<P: Copy> Accumulator<P> {
     /// A new, empty accumulator.
     pub fn new() -> Self {
         Self::default()
     }
 
-    /// Adds deviation `dev_pct` of point `index`; returns false (and adds nothing) when the
-    /// deviation is not finite.
-    pub fn add(&mut self, index: usize, dev_pct: f64) -> bool {
+    /// Adds deviation `dev_pct` of the point at `at`; returns false (and adds nothing) when
+    /// the deviation is not finite.
+    pub fn add(&mut self, at: P, dev_pct: f64) -> bool {
         if !dev_pct.is_finite() {
             return false;
         }
@@ -57,13 +69,13 @@ impl Accumulator {
         self.sum_abs += dev_pct.abs();
         if self.max_at.is_none() || dev_pct.abs() > self.max_abs {
             self.max_abs = dev_pct.abs();
-            self.max_at = Some(index);
+            self.max_at = Some(at);
         }
         true
     }
 
     /// The statistics, or `None` when no point was added.
-    pub fn finish(&self) -> Option<DeviationStats> {
+    pub fn finish(&self) -> Option<DeviationStats<P>> {
         let max_at = self.max_at?;
         let n = self.n as f64;
         Some(DeviationStats {
@@ -108,7 +120,7 @@ mod tests {
         assert_relative_eq!(s.max_abs_dev_pct, 3.0);
         assert_relative_eq!(s.bias_pct, -0.125);
         assert_eq!(s.max_at, 1);
-        assert!(Accumulator::new().finish().is_none());
+        assert!(Accumulator::<usize>::new().finish().is_none());
     }
 
     #[test]

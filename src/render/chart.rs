@@ -77,6 +77,11 @@ pub fn write_all(
     force: bool,
     inputs: &[&Path],
 ) -> Result<Vec<String>, CliError> {
+    if !r.points.holds_all() {
+        return Err(CliError::Output(
+            "the charts need every point, and the comparison did not keep them".to_string(),
+        ));
+    }
     register_font()?;
     std::fs::create_dir_all(dir)
         .map_err(|e| CliError::Output(format!("{}: {e}", dir.display())))?;
@@ -119,7 +124,7 @@ pub fn write_all(
                     .map(|i| {
                         (0..p.len())
                             .map(|j| {
-                                let pt = &r.points[i * p.len() + j];
+                                let pt = &r.points.held()[i * p.len() + j];
                                 if pt.phase == "two-phase" {
                                     f64::NAN
                                 } else {
@@ -168,7 +173,7 @@ fn isotherms<DB: DrawingBackend>(
 ) -> Result<(), CliError> {
     root.fill(&WHITE).map_err(draw_err)?;
     // Temperatures present, in order, thinned evenly to MAX_ISOTHERMS.
-    let mut temps: Vec<f64> = r.points.iter().map(|p| p.temperature_k).collect();
+    let mut temps: Vec<f64> = r.points.held().iter().map(|p| p.temperature_k).collect();
     temps.sort_by(f64::total_cmp);
     temps.dedup_by(|a, b| a.to_bits() == b.to_bits());
     if temps.len() > MAX_ISOTHERMS {
@@ -180,6 +185,7 @@ fn isotherms<DB: DrawingBackend>(
     let on = |t: f64| {
         let mut pts: Vec<&crate::report::compare::PointReport> = r
             .points
+            .held()
             .iter()
             .filter(|p| p.temperature_k.to_bits() == t.to_bits())
             .collect();
@@ -228,10 +234,10 @@ fn isotherms<DB: DrawingBackend>(
         .light_line_style(RGBColor(235, 235, 235))
         .draw()
         .map_err(draw_err)?;
-    let model_count = r.points.first().map_or(0, |p| p.values.len());
+    let model_count = r.points.held().first().map_or(0, |p| p.values.len());
     for k in 0..model_count {
         let (color, dash, gap) = line_style(k);
-        let name = r.points[0].values[k].model.clone();
+        let name = r.points.held()[0].values[k].model.clone();
         let style = ShapeStyle::from(&color).stroke_width(2);
         for (n, &t) in temps.iter().enumerate() {
             let line: Vec<(f64, f64)> = on(t)

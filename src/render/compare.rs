@@ -2,12 +2,13 @@
 
 use crate::error::CliError;
 use crate::render::number::sig;
-use crate::report::compare::{CompareReport, StateAt};
+use crate::report::compare::{CompareReport, PointReport, StateAt};
 use crate::units::PA_PER_BAR;
 use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
+use std::io::Write;
 
 /// Points printed in the terminal table; more go to CSV or JSON.
-const MAX_TABLE_POINTS: usize = 60;
+pub const MAX_TABLE_POINTS: usize = 60;
 
 const STYLE: TableStyle = TableStyle::new()
     .top_border(LineStyle::none().fill('-').junction('-'))
@@ -167,7 +168,7 @@ pub fn text(r: &CompareReport) -> String {
             out.push_str(&format!("  - {} [{}]\n", w.text, w.basis));
         }
     }
-    if r.points.len() <= MAX_TABLE_POINTS {
+    if r.points.len() <= MAX_TABLE_POINTS && r.points.holds_all() {
         out.push_str("\npoints (density in kg/m3, deviation in %):\n");
         let mut header = vec![
             "T [K]".to_string(),
@@ -178,7 +179,8 @@ pub fn text(r: &CompareReport) -> String {
             header.push("ref Z".to_string());
             header.push("ref density".to_string());
         }
-        for v in r.points.first().map_or(&[][..], |p| &p.values[..]) {
+        for m in &r.models {
+            let v = m;
             header.push(format!("{} Z", v.model));
             if r.reference.kind != "none" {
                 header.push(format!("{} dev", v.model));
@@ -187,7 +189,7 @@ pub fn text(r: &CompareReport) -> String {
             }
         }
         let mut t = new_table(header);
-        for p in &r.points {
+        for p in r.points.held() {
             let mut row = vec![
                 sig(p.temperature_k, 5),
                 sig(p.pressure_pa / PA_PER_BAR, 5),
@@ -232,9 +234,26 @@ fn full(v: Option<f64>) -> String {
     v.map(|v| format!("{v:e}")).unwrap_or_default()
 }
 
-/// One row per point, SI units.
-pub fn csv(r: &CompareReport) -> Result<String, CliError> {
-    let mut w = csv::Writer::from_writer(Vec::new());
+/// The cells of one point's CSV row (in the order of [`csv_header`]).
+pub fn csv_cells(p: &PointReport) -> Vec<String> {
+    let mut row = vec![
+        format!("{:e}", p.temperature_k),
+        format!("{:e}", p.pressure_pa),
+        p.phase.to_string(),
+        full(p.reference_z),
+        full(p.reference_density_kg_m3),
+        full(p.spread_pct),
+    ];
+    for v in &p.values {
+        row.push(full(v.z));
+        row.push(full(v.mass_density_kg_m3));
+        row.push(full(v.deviation_pct));
+    }
+    row
+}
+
+/// The CSV header: the state, the reference, then three columns per model.
+fn csv_header(r: &CompareReport) -> Vec<String> {
     let mut header: Vec<String> = [
         "temperature_k",
         "pressure_pa",
@@ -245,33 +264,35 @@ pub fn csv(r: &CompareReport) -> Result<String, CliError> {
     ]
     .map(String::from)
     .to_vec();
-    for v in r.points.first().map_or(&[][..], |p| &p.values[..]) {
-        header.push(format!("{}_z", v.model));
-        header.push(format!("{}_mass_density_kg_m3", v.model));
-        header.push(format!("{}_deviation_pct", v.model));
+    for m in &r.models {
+        header.push(format!("{}_z", m.model));
+        header.push(format!("{}_mass_density_kg_m3", m.model));
+        header.push(format!("{}_deviation_pct", m.model));
     }
+    header
+}
+
+/// One row per point, SI units, written to `out` (points spilled to a temporary file are
+/// copied from it).
+pub fn csv(r: &CompareReport, out: &mut dyn Write) -> Result<(), CliError> {
     let e = |e: csv::Error| CliError::Output(e.to_string());
-    w.write_record(&header).map_err(e)?;
-    for p in &r.points {
-        let mut row = vec![
-            format!("{:e}", p.temperature_k),
-            format!("{:e}", p.pressure_pa),
-            p.phase.to_string(),
-            full(p.reference_z),
-            full(p.reference_density_kg_m3),
-            full(p.spread_pct),
-        ];
-        for v in &p.values {
-            row.push(full(v.z));
-            row.push(full(v.mass_density_kg_m3));
-            row.push(full(v.deviation_pct));
-        }
-        w.write_record(&row).map_err(e)?;
+    let mut w = csv::Writer::from_writer(&mut *out);
+    w.write_record(csv_header(r)).map_err(e)?;
+    if !r.points.holds_all() {
+        w.flush().map_err(|e| CliError::Output(e.to_string()))?;
+        drop(w);
+        return if r.points.copy_spilled_csv(out).map_err(CliError::Output)? {
+            Ok(())
+        } else {
+            Err(CliError::Output(
+                "the points were not kept for CSV output".to_string(),
+            ))
+        };
     }
-    let bytes = w
-        .into_inner()
-        .map_err(|e| CliError::Output(e.to_string()))?;
-    String::from_utf8(bytes).map_err(|e| CliError::Output(e.to_string()))
+    for p in r.points.held() {
+        w.write_record(csv_cells(p)).map_err(e)?;
+    }
+    w.flush().map_err(|e| CliError::Output(e.to_string()))
 }
 
 /// Prints the report in `format`: data on stdout, warnings (and, for CSV and JSON, the
@@ -280,7 +301,12 @@ pub fn render(r: &CompareReport, format: crate::cli::Format) -> Result<(), CliEr
     use crate::cli::Format;
     match format {
         Format::Table => crate::render::emit(&text(r))?,
-        Format::Csv => crate::render::emit(&csv(r)?)?,
+        Format::Csv => {
+            let stdout = std::io::stdout();
+            let mut w = std::io::BufWriter::with_capacity(1 << 20, stdout.lock());
+            csv(r, &mut w)?;
+            w.flush().map_err(|e| CliError::Output(e.to_string()))?;
+        }
         Format::Json => crate::render::json::to_stdout(r)?,
     }
     match format {

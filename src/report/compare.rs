@@ -4,11 +4,12 @@
 
 use crate::compare::advice::{Advice, Weakness};
 use crate::compare::ideal_map::ToleranceMap;
+use crate::report::compare_points::PointStore;
 use crate::report::state::CompositionRow;
 use serde::Serialize;
 
 /// A comparison of models over a set of states.
-#[derive(Debug, Clone, Serialize)]
+#[derive(Debug, Serialize)]
 pub struct CompareReport {
     /// Tool name and version.
     pub tool: String,
@@ -28,8 +29,9 @@ pub struct CompareReport {
     pub models: Vec<ModelStats>,
     /// Points left out of the statistics as two-phase.
     pub excluded_two_phase: usize,
-    /// Every point.
-    pub points: Vec<PointReport>,
+    /// Every point (held in memory, or spilled to a temporary file in the output's format:
+    /// see [`PointStore`]).
+    pub points: PointStore,
     /// The spread between the models where there is no reference.
     pub band: Option<Band>,
     /// The ideal-gas map (grids only).

@@ -3,6 +3,7 @@
 
 pub mod audit;
 pub mod compare;
+pub mod compare_points;
 pub mod compress;
 pub mod envelope;
 pub mod flash;

@@ -1,21 +1,10 @@
-//! The report of `zfactor table`: a design-basis table of one model over a T-P grid, with
-//! everything needed to trace it (the basis).
+//! The parts of `zfactor table`'s output: a design-basis table of one model over a T-P grid,
+//! with everything needed to trace it (the basis). The table is written as it is computed
+//! ([`crate::render::grid_table::TableWriter`]); its JSON is one object with `basis`,
+//! `columns`, `rows` (one object per (T, P), temperature outer) and `warnings`.
 
 use crate::report::state::CompositionRow;
 use serde::Serialize;
-
-/// The table and its basis.
-#[derive(Debug, Clone, Serialize)]
-pub struct TableReport {
-    /// Where the numbers come from.
-    pub basis: TableBasis,
-    /// The columns after temperature and pressure, in order.
-    pub columns: Vec<TableColumn>,
-    /// One row per (T, P), temperature outer.
-    pub rows: Vec<TableRow>,
-    /// Things the user must read.
-    pub warnings: Vec<String>,
-}
 
 /// The basis of a table.
 #[derive(Debug, Clone, Serialize)]
