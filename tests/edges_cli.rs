@@ -753,6 +753,30 @@ fn a_flash_below_a_components_triple_point_warns_of_freeze_out() {
 }
 
 #[test]
+fn heavy_ends_that_freeze_above_the_gas_temperature_are_named() {
+    // Benzene freezes at 278.674 K and neopentane at 256.6 K (commonly tabulated triple-point
+    // temperatures, recalled from memory): both may freeze out of a cold natural gas, a
+    // known hazard in gas chilling and liquefaction (common practice).
+    for (mix, t, name) in [
+        (
+            "methane=0.95,benzene=0.05",
+            "0 degC",
+            "benzene may freeze out",
+        ),
+        (
+            "methane=0.95,neopentane=0.05",
+            "-20 degC",
+            "neopentane may freeze out",
+        ),
+    ] {
+        let (_, code, err) =
+            run_json(&["state", "--mix", mix, "-t", t, "-p", "50 bar", "-m", "pr"]);
+        assert_eq!(code, 3, "{mix}: {err}");
+        assert!(err.contains(name), "{mix}: {err}");
+    }
+}
+
+#[test]
 fn the_engineering_jobs_flag_states_outside_range_or_solid() {
     // Dry ice in a vessel at 200 K and 100 bar (CO2 triple point 216.592 K, Span & Wagner
     // 1996); a methane compressor whose reference-equation discharge passes 625 K, the top of

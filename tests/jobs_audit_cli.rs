@@ -365,3 +365,42 @@ fn a_workbook_with_merged_cells_text_and_a_blank_row_is_audited_row_by_row() {
     let status: Vec<String> = range.rows().skip(1).map(|r| r[9].to_string()).collect();
     assert_eq!(status, ["ok", "ok", "bad", "bad", "bad", "bad", "ok"]);
 }
+
+#[test]
+fn a_table_that_starts_away_from_a1_names_the_cells_as_the_sheet_does() {
+    // The header at C3, data from C4: a bad pressure in cell E6 is named E6, on its sheet.
+    let dir = tempfile::tempdir().unwrap();
+    let input = dir.path().join("offset.xlsx");
+    let m = molar_mass("nitrogen");
+    let mut wb = rust_xlsxwriter::Workbook::new();
+    let ws = wb.add_worksheet();
+    ws.set_name("readings").unwrap();
+    for (c, h) in ["Fluid", "T (K)", "P (bar)", "Density (kg/m3)"]
+        .iter()
+        .enumerate()
+    {
+        ws.write_string(2, 2 + c as u16, *h).unwrap();
+    }
+    for (r, p) in [(3u32, "10"), (4, "20"), (5, "twenty")] {
+        ws.write_string(r, 2, "nitrogen").unwrap();
+        ws.write_number(r, 3, 300.0).unwrap();
+        match p.parse::<f64>() {
+            Ok(v) => {
+                ws.write_number(r, 4, v).unwrap();
+                ws.write_number(r, 5, v * 1e5 * m / (R * 300.0)).unwrap();
+            }
+            Err(_) => {
+                ws.write_string(r, 4, p).unwrap();
+                ws.write_number(r, 5, 1.0).unwrap();
+            }
+        }
+    }
+    wb.save(&input).unwrap();
+    let v = audit(&[input.to_str().unwrap(), "--model", "ideal"]);
+    assert_eq!(v["sheet"], "readings");
+    assert_eq!(v["rows_within_tolerance"], 2, "{v}");
+    let bad = v["bad"].as_array().unwrap();
+    assert_eq!(bad.len(), 1, "{v}");
+    assert_eq!(bad[0]["row"], 6, "{v}");
+    assert!(bad[0]["column"].as_str().unwrap().starts_with("E "), "{v}");
+}
