@@ -23,6 +23,8 @@ pub enum Command {
     State(StateArgs),
     /// List, search or show component data with their sources.
     Fluids(FluidsArgs),
+    /// The built-in interaction parameters (k_ij) with their sources, by component.
+    Kij(KijArgs),
     /// Saturation pressure or temperature of a pure fluid, with both saturated phases.
     Saturation(crate::commands::saturation::SaturationArgs),
     /// Run the built-in demonstration (a fuel-gas skid of a fictional compressor station).
@@ -115,6 +117,14 @@ pub struct FluidArgs {
     /// Scale fractions that do not sum to one (or percentages to 100) instead of refusing them.
     #[arg(long)]
     pub normalize: bool,
+    /// Interaction parameters over the built-in ones: "methane-co2=0.10,ethane-co2@srk=0.13"
+    /// (@pr or @srk for one model family; without, for both).
+    #[arg(long)]
+    pub kij: Option<String>,
+    /// A CSV file of interaction parameters: columns "component 1", "component 2", "value",
+    /// and optional "family" (pr, srk) and "source". --kij values win over the file's.
+    #[arg(long)]
+    pub kij_file: Option<String>,
 }
 
 /// Arguments of `zfactor state`.
@@ -163,6 +173,19 @@ pub struct FluidsArgs {
     /// List the components whose name, alias, formula or CAS contains this text.
     #[arg(long, conflicts_with = "name")]
     pub search: Option<String>,
+    /// Output format.
+    #[arg(long, short = 'f', value_enum, default_value = "table")]
+    pub format: Format,
+}
+
+/// Arguments of `zfactor kij`.
+#[derive(Debug, Args)]
+pub struct KijArgs {
+    /// Components: the pairs of one component, or the pair of two; every pair when omitted.
+    pub components: Vec<String>,
+    /// Only the values fitted for one model family: pr or srk.
+    #[arg(long)]
+    pub family: Option<String>,
     /// Output format.
     #[arg(long, short = 'f', value_enum, default_value = "table")]
     pub format: Format,

@@ -27,6 +27,8 @@ pub struct Feed {
     pub mole: Vec<f64>,
     /// Mass fractions, summing to one.
     pub mass: Vec<f64>,
+    /// Interaction parameters the user set (`--kij`, `--kij-file`), over the built-in ones.
+    pub kij: Vec<fluids::UserKij>,
 }
 
 impl Feed {
@@ -86,8 +88,17 @@ impl Feed {
     }
 }
 
-/// Reads `--fluid` or `--mix` with `--basis` and `--normalize`.
+/// Reads `--fluid` or `--mix` with `--basis`, `--normalize` and the user's k_ij.
 pub fn read(args: &FluidArgs) -> Result<Feed, CliError> {
+    let mut feed = read_fluid(args)?;
+    if args.kij.is_some() || args.kij_file.is_some() {
+        let ids = feed.ids();
+        feed.kij = crate::kij_input::read(args.kij.as_deref(), args.kij_file.as_deref(), &ids)?;
+    }
+    Ok(feed)
+}
+
+fn read_fluid(args: &FluidArgs) -> Result<Feed, CliError> {
     match (&args.fluid, &args.mix) {
         (Some(name), None) => {
             let rec = fluids::find(name)?;
@@ -99,6 +110,7 @@ pub fn read(args: &FluidArgs) -> Result<Feed, CliError> {
                 normalized_from: None,
                 mole: vec![1.0],
                 mass: vec![1.0],
+                kij: Vec::new(),
             })
         }
         (None, Some(mix)) => parse_mix(mix, args.basis, args.normalize),
@@ -201,6 +213,7 @@ pub fn parse_mix(text: &str, basis: Basis, normalize: bool) -> Result<Feed, CliE
         normalized_from,
         mole,
         mass,
+        kij: Vec::new(),
     })
 }
 

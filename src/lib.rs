@@ -21,6 +21,7 @@ pub mod error;
 pub mod exit;
 pub mod feed;
 pub mod input_notes;
+pub mod kij_input;
 pub mod models;
 pub mod output_file;
 pub mod phase_screen;

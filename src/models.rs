@@ -361,7 +361,8 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
     })
 }
 
-/// The k_ij matrix a cubic member uses for `feed`, with notes on where it came from.
+/// The k_ij matrix a cubic member uses for `feed` (the user's values over the built-in
+/// ones), with a note that lists every pair's value and origin.
 pub fn kij_for(kind: CubicKind, feed: &Feed, notes: &mut Vec<String>) -> Option<Vec<f64>> {
     let family = match kind {
         CubicKind::Pr76 | CubicKind::Pr78 => Some(fluids::KijFamily::PengRobinson),
@@ -376,22 +377,38 @@ pub fn kij_for(kind: CubicKind, feed: &Feed, notes: &mut Vec<String>) -> Option<
         return None;
     };
     let ids = feed.ids();
-    let m = fluids::kij_matrix(&ids, f);
-    let used = (ids.len() * (ids.len() - 1)) / 2 - m.missing.len();
-    if used > 0 {
-        notes.push(format!("k_ij from the fluids data for {used} pair(s)"));
-        if f == fluids::KijFamily::Soave {
-            notes.push(
-                "no SRK-specific k_ij at hand: the Peng-Robinson values are used".to_string(),
-            );
-        }
-    }
-    if !m.missing.is_empty() {
-        let pairs: Vec<String> = m.missing.iter().map(|(a, b)| format!("{a}-{b}")).collect();
-        notes.push(format!(
-            "k_ij = 0 (no value known) for {}",
-            pairs.join(", ")
-        ));
-    }
-    Some(m.values)
+    let (values, uses) = fluids::kij::resolve(&ids, f, &feed.kij);
+    notes.push(kij_note(f, &uses));
+    Some(values)
+}
+
+/// "k_ij (pr family): methane-co2 = 0.0919 [built-in: knapp1982], ..." for every pair.
+pub fn kij_note(family: fluids::KijFamily, uses: &[fluids::KijUse]) -> String {
+    use fluids::KijOrigin;
+    let pairs: Vec<String> = uses
+        .iter()
+        .map(|u| {
+            let origin = match &u.origin {
+                KijOrigin::BuiltIn {
+                    source_key,
+                    fitted_for,
+                    substituted,
+                } => {
+                    if *substituted {
+                        format!(
+                            "built-in {source_key}, fitted for {}: no {} value at hand",
+                            fitted_for.key(),
+                            family.key()
+                        )
+                    } else {
+                        format!("built-in {source_key}")
+                    }
+                }
+                KijOrigin::User(o) => format!("user: {o}"),
+                KijOrigin::Unknown => "zero: no value known".to_string(),
+            };
+            format!("{}-{} = {} [{origin}]", u.a, u.b, u.value)
+        })
+        .collect();
+    format!("k_ij ({} family): {}", family.key(), pairs.join("; "))
 }

@@ -85,7 +85,7 @@ pub mod suggest;
 
 pub use data::data_status;
 pub use error::{DataError, LookupError};
-pub use kij::{kij, kij_matrix, KijFamily, KijMatrix, KijRecord};
+pub use kij::{kij, kij_matrix, KijFamily, KijMatrix, KijOrigin, KijRecord, KijUse, UserKij};
 pub use lookup::{all, find, normalize};
 pub use record::{ComponentRecord, Confidence, CpSegmentRecord};
 pub use search::search;

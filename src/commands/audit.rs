@@ -57,6 +57,14 @@ pub struct AuditArgs {
     /// where it has one, otherwise pr); the copy names the model of every row.
     #[arg(long, short = 'm', default_value = AUTO)]
     pub model: String,
+    /// Interaction parameters over the built-in ones, for every row's mixture:
+    /// "methane-co2=0.10,ethane-co2@srk=0.13".
+    #[arg(long)]
+    pub kij: Option<String>,
+    /// A CSV file of interaction parameters (columns "component 1", "component 2", "value",
+    /// optional "family" and "source"); --kij values win over the file's.
+    #[arg(long)]
+    pub kij_file: Option<String>,
     /// Relative tolerance: "1%", "0.5 %" or a fraction such as 0.01.
     #[arg(long, default_value = "1%")]
     pub tolerance: String,
@@ -134,6 +142,18 @@ fn overrides(spec: Option<&str>) -> Result<Vec<(Field, String)>, CliError> {
         .collect()
 }
 
+/// The user's k_ij: the file's, then the command line's (which win).
+fn user_kij(args: &AuditArgs) -> Result<Vec<fluids::UserKij>, CliError> {
+    let mut out = match &args.kij_file {
+        Some(p) => crate::kij_input::read_file(p)?,
+        None => Vec::new(),
+    };
+    if let Some(text) = &args.kij {
+        out.extend(crate::kij_input::parse_list(text)?);
+    }
+    Ok(out)
+}
+
 /// Runs the audit.
 pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
     let started = std::time::Instant::now();
@@ -195,6 +215,7 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
         ambient,
         model: ids[0].clone(),
         tolerance: tol,
+        kij: user_kij(args)?,
     };
     let mut sink = Sink::create(&output, kind)?;
     let mut head = csv::StringRecord::from(headers.clone());

@@ -260,6 +260,8 @@ pub struct Defaults {
     pub ambient: f64,
     pub model: String,
     pub tolerance: f64,
+    /// Interaction parameters the user set (`--kij`, `--kij-file`), for every row's mixture.
+    pub kij: Vec<fluids::UserKij>,
 }
 
 /// A bad cell or row.
@@ -331,7 +333,8 @@ impl Cache {
             if self.fluids[slot].contains_key(text) {
                 continue;
             }
-            let entry = read_fluid(text, basis).map(|feed| {
+            let entry = read_fluid(text, basis).map(|mut feed| {
+                feed.kij.clone_from(&d.kij);
                 Arc::new(FluidEntry {
                     model_key: feed.ids().join(","),
                     feed,
@@ -392,6 +395,8 @@ fn read_fluid(text: &str, basis: Basis) -> Result<Feed, String> {
             mix: None,
             basis,
             normalize: false,
+            kij: None,
+            kij_file: None,
         };
         feed::read(&args).map_err(|e| e.to_string())
     }

@@ -20,6 +20,8 @@ pub fn run(args: &DemoArgs) -> Result<Exit, CliError> {
             mix: Some(DEMO_GAS.to_string()),
             basis: Basis::Mole,
             normalize: false,
+            kij: None,
+            kij_file: None,
         },
         temperature: Some("40 degC".to_string()),
         pressure: Some("70 barg".to_string()),

@@ -13,6 +13,7 @@ pub mod flash;
 pub mod flow;
 pub mod fluids;
 pub mod jobs_common;
+pub mod kij;
 pub mod models;
 pub mod process;
 pub mod relief;
@@ -36,6 +37,11 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
         Command::Fluids(args) => {
             let report = fluids::run(args)?;
             crate::render::fluids(&report, args.format)?;
+            Ok(Exit::Success)
+        }
+        Command::Kij(args) => {
+            let report = kij::run(args)?;
+            crate::render::kij::render(&report, args.format)?;
             Ok(Exit::Success)
         }
         Command::Demo(args) => demo::run(args),

@@ -13,6 +13,7 @@ pub mod flow;
 pub mod grid_table;
 pub mod jobs;
 pub mod json;
+pub mod kij;
 pub mod number;
 pub mod process;
 pub mod saturation_csv;

@@ -10,6 +10,7 @@ pub mod flash;
 pub mod flow;
 pub mod fluids;
 pub mod jobs_common;
+pub mod kij;
 pub mod models;
 pub mod process;
 pub mod relief;
