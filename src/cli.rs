@@ -106,11 +106,20 @@ pub enum RootArg {
 #[derive(Debug, Args)]
 pub struct FluidArgs {
     /// A pure fluid by name, alias, formula or CAS number (e.g. methane, CO2, 124-38-9).
-    #[arg(long, conflicts_with = "mix", required_unless_present = "mix")]
+    #[arg(
+        long,
+        conflicts_with_all = ["mix", "mix_file"],
+        required_unless_present_any = ["mix", "mix_file"]
+    )]
     pub fluid: Option<String>,
     /// A mixture as name=fraction pairs, e.g. "methane=0.9,ethane=0.1" or "CH4=90%,C2H6=10%".
-    #[arg(long)]
+    #[arg(long, conflicts_with = "mix_file")]
     pub mix: Option<String>,
+    /// A gas analysis in a CSV or .xlsx file: a "component" column (names or C1, iC4, N2,
+    /// ...) and an amount column whose header gives the unit ("mol %", "mass %", "mole
+    /// fraction").
+    #[arg(long)]
+    pub mix_file: Option<String>,
     /// Basis of the fractions in --mix.
     #[arg(long, value_enum, default_value = "mole")]
     pub basis: Basis,

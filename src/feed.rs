@@ -114,8 +114,12 @@ fn read_fluid(args: &FluidArgs) -> Result<Feed, CliError> {
             })
         }
         (None, Some(mix)) => parse_mix(mix, args.basis, args.normalize),
+        (None, None) if args.mix_file.is_some() => {
+            let path = args.mix_file.as_deref().unwrap_or_default();
+            crate::mix_file::read(path, args.normalize)
+        }
         _ => Err(CliError::BadInput(
-            "give either --fluid NAME or --mix \"name=fraction,...\"".to_string(),
+            "give one of --fluid NAME, --mix \"name=fraction,...\" or --mix-file FILE".to_string(),
         )),
     }
 }
@@ -174,21 +178,64 @@ pub fn parse_mix(text: &str, basis: Basis, normalize: bool) -> Result<Feed, CliE
             "some values end with % and some do not; use one form for all".to_string(),
         ));
     }
-    let percent = percents > 0;
+    from_amounts(
+        records,
+        values,
+        Amounts {
+            percent: percents > 0,
+            basis,
+            normalize,
+            tolerance: SUM_TOLERANCE,
+        },
+    )
+    .map_err(bad)
+}
+
+/// How a list of amounts is to be read.
+#[derive(Debug, Clone, Copy)]
+pub struct Amounts {
+    /// True when the amounts are percentages.
+    pub percent: bool,
+    /// Mole or mass.
+    pub basis: Basis,
+    /// Scale a sum that misses one (or 100 %) by more than `tolerance` instead of refusing.
+    pub normalize: bool,
+    /// Relative miss of the sum that is scaled away without `normalize` (rounding).
+    pub tolerance: f64,
+}
+
+/// The feed of `records` in the given `values` (positive; checked by the caller). A sum that
+/// misses one (or 100 %) by more than the tolerance is refused with its sum unless
+/// normalisation is asked for; `normalized_from` keeps the sum whenever it was not exactly
+/// one. Errors are the message alone; the caller says where the amounts came from.
+pub fn from_amounts(
+    records: Vec<&'static ComponentRecord>,
+    values: Vec<f64>,
+    how: Amounts,
+) -> Result<Feed, String> {
+    let Amounts {
+        percent,
+        basis,
+        normalize,
+        tolerance,
+    } = how;
     let full = if percent { 100.0 } else { 1.0 };
     let sum: f64 = values.iter().sum();
-    let normalized_from = if (sum - full).abs() > SUM_TOLERANCE * full {
+    let normalized_from = if (sum - full).abs() > tolerance * full {
         if !normalize {
             let hint = if !percent && (sum - 100.0).abs() < 1e-3 {
                 " (they look like percentages: add % to each value)"
             } else {
                 ""
             };
-            return Err(bad(format!(
-                "the {} fractions sum to {sum}, not {full}{hint}; correct them, or pass --normalize to scale them",
+            return Err(format!(
+                "the {} fractions sum to {sum}, not {full}{hint}; correct them, or pass \
+                 --normalize to scale them",
                 basis_name(basis)
-            )));
+            ));
         }
+        Some(sum)
+    } else if (sum - full).abs() > SUM_TOLERANCE * full {
         Some(sum)
     } else {
         None

@@ -22,6 +22,7 @@ pub mod exit;
 pub mod feed;
 pub mod input_notes;
 pub mod kij_input;
+pub mod mix_file;
 pub mod models;
 pub mod output_file;
 pub mod phase_screen;

@@ -395,6 +395,7 @@ fn read_fluid(text: &str, basis: Basis) -> Result<Feed, String> {
             mix: None,
             basis,
             normalize: false,
+            mix_file: None,
             kij: None,
             kij_file: None,
         };

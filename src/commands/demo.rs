@@ -20,6 +20,7 @@ pub fn run(args: &DemoArgs) -> Result<Exit, CliError> {
             mix: Some(DEMO_GAS.to_string()),
             basis: Basis::Mole,
             normalize: false,
+            mix_file: None,
             kij: None,
             kij_file: None,
         },
