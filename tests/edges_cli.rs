@@ -913,8 +913,8 @@ fn a_default_comparison_inside_every_range_ends_with_exit_zero() {
 #[test]
 fn a_flash_warns_only_about_what_its_answer_depends_on() {
     // A bubble point does not depend on the ideal-gas heat capacity; at -50 degC propane's
-    // and butane's fits (from 300 K) are extrapolated, which once gave exit 3 here. A (P, h)
-    // flash does depend on it, and still warns.
+    // fit (then from 300 K) was extrapolated, which once gave exit 3 here. A (P, h) flash does
+    // depend on it, and still warns where a fit is extrapolated (neopentane's, from 300 K).
     let gas = "methane=0.8,ethane=0.1,propane=0.06,n-butane=0.04";
     let (_, code, err) = run_json(&[
         "flash",
@@ -930,7 +930,7 @@ fn a_flash_warns_only_about_what_its_answer_depends_on() {
     let (_, code, err) = run_json(&[
         "flash",
         "--mix",
-        gas,
+        "methane=0.9,neopentane=0.1",
         "-p",
         "30 bar",
         "--enthalpy",
@@ -940,4 +940,17 @@ fn a_flash_warns_only_about_what_its_answer_depends_on() {
     ]);
     assert_eq!(code, 3, "{err}");
     assert!(err.contains("extrapolated"), "{err}");
+}
+
+#[test]
+fn a_base_state_of_the_common_gases_is_not_an_extrapolation() {
+    // 15 degC is the usual base temperature (ISO 13443); propane's and nitrogen's ideal-gas
+    // heat capacities once started at 300 K and warned of extrapolation there.
+    for fluid in ["propane", "nitrogen", "argon"] {
+        let (_, code, err) = run_json(&[
+            "state", "--fluid", fluid, "-t", "15 degC", "-p", "1 atm", "-m", "pr",
+        ]);
+        assert_eq!(code, 0, "{fluid}: {err}");
+        assert!(!err.contains("extrapolated"), "{fluid}: {err}");
+    }
 }

@@ -299,3 +299,39 @@ fn air_polynomial_is_the_composition_average_of_its_parts() {
         );
     }
 }
+
+#[test]
+fn the_common_gases_are_covered_down_to_200_k() {
+    // A 15 degC base state and a cold flash must not extrapolate the ideal-gas cp of the
+    // gases of the trade (natural-gas components, air and its parts).
+    for id in [
+        "methane",
+        "ethane",
+        "propane",
+        "n-butane",
+        "isobutane",
+        "n-pentane",
+        "isopentane",
+        "n-hexane",
+        "nitrogen",
+        "co2",
+        "h2s",
+        "oxygen",
+        "argon",
+        "hydrogen",
+        "helium",
+        "water",
+        "air",
+    ] {
+        let (lo, _) = find(id).unwrap().cp_range_k;
+        assert!(lo <= 200.0, "{id}: fitted from {lo} K");
+    }
+    // NIST-JANAF 4th ed., N2 at 200 K: Cp = 29.107 J/(mol K), from memory; the rigid-rotor
+    // harmonic-oscillator segment joins the GRI fit, which is 0.16 % low at 300 K: 0.2 %.
+    assert!(rel(cp("nitrogen", 200.0), 29.107) < 0.002);
+    // A non-linear molecule has at least translation and rotation, cp0 >= 4 R (common
+    // practice); propane at 100 K, the bottom of its lowest segment.
+    assert!(cp("propane", 100.0) / R >= 4.0);
+    // Argon is an ideal monatomic gas: 5/2 R at every temperature (20.786 J/(mol K), JANAF).
+    assert!(rel(cp("argon", 150.0), 20.786) < 1e-4);
+}
