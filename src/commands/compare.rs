@@ -10,6 +10,7 @@ use crate::compare::engine::{self, Against, Answer, PointInput, PointResult, Scr
 use crate::compare::grid;
 use crate::compare::ideal_map;
 use crate::compare::iso6976;
+use crate::compare::iso6976_sum;
 use crate::compare::region::Region;
 use crate::compare::stats::Accumulator;
 use crate::error::CliError;
@@ -87,7 +88,7 @@ impl States {
                     two_phase: r.two_phase,
                 },
                 PointMeta {
-                    line: Some(r.line),
+                    line: (r.line > 0).then_some(r.line),
                     source: (!r.source.is_empty()).then_some(r.source),
                 },
             )
@@ -289,7 +290,7 @@ fn iso_states(feed: &Feed) -> Result<States, CliError> {
         ))
     };
     if !feed.is_pure() {
-        return Err(refuse("it holds pure gases only, not mixtures"));
+        return summation_states(feed);
     }
     let id = &feed.records[0].id;
     let rows: Vec<_> = all
@@ -319,6 +320,40 @@ fn iso_states(feed: &Feed) -> Result<States, CliError> {
     })
 }
 
+/// A mixture against the ISO 6976 summation method at its three reference temperatures.
+fn summation_states(feed: &Feed) -> Result<States, CliError> {
+    let ids = feed.ids();
+    let values = iso6976_sum::all_temperatures(&ids, &feed.mole)
+        .map_err(|e| CliError::BadInput(format!("--reference iso6976: {e}")))?;
+    let rows: Vec<Row> = values
+        .iter()
+        .map(|s| Row {
+            line: 0,
+            t: s.t,
+            p: iso6976_sum::P_REF,
+            value: Some(RefValue::Z(s.z)),
+            source: format!(
+                "ISO 6976 summation method (lowest confidence of the factors used: {})",
+                s.confidence
+            ),
+            two_phase: false,
+            component: None,
+        })
+        .collect();
+    Ok(States {
+        expected: rows.len(),
+        rows: Rows::Listed(rows.into_iter()),
+        grid: None,
+        file: Some((
+            "the ISO 6976 summation method".to_string(),
+            "T".to_string(),
+            "P".to_string(),
+        )),
+        skipped: Skipped::default(),
+        from: "reference data",
+    })
+}
+
 /// The reference and the states to compare at.
 fn reference_and_states(
     args: &CompareArgs,
@@ -335,10 +370,15 @@ fn reference_and_states(
                         .to_string(),
                 ));
             }
+            let citation = if feed.is_pure() {
+                iso6976::CITATION
+            } else {
+                iso6976_sum::METHOD
+            };
             Ok((
                 Reference::Data {
                     id: iso6976::ID.to_string(),
-                    citation: iso6976::CITATION.to_string(),
+                    citation: citation.to_string(),
                 },
                 iso_states(feed)?,
             ))

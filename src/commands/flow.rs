@@ -94,6 +94,7 @@ pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
             ambient_pressure_pa: amb,
         },
         results,
+        iso6976_summation: summation(&feed),
         warnings,
         caution: crate::CAUTION,
     })
@@ -152,4 +153,31 @@ fn one(
         volumes,
         notes: pair.built.notes.clone(),
     })
+}
+
+/// The fluid's Z by the ISO 6976 summation method, or why there is none.
+fn summation(feed: &crate::feed::Feed) -> crate::report::flow::Summation {
+    use crate::compare::iso6976_sum;
+    use crate::report::flow::{Summation, SummationZ};
+    let ids = feed.ids();
+    match iso6976_sum::all_temperatures(&ids, &feed.mole) {
+        Ok(values) => Summation {
+            method: iso6976_sum::METHOD,
+            values: values
+                .into_iter()
+                .map(|s| SummationZ {
+                    temperature_k: s.t,
+                    pressure_pa: iso6976_sum::P_REF,
+                    z: s.z,
+                    confidence: s.confidence,
+                })
+                .collect(),
+            unavailable: None,
+        },
+        Err(e) => Summation {
+            method: iso6976_sum::METHOD,
+            values: Vec::new(),
+            unavailable: Some(e.to_string()),
+        },
+    }
 }

@@ -3,6 +3,7 @@
 //! - [`grid`]: lists and ranges of quantities for T-P grids ("250..350 K step 25").
 //! - [`data_file`]: a user's states or reference data from CSV, units in the header.
 //! - [`iso6976`]: the built-in data set of compression factors (ISO 6976).
+//! - [`iso6976_sum`]: a mixture's compression factor by the ISO 6976 summation method.
 //! - [`engine`]: every model at every state, on all cores, in order.
 //! - [`region`]: gas, liquid, supercritical, near-critical, two-phase.
 //! - [`stats`]: mean absolute, maximum and mean signed deviation.
@@ -15,5 +16,6 @@ pub mod engine;
 pub mod grid;
 pub mod ideal_map;
 pub mod iso6976;
+pub mod iso6976_sum;
 pub mod region;
 pub mod stats;

@@ -64,6 +64,33 @@ pub fn table(r: &FlowReport) -> String {
         }
     }
     out.push_str(&g.finish());
+    let sum = &r.iso6976_summation;
+    if sum.values.is_empty() {
+        if let Some(why) = &sum.unavailable {
+            out.push_str(&format!("ISO 6976 summation: not available ({why}).\n"));
+        }
+    } else {
+        let parts: Vec<String> = sum
+            .values
+            .iter()
+            .map(|v| format!("{:.0} degC {}", v.temperature_k - 273.15, sig(v.z, 6)))
+            .collect();
+        let confidence = sum
+            .values
+            .iter()
+            .map(|v| v.confidence.as_str())
+            .min_by_key(|c| match *c {
+                "high" => 2,
+                "medium" => 1,
+                _ => 0,
+            })
+            .unwrap_or("high");
+        out.push_str(&format!(
+            "Z by the ISO 6976 summation method at 101.325 kPa: {} (factors recalled from \
+             memory; lowest confidence {confidence}).\n",
+            parts.join(", ")
+        ));
+    }
     out.push_str(
         "every volume states its base; Z at each base is the model's own (ideal gas: 1).\n",
     );

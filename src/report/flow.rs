@@ -10,8 +10,31 @@ pub struct FlowReport {
     pub fluid: FluidReport,
     pub input: FlowInput,
     pub results: Vec<FlowResult>,
+    /// Z at the ISO 6976 reference conditions by its summation method, beside the models'.
+    pub iso6976_summation: Summation,
     pub warnings: Vec<String>,
     pub caution: &'static str,
+}
+
+/// The ISO 6976 summation values of the fluid, or why there are none.
+#[derive(Debug, Clone, Serialize)]
+pub struct Summation {
+    /// The method and its data.
+    pub method: &'static str,
+    /// Z at 101.325 kPa and 0, 15 and 20 degC (empty when not available).
+    pub values: Vec<SummationZ>,
+    /// Why there are no values (a component without a summation factor).
+    pub unavailable: Option<String>,
+}
+
+/// One summation value.
+#[derive(Debug, Clone, Serialize)]
+pub struct SummationZ {
+    pub temperature_k: f64,
+    pub pressure_pa: f64,
+    pub z: f64,
+    /// The lowest confidence mark among the factors used.
+    pub confidence: String,
 }
 
 /// The flow as given.
