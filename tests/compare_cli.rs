@@ -190,19 +190,21 @@ fn iso_6976_deviations_of_the_cubic_models() {
             }
         }
     }
-    // A mixture is refused with the list of gases in the data set.
+    // A mixture is compared with the summation method (tests/iso6976_summation.rs); one with
+    // a component the data set lacks is refused, with its name and the list of gases.
     let out = zf()
         .args([
             "compare",
             "--mix",
-            "methane=0.9,ethane=0.1",
+            "methane=0.9,n-hexane=0.1",
             "--reference",
             "iso6976",
         ])
         .output()
         .unwrap();
     assert_eq!(out.status.code(), Some(2));
-    assert!(String::from_utf8_lossy(&out.stderr).contains("pure gases only"));
+    let err = String::from_utf8_lossy(&out.stderr);
+    assert!(err.contains("n-hexane") && err.contains("methane, ethane"), "{err}");
 }
 
 #[test]
