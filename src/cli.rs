@@ -14,6 +14,10 @@ pub use grid_args::{ChartFormat, CompareArgs, TableArgs, TableFormat};
 pub struct Cli {
     #[command(subcommand)]
     pub command: Command,
+    /// A CSV file of your own components (name, molar mass, Tc, Pc, acentric factor, ideal-gas
+    /// cp and its range, source; units in the header), usable wherever a component name is.
+    #[arg(long, global = true)]
+    pub components: Option<String>,
 }
 
 /// The commands.
@@ -191,7 +195,8 @@ pub struct FluidsArgs {
 #[derive(Debug, Args)]
 pub struct KijArgs {
     /// Components: the pairs of one component, or the pair of two; every pair when omitted.
-    pub components: Vec<String>,
+    #[arg(value_name = "COMPONENT")]
+    pub names: Vec<String>,
     /// Only the values fitted for one model family: pr or srk.
     #[arg(long)]
     pub family: Option<String>,

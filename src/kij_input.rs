@@ -119,13 +119,7 @@ pub fn parse_list(text: &str) -> Result<Vec<UserKij>, CliError> {
 /// Reads a k_ij file (see the module documentation).
 pub fn read_file(path: &str) -> Result<Vec<UserKij>, CliError> {
     let fail = |line: Option<usize>, column: Option<&str>, m: String| {
-        let mut at = path.to_string();
-        if let Some(l) = line {
-            at.push_str(&format!(", line {l}"));
-        }
-        if let Some(c) = column {
-            at.push_str(&format!(", column \"{c}\""));
-        }
+        let at = crate::file_header::place(path, line, column);
         CliError::BadInput(format!("--kij-file {at}: {m}"))
     };
     let file = std::fs::File::open(path).map_err(|e| fail(None, None, e.to_string()))?;

@@ -16,10 +16,12 @@
 pub mod cli;
 pub mod commands;
 pub mod compare;
+pub mod components_file;
 pub mod energy_units;
 pub mod error;
 pub mod exit;
 pub mod feed;
+pub mod file_header;
 pub mod input_notes;
 pub mod kij_input;
 pub mod mix_file;
@@ -63,6 +65,9 @@ where
         }
     };
     output_file::clean_up_on_interrupt();
+    if let Some(path) = &cli.components {
+        components_file::load(path)?;
+    }
     let code = commands::dispatch(&cli)?;
     let notes = input_notes::take();
     for n in &notes {

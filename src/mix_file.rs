@@ -55,22 +55,6 @@ fn amount_unit(text: &str) -> Option<(Basis, bool)> {
     }
 }
 
-/// Splits "amount [mol %]" or "amount (mol %)" into ("amount", "mol %").
-fn split_header(h: &str) -> (String, Option<String>) {
-    let h = h.trim();
-    for (open, close) in [('[', ']'), ('(', ')')] {
-        if let (Some(a), Some(b)) = (h.find(open), h.rfind(close)) {
-            if b > a {
-                return (
-                    h[..a].trim().to_ascii_lowercase(),
-                    Some(h[a + 1..b].trim().to_string()),
-                );
-            }
-        }
-    }
-    (h.to_ascii_lowercase(), None)
-}
-
 /// The component of a label: the lookup's, or a lumped carbon number (C6..C10), with the
 /// warning that says so.
 fn component(label: &str) -> Result<(&'static ComponentRecord, Option<String>), String> {
@@ -155,7 +139,7 @@ pub fn read(path: &str, normalize: bool) -> Result<Feed, CliError> {
     let mut name_col = None;
     let mut amount_col = None;
     for (i, h) in header.iter().enumerate() {
-        let (name, unit) = split_header(h);
+        let (name, unit) = crate::file_header::split(h);
         if matches!(
             name.as_str(),
             "component" | "name" | "compound" | "species" | "fluid"
@@ -255,10 +239,6 @@ mod tests {
         assert_eq!(amount_unit("Mole Fraction"), Some((Basis::Mole, false)));
         assert_eq!(amount_unit("wt%"), Some((Basis::Mass, true)));
         assert_eq!(amount_unit("kg/m3"), None);
-        assert_eq!(
-            split_header("Amount (mol %)"),
-            ("amount".to_string(), Some("mol %".to_string()))
-        );
     }
 
     #[test]

@@ -204,7 +204,10 @@ fn iso_6976_deviations_of_the_cubic_models() {
         .unwrap();
     assert_eq!(out.status.code(), Some(2));
     let err = String::from_utf8_lossy(&out.stderr);
-    assert!(err.contains("n-hexane") && err.contains("methane, ethane"), "{err}");
+    assert!(
+        err.contains("n-hexane") && err.contains("methane, ethane"),
+        "{err}"
+    );
 }
 
 #[test]

@@ -82,6 +82,7 @@ pub mod record;
 pub mod search;
 pub mod source;
 pub mod suggest;
+pub mod user;
 
 pub use data::data_status;
 pub use error::{DataError, LookupError};

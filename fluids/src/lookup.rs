@@ -29,6 +29,17 @@ pub fn all() -> &'static [ComponentRecord] {
 /// single component (C4H10 is both butanes and gives [`LookupError::Ambiguous`]). Nothing
 /// found gives [`LookupError::Unknown`] with up to five close ids.
 pub fn find(query: &str) -> Result<&'static ComponentRecord, LookupError> {
+    match find_built_in(query) {
+        Err(LookupError::Unknown { query, suggestions }) => {
+            crate::user::find(&query).ok_or(LookupError::Unknown { query, suggestions })
+        }
+        other => other,
+    }
+}
+
+/// [`find`] among the built-in components only; the user's ([`crate::user`]) are tried
+/// after these.
+pub(crate) fn find_built_in(query: &str) -> Result<&'static ComponentRecord, LookupError> {
     let d = db().map_err(|e| LookupError::Data(e.clone()))?;
     let q = normalize(query);
     if let Some(&i) = d.names.get(&q) {

@@ -98,19 +98,11 @@ fn normalise(s: &str) -> String {
         .collect()
 }
 
-/// Splits "Temperature (degC)" or "T [K]" into the name and the unit.
+/// Splits "Temperature (degC)" or "T [K]" into the name (letters and digits only) and the
+/// unit.
 fn split_header(h: &str) -> (String, Option<String>) {
-    let h = h.trim();
-    for (open, close) in [('(', ')'), ('[', ']')] {
-        if let (Some(a), Some(b)) = (h.find(open), h.rfind(close)) {
-            if b > a {
-                let unit = h[a + 1..b].trim().to_string();
-                let name = format!("{}{}", &h[..a], &h[b + 1..]);
-                return (normalise(&name), (!unit.is_empty()).then_some(unit));
-            }
-        }
-    }
-    (normalise(h), None)
+    let (name, unit) = crate::file_header::split(h);
+    (normalise(&name), unit)
 }
 
 /// Spreadsheet column letters of a 0-based index (A, B, ..., Z, AA, ...).

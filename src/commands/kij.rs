@@ -13,14 +13,14 @@ one family) or --kij-file FILE on any command that takes a mixture.";
 
 /// Lists the built-in k_ij of the pairs asked for.
 pub fn run(args: &KijArgs) -> Result<KijReport, CliError> {
-    if args.components.len() > 2 {
+    if args.names.len() > 2 {
         return Err(CliError::BadInput(format!(
             "give at most two components (the pairs of one, or one pair); got {}",
-            args.components.len()
+            args.names.len()
         )));
     }
     let ids: Vec<String> = args
-        .components
+        .names
         .iter()
         .map(|c| fluids::find(c).map(|r| r.id.clone()))
         .collect::<Result<_, _>>()?;

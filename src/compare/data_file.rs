@@ -1,7 +1,7 @@
 //! Reading a user's states or reference data from CSV, with the units in the header.
 //!
 //! The first line names the columns; a column that carries a quantity has its unit in square
-//! brackets. Columns are found by name, case-insensitively, in any order:
+//! brackets or parentheses (`T [degC]`, `T (degC)`). Columns are found by name, case-insensitively, in any order:
 //!
 //! | column | names | units |
 //! |---|---|---|
@@ -132,18 +132,6 @@ struct Column {
     unit: String,
 }
 
-/// Splits "T [K]" into ("t", "K").
-fn split_header(h: &str) -> (String, String) {
-    let h = h.trim();
-    match (h.find('['), h.rfind(']')) {
-        (Some(a), Some(b)) if b > a => (
-            h[..a].trim().to_ascii_lowercase(),
-            h[a + 1..b].trim().to_string(),
-        ),
-        _ => (h.to_ascii_lowercase(), String::new()),
-    }
-}
-
 fn kind_of(name: &str) -> Option<Kind> {
     match name {
         "t" | "temperature" => Some(Kind::T),
@@ -215,7 +203,8 @@ impl<R: std::io::Read> Reader<R> {
             .clone();
         let mut cols: Vec<Column> = Vec::new();
         for (i, h) in headers.iter().enumerate() {
-            let (name, unit) = split_header(h);
+            let (name, unit) = crate::file_header::split(h);
+            let unit = unit.unwrap_or_default();
             let Some(kind) = kind_of(&name) else { continue };
             if let Some(c) = cols.iter().find(|c| c.kind == kind) {
                 return Err(ferr(
@@ -499,6 +488,14 @@ mod tests {
         )
         .unwrap();
         assert_relative_eq!(g.rows[0].p, 101_325.0);
+        // Units in parentheses read as in brackets (as audit headers are).
+        let q = read(
+            "T (degC),P (bar),Z,source\n25,10,0.98,x\n",
+            "q.csv",
+            opts(Need::Reference, false),
+        )
+        .unwrap();
+        assert_relative_eq!(q.rows[0].t, 298.15);
     }
 
     #[test]
