@@ -167,7 +167,9 @@ pub struct StateArgs {
     /// Ambient pressure that gauge readings are referred to.
     #[arg(long, default_value = "101.325 kPa")]
     pub ambient: String,
-    /// Model id, a comma-separated list, or "all": ideal, vdw, rk, srk, pr, pr78.
+    /// Model id, a comma-separated list, or "all" (the models that apply to the fluid): ideal,
+    /// vdw, rk, srk, pr, pr78, srk-pen, pr-pen, pr78-pen, virial, lk, dak, hy, if97, sw12,
+    /// reference (`zfactor models` says what each is).
     #[arg(long, short = 'm', default_value = "all")]
     pub model: String,
     /// Which density root to report when a model has several.

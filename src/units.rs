@@ -413,25 +413,63 @@ pub fn volume(input: &str) -> Result<f64, UnitError> {
     Ok(m3)
 }
 
-/// Reads a vapour quality: a fraction from 0 to 1, or a percentage with %.
-pub fn quality(input: &str) -> Result<f64, UnitError> {
+/// Reads a fraction written as a fraction or as a percentage with % ("0.78", "78%",
+/// "78 %"); `what` names the quantity in messages. A number above one without % is refused
+/// (it is most likely a percentage without its sign).
+pub fn fraction(input: &str, what: &'static str, accepted: &'static str) -> Result<f64, UnitError> {
     let err = |problem: String| UnitError {
         input: input.to_string(),
-        quantity: "vapour quality",
+        quantity: what,
         problem,
-        accepted: "a number from 0 (saturated liquid) to 1 (saturated vapour), or 0% to 100%",
+        accepted,
     };
     let s = input.trim();
-    let (num, scale) = match s.strip_suffix('%') {
-        Some(n) => (n.trim(), 0.01),
-        None => (s, 1.0),
+    let (num, percent) = match s.strip_suffix('%') {
+        Some(n) => (n.trim(), true),
+        None => (s, false),
     };
+    let scale = if percent { 0.01 } else { 1.0 };
     let v: f64 = num
         .parse()
         .map_err(|_| err(format!("\"{num}\" is not a number")))?;
-    let x = v * scale;
+    if !v.is_finite() {
+        return Err(err("it is not a finite number".to_string()));
+    }
+    if !percent && v > 1.0 && v <= 100.0 {
+        return Err(err(format!(
+            "{v} is above one: write {v}% for a percentage, or the fraction {}",
+            v / 100.0
+        )));
+    }
+    Ok(v * scale)
+}
+
+/// Reads a machine efficiency (isentropic or polytropic): above 0 and at most 1, as a
+/// fraction or a percentage ("0.78", "78%"). Used as a command-line value parser.
+pub fn efficiency(input: &str) -> Result<f64, String> {
+    const ACCEPTED: &str = "a fraction above 0 and at most 1, or a percentage, e.g. 0.78 or 78%";
+    let e = fraction(input, "efficiency", ACCEPTED).map_err(|e| e.to_string())?;
+    if e > 0.0 && e <= 1.0 {
+        Ok(e)
+    } else {
+        Err(format!(
+            "efficiency \"{input}\" must lie above 0 and at most 1 (100 %)"
+        ))
+    }
+}
+
+/// Reads a vapour quality: a fraction from 0 to 1, or a percentage with %.
+pub fn quality(input: &str) -> Result<f64, UnitError> {
+    const ACCEPTED: &str =
+        "a number from 0 (saturated liquid) to 1 (saturated vapour), or 0% to 100%";
+    let x = fraction(input, "vapour quality", ACCEPTED)?;
     if !(0.0..=1.0).contains(&x) {
-        return Err(err("it is outside 0 to 1".to_string()));
+        return Err(UnitError {
+            input: input.to_string(),
+            quantity: "vapour quality",
+            problem: "it is outside 0 to 1".to_string(),
+            accepted: ACCEPTED,
+        });
     }
     Ok(x)
 }
@@ -537,6 +575,13 @@ mod tests {
         assert!((quality("25%").unwrap() - 0.25).abs() < 1e-15);
         assert!((quality("0.4").unwrap() - 0.4).abs() < 1e-15);
         assert!(quality("1.2").is_err());
+        assert!((efficiency("78%").unwrap() - 0.78).abs() < 1e-15);
+        assert!((efficiency("78 %").unwrap() - 0.78).abs() < 1e-15);
+        assert!((efficiency("0.78").unwrap() - 0.78).abs() < 1e-15);
+        for bad in ["78", "0", "-0.5", "120%", "x", "inf"] {
+            assert!(efficiency(bad).is_err(), "{bad}");
+        }
+        assert!(efficiency("78").unwrap_err().contains("78%"));
         assert!(quality("abc").is_err());
     }
 

@@ -146,7 +146,7 @@ fn bad_input_is_refused_with_code_2() {
             ])
             .assert()
             .code(2)
-            .stderr(predicate::str::contains("(0, 1]"));
+            .stderr(predicate::str::contains("at most 1"));
     }
     zf().args(base)
         .args([

@@ -11,10 +11,20 @@ pub struct CompareArgs {
     pub fluid: FluidArgs,
     /// Temperatures: values with units and ranges, e.g. "250 K,300 K" or "250..350 K step 25"
     /// or "0..40 degC n 5".
-    #[arg(long, short = 't', allow_hyphen_values = true)]
+    #[arg(
+        long,
+        short = 't',
+        visible_alias = "temperature",
+        allow_hyphen_values = true
+    )]
     pub temperatures: Option<String>,
     /// Pressures: values with units and ranges, e.g. "10 bar,50 bar" or "1..200 bar n 20 log".
-    #[arg(long, short = 'p', allow_hyphen_values = true)]
+    #[arg(
+        long,
+        short = 'p',
+        visible_alias = "pressure",
+        allow_hyphen_values = true
+    )]
     pub pressures: Option<String>,
     /// A CSV list of states instead of a grid: columns "T [unit]" and "P [unit]".
     #[arg(long, conflicts_with_all = ["temperatures", "pressures"])]
@@ -95,10 +105,20 @@ pub struct TableArgs {
     #[command(flatten)]
     pub fluid: FluidArgs,
     /// Temperatures: values with units and ranges, e.g. "250 K,300 K" or "250..350 K step 25".
-    #[arg(long, short = 't', allow_hyphen_values = true)]
+    #[arg(
+        long,
+        short = 't',
+        visible_alias = "temperature",
+        allow_hyphen_values = true
+    )]
     pub temperatures: String,
     /// Pressures: values with units and ranges, e.g. "10 bar,50 bar" or "1..200 bar n 20".
-    #[arg(long, short = 'p', allow_hyphen_values = true)]
+    #[arg(
+        long,
+        short = 'p',
+        visible_alias = "pressure",
+        allow_hyphen_values = true
+    )]
     pub pressures: String,
     /// Ambient pressure that gauge readings are referred to.
     #[arg(long, default_value = "101.325 kPa")]

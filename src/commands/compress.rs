@@ -15,28 +15,40 @@ use eos::Model;
 
 /// Arguments of `zfactor compress`.
 #[derive(Debug, Args)]
+#[command(group(
+    clap::ArgGroup::new("efficiency")
+        .required(true)
+        .args(["isentropic_efficiency", "polytropic_efficiency"])
+))]
 pub struct CompressArgs {
     #[command(flatten)]
     pub fluid: FluidArgs,
-    /// Suction pressure, absolute or gauge: "30 barg".
-    #[arg(long, allow_hyphen_values = true)]
+    /// Suction pressure, absolute or gauge: "30 barg" (also -p, --pressure).
+    #[arg(
+        long,
+        short = 'p',
+        visible_alias = "pressure",
+        allow_hyphen_values = true
+    )]
     pub suction_pressure: String,
-    /// Suction temperature: "25 degC".
-    #[arg(long, allow_hyphen_values = true)]
+    /// Suction temperature: "25 degC" (also -t, --temperature).
+    #[arg(
+        long,
+        short = 't',
+        visible_alias = "temperature",
+        allow_hyphen_values = true
+    )]
     pub suction_temperature: String,
     /// Discharge pressure, absolute or gauge: "90 barg".
     #[arg(long, allow_hyphen_values = true)]
     pub discharge_pressure: String,
-    /// Isentropic efficiency, above 0 and at most 1.
-    #[arg(
-        long,
-        allow_hyphen_values = true,
-        conflicts_with = "polytropic_efficiency",
-        required_unless_present = "polytropic_efficiency"
-    )]
+    /// Isentropic efficiency: a fraction or a percentage, "0.78" or "78%" (give this or
+    /// --polytropic-efficiency).
+    #[arg(long, allow_hyphen_values = true, value_parser = crate::units::efficiency)]
     pub isentropic_efficiency: Option<f64>,
-    /// Polytropic efficiency, above 0 and at most 1.
-    #[arg(long, allow_hyphen_values = true)]
+    /// Polytropic efficiency: a fraction or a percentage, "0.80" or "80%" (give this or
+    /// --isentropic-efficiency).
+    #[arg(long, allow_hyphen_values = true, value_parser = crate::units::efficiency)]
     pub polytropic_efficiency: Option<f64>,
     /// Mass, molar, standard or actual (suction) volume flow: "12 kg/s", "50000 Sm3/h",
     /// "20 MMscfd", "1500 m3/h".
@@ -48,7 +60,9 @@ pub struct CompressArgs {
     /// Ambient pressure that gauge readings are referred to.
     #[arg(long, default_value = "101.325 kPa")]
     pub ambient: String,
-    /// Model id, a comma-separated list, or "all".
+    /// Model id, a comma-separated list, or "all" (the models that apply to the fluid): ideal,
+    /// vdw, rk, srk, pr, pr78, srk-pen, pr-pen, pr78-pen, virial, lk, dak, hy, if97, sw12,
+    /// reference (`zfactor models` says what each is).
     #[arg(long, short = 'm', default_value = "all")]
     pub model: String,
     /// Output format.

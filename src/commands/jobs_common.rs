@@ -130,7 +130,9 @@ pub const BASE_NAMES: &str = "0degC (normal), 15degC (standard, iso), 20degC, \
 
 /// Reads base conditions: a name, or "T,P" with units.
 pub fn base(text: &str, ambient: f64) -> Result<BaseConditions, CliError> {
-    if let Some(b) = BaseConditions::named(text) {
+    // A name is read with or without spaces ("15degC", "15 degC"), as every quantity is.
+    let compact: String = text.chars().filter(|c| !c.is_whitespace()).collect();
+    if let Some(b) = BaseConditions::named(&compact) {
         return Ok(b);
     }
     if let Some((t, p)) = text.split_once(',') {

@@ -459,11 +459,18 @@ const MAYBE_SOLID: &str = "a solid may form at this state (see the report's warn
 /// (P_ideal / P = 1/Z); with P and density the temperature (T_ideal / T = Z); otherwise the
 /// density at the state's T and P (rho_ideal / rho = Z).
 fn ideal_gas_error(given: Given, z: f64) -> (f64, &'static str) {
-    match given {
+    let (e, of) = match given {
         Given::TRho(..) => (1.0 / z - 1.0, "pressure"),
         Given::PRho(..) => (z - 1.0, "temperature"),
         _ => (z - 1.0, "density"),
-    }
+    };
+    // Round-off (the ideal gas against itself) is no error: 0.
+    let rounded = if e.abs() < crate::report::jobs_common::ROUND_OFF {
+        0.0
+    } else {
+        e
+    };
+    (rounded, of)
 }
 
 /// The pairs that reach the single-phase evaluation are (T, P), (T, rho) and (P, rho); the

@@ -11,14 +11,24 @@ pub struct Compared {
     /// The ideal-gas value.
     pub ideal: f64,
     /// (ideal - value) / value, percent; null where the model's value is within 1e-6 (SI
-    /// units) of zero, where a relative error means nothing.
+    /// units) of zero, where a relative error means nothing; exactly 0 where the two agree
+    /// to round-off.
     pub ideal_error_pct: Option<f64>,
 }
+
+/// Relative differences below this are round-off of the arithmetic that led to the two
+/// values (about 1e4 machine epsilons), not a difference between models: shown as 0.
+pub const ROUND_OFF: f64 = 1e-12;
 
 impl Compared {
     /// Pairs a model value with the ideal-gas value.
     pub fn new(value: f64, ideal: f64) -> Self {
-        let pct = 100.0 * (ideal - value) / value;
+        let rel = (ideal - value) / value;
+        let pct = if rel.abs() < ROUND_OFF {
+            0.0
+        } else {
+            100.0 * rel
+        };
         let ideal_error_pct = (value.abs() > 1e-6 && pct.is_finite()).then_some(pct);
         Compared {
             value,
