@@ -1,6 +1,7 @@
 //! The speed target of the grid commands: Z of a 10-component Peng-Robinson mixture over a
 //! 1000 x 1000 T-P grid on all cores (`zfactor::zgrid::z_grid`), against the same grid on
-//! one thread. Run: `cargo bench --bench z_grid` (target: <= 0.5 s on 2 cores).
+//! one thread, and on one thread with the baseline kernel. Run: `cargo bench --bench z_grid`
+//! (target: <= 0.5 s on 2 cores).
 
 use divan::Bencher;
 use zfactor::cli::Basis;
@@ -34,4 +35,25 @@ fn serial(bencher: Bencher) {
     let batch = zgrid::batch_model("pr", &feed).unwrap();
     let (t, p) = axes();
     bencher.bench(|| zgrid::z_grid_serial(&batch, &t, &p).unwrap());
+}
+
+/// The same single-threaded grid with the kernel compiled for the x86-64 baseline only: the
+/// gain of the run-time dispatch (`eos::cpu`) is `serial_baseline / serial`.
+#[divan::bench(sample_count = 5)]
+fn serial_baseline(bencher: Bencher) {
+    let feed = zfactor::feed::parse_mix(GAS, Basis::Mole, false).unwrap();
+    let batch = zgrid::batch_model("pr", &feed).unwrap();
+    let (t, p) = axes();
+    let mut out = vec![0.0; t.len() * p.len()];
+    bencher.bench_local(|| {
+        batch
+            .z_grid_at(
+                eos::cpu::Level::Base,
+                &t,
+                &p,
+                eos::batch::BatchRoot::LowestGibbs,
+                &mut out,
+            )
+            .unwrap()
+    });
 }

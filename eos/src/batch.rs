@@ -100,7 +100,7 @@ fn largest_root(c2: f64, c1: f64, c0: f64, start: f64) -> Option<f64> {
 
 /// The smaller root of the quadratic left after dividing out the root `zl`, when both of its
 /// roots are real and below `zl`; polished by Newton steps on the cubic.
-#[inline]
+#[inline(always)]
 fn smallest_other_root(c2: f64, c1: f64, c0: f64, zl: f64) -> Option<f64> {
     // Z^3 + c2 Z^2 + c1 Z + c0 = (Z - zl)(Z^2 + e1 Z + e0)
     let e1 = c2 + zl;
@@ -245,7 +245,7 @@ impl ZBatch {
     }
 
     /// a_mix at T: q0 + sqrt(T) (q1 + q2 sqrt(T)).
-    #[inline]
+    #[inline(always)]
     fn a_mix(&self, t: f64) -> f64 {
         let st = t.sqrt();
         self.q[0] + st * (self.q[1] + self.q[2] * st)
@@ -254,7 +254,7 @@ impl ZBatch {
     /// ka = a/(RT)^2 and kb = b/(RT) at LANES temperatures, in the order of operations of
     /// [`ZBatch::a_mix`] and [`ZBatch::reduced`].
     #[allow(clippy::needless_range_loop)]
-    #[inline]
+    #[inline(always)]
     fn k_lanes(&self, t: &[f64; LANES]) -> ([f64; LANES], [f64; LANES]) {
         let (mut ka, mut kb) = ([0.0; LANES], [0.0; LANES]);
         for l in 0..LANES {
@@ -268,7 +268,7 @@ impl ZBatch {
     }
 
     /// Residual Gibbs energy over RT of root z (composition terms left out).
-    #[inline]
+    #[inline(always)]
     fn g_res(&self, z: f64, aa: f64, bb: f64) -> f64 {
         let conf = if (self.d1 - self.d2).abs() < 1e-12 {
             aa / z
@@ -279,7 +279,7 @@ impl ZBatch {
     }
 
     /// The root `root` asks for, given the largest root `zl`.
-    #[inline]
+    #[inline(always)]
     fn choose(&self, root: BatchRoot, zl: f64, zs: Option<f64>, aa: f64, bb: f64) -> f64 {
         match (root, zs) {
             (BatchRoot::LowestGibbs, Some(zs))
@@ -292,7 +292,7 @@ impl ZBatch {
     }
 
     /// a/(RT)^2 and b/(RT) at T, given a(T): A = ka P and B = kb P along the isotherm.
-    #[inline]
+    #[inline(always)]
     fn reduced(&self, a: f64, t: f64) -> (f64, f64) {
         let rt = R * t;
         (a / (rt * rt), self.b / rt)
@@ -322,7 +322,7 @@ impl ZBatch {
     /// the lanes, so the compiler can keep the lanes in vector registers. Lanes whose Newton
     /// descent is not certified fall back to the scalar path.
     #[allow(clippy::needless_range_loop)]
-    #[inline]
+    #[inline(always)]
     fn lanes(
         &self,
         ka: &[f64; LANES],
@@ -420,6 +420,65 @@ impl ZBatch {
     }
 
     fn z_tp_piece(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        self.piece_at(crate::cpu::level(), t, p, root, out);
+    }
+
+    /// [`ZBatch::z_tp_piece`] at a given instruction-set level (as [`ZBatch::isotherm_at`]).
+    fn piece_at(
+        &self,
+        level: crate::cpu::Level,
+        t: &[f64],
+        p: &[f64],
+        root: BatchRoot,
+        out: &mut [f64],
+    ) {
+        #[cfg(target_arch = "x86_64")]
+        {
+            use crate::cpu::Level;
+            let top = crate::cpu::level();
+            if level == Level::Avx512 && top >= Level::Avx512 {
+                // SAFETY: the processor has AVX-512F (checked at run time by `cpu::level`).
+                #[allow(unsafe_code)]
+                unsafe {
+                    self.piece_avx512(t, p, root, out)
+                };
+                return;
+            }
+            if level >= Level::Avx2 && top >= Level::Avx2 {
+                // SAFETY: the processor has AVX2 (checked at run time by `cpu::level`).
+                #[allow(unsafe_code)]
+                unsafe {
+                    self.piece_avx2(t, p, root, out)
+                };
+                return;
+            }
+        }
+        #[cfg(not(target_arch = "x86_64"))]
+        let _ = level;
+        self.piece_body(t, p, root, out);
+    }
+
+    /// The kernel compiled for AVX-512F.
+    #[cfg(target_arch = "x86_64")]
+    #[target_feature(
+        enable = "avx512f,avx512dq,avx512cd,avx512bw,avx512vl,avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe"
+    )]
+    #[allow(unsafe_code)]
+    unsafe fn piece_avx512(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        self.piece_body(t, p, root, out);
+    }
+
+    /// The kernel compiled for AVX2.
+    #[cfg(target_arch = "x86_64")]
+    #[target_feature(enable = "avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe")]
+    #[allow(unsafe_code)]
+    unsafe fn piece_avx2(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        self.piece_body(t, p, root, out);
+    }
+
+    /// The (T, P) kernel; inlined into each compiled level.
+    #[inline(always)]
+    fn piece_body(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
         let mut tc = t.chunks_exact(LANES);
         let mut pc = p.chunks_exact(LANES);
         let mut oc = out.chunks_exact_mut(LANES);
@@ -470,6 +529,67 @@ impl ZBatch {
     }
 
     fn isotherm_unchecked(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        self.isotherm_at(crate::cpu::level(), t, p, root, out);
+    }
+
+    /// [`ZBatch::isotherm_unchecked`] at a given instruction-set level, which must be one
+    /// this processor runs ([`crate::cpu::available`]); a higher one is run at the baseline.
+    fn isotherm_at(
+        &self,
+        level: crate::cpu::Level,
+        t: f64,
+        p: &[f64],
+        root: BatchRoot,
+        out: &mut [f64],
+    ) {
+        #[cfg(target_arch = "x86_64")]
+        {
+            use crate::cpu::Level;
+            let top = crate::cpu::level();
+            if level == Level::Avx512 && top >= Level::Avx512 {
+                // SAFETY: the processor has AVX-512F (checked at run time by `cpu::level`),
+                // the only condition for running a function compiled for it.
+                #[allow(unsafe_code)]
+                unsafe {
+                    self.isotherm_avx512(t, p, root, out)
+                };
+                return;
+            }
+            if level >= Level::Avx2 && top >= Level::Avx2 {
+                // SAFETY: the processor has AVX2 (checked at run time by `cpu::level`).
+                #[allow(unsafe_code)]
+                unsafe {
+                    self.isotherm_avx2(t, p, root, out)
+                };
+                return;
+            }
+        }
+        #[cfg(not(target_arch = "x86_64"))]
+        let _ = level;
+        self.isotherm_body(t, p, root, out);
+    }
+
+    /// The kernel compiled for AVX-512F.
+    #[cfg(target_arch = "x86_64")]
+    #[target_feature(
+        enable = "avx512f,avx512dq,avx512cd,avx512bw,avx512vl,avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe"
+    )]
+    #[allow(unsafe_code)]
+    unsafe fn isotherm_avx512(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        self.isotherm_body(t, p, root, out);
+    }
+
+    /// The kernel compiled for AVX2.
+    #[cfg(target_arch = "x86_64")]
+    #[target_feature(enable = "avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe")]
+    #[allow(unsafe_code)]
+    unsafe fn isotherm_avx2(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) {
+        self.isotherm_body(t, p, root, out);
+    }
+
+    /// The isotherm kernel; inlined into each compiled level.
+    #[inline(always)]
+    fn isotherm_body(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) {
         let (ka, kb) = self.reduced(self.a_mix(t), t);
         let (ka, kb) = ([ka; LANES], [kb; LANES]);
         let mut pc = p.chunks_exact(LANES);
@@ -497,6 +617,54 @@ impl ZBatch {
         }
         for (row, &ti) in out.chunks_exact_mut(p.len()).zip(t) {
             self.isotherm_unchecked(ti, p, root, row);
+        }
+        Ok(())
+    }
+
+    /// [`ZBatch::z_grid`] with the kernel compiled for a given instruction-set level, for
+    /// tests and benchmarks that compare the levels ([`crate::cpu::available`]); a level the
+    /// processor lacks runs at the baseline. Every level gives the same bits.
+    pub fn z_grid_at(
+        &self,
+        level: crate::cpu::Level,
+        t: &[f64],
+        p: &[f64],
+        root: BatchRoot,
+        out: &mut [f64],
+    ) -> Result<()> {
+        self.check_grid(t, p, out)?;
+        if p.is_empty() {
+            return Ok(());
+        }
+        for (row, &ti) in out.chunks_exact_mut(p.len()).zip(t) {
+            self.isotherm_at(level, ti, p, root, row);
+        }
+        Ok(())
+    }
+
+    /// [`ZBatch::z_tp`] with the kernel compiled for a given instruction-set level (as
+    /// [`ZBatch::z_grid_at`]).
+    pub fn z_tp_at(
+        &self,
+        level: crate::cpu::Level,
+        t: &[f64],
+        p: &[f64],
+        root: BatchRoot,
+        out: &mut [f64],
+    ) -> Result<()> {
+        if t.len() != p.len() || t.len() != out.len() {
+            return Err(length_error(
+                t.len(),
+                "equal lengths of temperatures, pressures and output",
+            ));
+        }
+        for ((tc, pc), oc) in t
+            .chunks(PIECE)
+            .zip(p.chunks(PIECE))
+            .zip(out.chunks_mut(PIECE))
+        {
+            check_states(tc, pc)?;
+            self.piece_at(level, tc, pc, root, oc);
         }
         Ok(())
     }

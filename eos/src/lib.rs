@@ -33,6 +33,7 @@ pub mod catalogue;
 pub mod component;
 pub mod composition;
 pub mod constants;
+pub mod cpu;
 pub mod cubic;
 pub mod equilibrium;
 pub mod error;
