@@ -125,3 +125,22 @@ fn model_help_lists_every_model_id() {
         }
     }
 }
+
+#[test]
+fn a_note_shared_by_several_models_is_printed_once() {
+    // The Peng-Robinson members share one k_ij list: one line, headed by every member.
+    let (code, out, err) = run(&[
+        "state",
+        "--mix",
+        "methane=0.85,ethane=0.06,propane=0.03,nitrogen=0.03,co2=0.03",
+        "-t",
+        "300 K",
+        "-p",
+        "50 bar",
+        "-m",
+        "all",
+    ]);
+    assert!(matches!(code, 0 | 3), "{err}");
+    assert_eq!(out.matches("k_ij (pr family)").count(), 1, "{out}");
+    assert!(out.contains("pr, pr78"), "{out}");
+}

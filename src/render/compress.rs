@@ -158,10 +158,11 @@ pub fn table(r: &CompressReport) -> String {
         g.compared("power (gas)", "kW", &opt(&|m| m.power_w), 1e3);
     }
     out.push_str(&g.finish());
-    for m in res {
-        for n in m.notes.iter().filter(|n| !n.starts_with("warning: ")) {
-            out.push_str(&format!("{}: {n}\n", m.model));
-        }
+    for line in crate::render::notes::grouped(
+        res.iter().map(|m| (m.model.as_str(), m.notes.as_slice())),
+        |n| n.starts_with("warning: "),
+    ) {
+        out.push_str(&format!("{line}\n"));
     }
     if let Some(m) = res.first() {
         out.push_str(&format!("method: {}\n", m.method));

@@ -14,6 +14,7 @@ pub mod grid_table;
 pub mod jobs;
 pub mod json;
 pub mod kij;
+pub mod notes;
 pub mod number;
 pub mod process;
 pub mod saturation_csv;

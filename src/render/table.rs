@@ -159,12 +159,10 @@ pub fn state(r: &StateReport) -> String {
     }
     right_align(&mut t, 2);
     out.push_str(&format!("{t}\n"));
-    let mut notes: Vec<String> = Vec::new();
-    for m in res {
-        for n in &m.notes {
-            notes.push(format!("{}: {n}", m.model));
-        }
-    }
+    let notes = crate::render::notes::grouped(
+        res.iter().map(|m| (m.model.as_str(), m.notes.as_slice())),
+        |_| false,
+    );
     if !notes.is_empty() {
         out.push_str("notes:\n");
         for n in notes {

@@ -163,10 +163,11 @@ pub fn table(r: &VesselReport) -> String {
         );
     }
     out.push_str(&g.finish());
-    for m in res {
-        for n in m.notes.iter().filter(|n| !n.starts_with("warning: ")) {
-            out.push_str(&format!("{}: {n}\n", m.model));
-        }
+    for line in crate::render::notes::grouped(
+        res.iter().map(|m| (m.model.as_str(), m.notes.as_slice())),
+        |n| n.starts_with("warning: "),
+    ) {
+        out.push_str(&format!("{line}\n"));
     }
     out.push_str("ideal-gas error = (ideal-gas answer - model answer) / model answer.\n");
     out
