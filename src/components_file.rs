@@ -12,6 +12,7 @@
 //! | `acentric factor` (or `omega`) | yes | none |
 //! | `Vc` | no | cm3/mol, mL/mol, L/mol, dm3/mol, m3/kmol, m3/mol |
 //! | `Zc` | no | none |
+//! | `Z_RA` | no | none: the Rackett compressibility, from which the volume-translated members (srk-pen, pr-pen, pr78-pen) take the component's Peneloux shift (Peneloux et al. 1982); without it, Z_RA = 0.29056 - 0.08775 omega |
 //! | `cp` | one of the two forms | J/(mol K), kJ/(kmol K), or none for `cp/R` |
 //! | `cp/R a0` .. `cp/R a4` | | cp0/R = a0 + a1 T + ... + a4 T^4, T in K |
 //! | `cp Tmin`, `cp Tmax` | yes | the range of the heat capacity, any temperature unit |
@@ -45,6 +46,7 @@ enum Kind {
     Omega,
     Vc,
     Zc,
+    ZRa,
     Cp,
     CpA(usize),
     CpTmin,
@@ -62,6 +64,7 @@ fn kind_of(name: &str) -> Option<Kind> {
         "acentric factor" | "omega" | "w" => Kind::Omega,
         "vc" | "critical volume" => Kind::Vc,
         "zc" => Kind::Zc,
+        "z_ra" | "zra" | "rackett z" | "rackett z_ra" => Kind::ZRa,
         "cp" | "cp/r" => Kind::Cp,
         "cp tmin" => Kind::CpTmin,
         "cp tmax" => Kind::CpTmax,
@@ -145,7 +148,7 @@ pub fn load(path: &str) -> Result<Vec<&'static fluids::ComponentRecord>, CliErro
                 units::temperature(&format!("1 {unit}")).is_ok()
             }
             Kind::Pc => units::pressure(&format!("1 {unit}")).is_ok_and(|p| !p.is_gauge()),
-            Kind::Omega | Kind::Zc | Kind::CpA(_) => unit.is_empty() || unit == "-",
+            Kind::Omega | Kind::Zc | Kind::ZRa | Kind::CpA(_) => unit.is_empty() || unit == "-",
             Kind::Name | Kind::Source => true,
         };
         if !unit_ok {
@@ -265,6 +268,10 @@ pub fn load(path: &str) -> Result<Vec<&'static fluids::ComponentRecord>, CliErro
             Some(z) => Some(within(Kind::Zc, z, ZC_RANGE, "Zc")?),
             None => None,
         };
+        let z_ra = match number(Kind::ZRa)? {
+            Some(z) => Some(within(Kind::ZRa, z, ZC_RANGE, "Z_RA")?),
+            None => None,
+        };
         let (t_lo, t_hi) = (temp(Kind::CpTmin)?, temp(Kind::CpTmax)?);
         if !(t_lo > 0.0 && t_hi > t_lo) {
             return Err(bad(
@@ -331,6 +338,7 @@ pub fn load(path: &str) -> Result<Vec<&'static fluids::ComponentRecord>, CliErro
             omega,
             vc_m3_mol: vc,
             zc,
+            z_ra,
             cp,
             source,
             origin: format!("{path} line {line}"),

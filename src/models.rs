@@ -277,8 +277,20 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
             let kind = CubicKind::from_id(base).ok_or_else(|| unknown(id))?;
             let kij = kij_for(kind, feed, &mut notes);
             if id.ends_with("-pen") {
+                // A Rackett Z_RA given with a user component sets its Peneloux shift.
+                let z_ra: Option<Vec<f64>> =
+                    feed.records.iter().any(|r| r.z_ra.is_some()).then(|| {
+                        feed.records
+                            .iter()
+                            .map(|r| {
+                                r.z_ra
+                                    .unwrap_or_else(|| eos::translated::rackett_z(r.omega))
+                            })
+                            .collect()
+                    });
                 Engine::Helmholtz(Box::new(
-                    Translated::peneloux(kind, &comps, kij.as_deref(), None).map_err(err)?,
+                    Translated::peneloux(kind, &comps, kij.as_deref(), z_ra.as_deref())
+                        .map_err(err)?,
                 ))
             } else {
                 let cubic = Cubic::new(kind, &comps, kij.as_deref()).map_err(err)?;

@@ -163,3 +163,40 @@ fn bad_component_files_name_the_line_and_column() {
     assert_eq!(code, 2);
     assert!(err.contains("column \"molar mass [g]\""), "{err}");
 }
+
+#[test]
+fn a_rackett_compressibility_sets_the_peneloux_shift() {
+    // Peneloux, Rauzy & Freze (1982): the SRK volume shift c = 0.40768 (0.29441 - Z_RA) R Tc/Pc,
+    // and the translated molar volume is v_SRK - c at the same T and P.
+    let dir = tempfile::tempdir().unwrap();
+    let p = dir.path().join("zra.csv");
+    std::fs::write(
+        &p,
+        "name,molar mass [g/mol],Tc [K],Pc [bar],acentric factor,Z_RA,cp [J/(mol K)],\
+cp Tmin [K],cp Tmax [K],source\n\
+c3-lab,44.09562,369.83,42.48,0.152,0.2700,73.6,200,400,invented demo values\n",
+    )
+    .unwrap();
+    let (code, v, err) = json(&[
+        "--components",
+        p.to_str().unwrap(),
+        "state",
+        "--fluid",
+        "c3-lab",
+        "-t",
+        "250 K",
+        "-p",
+        "20 bar",
+        "-m",
+        "srk,srk-pen",
+    ]);
+    assert!(matches!(code, 0 | 3), "{err}");
+    let vol = |k: usize| v["results"][k]["molar_volume_m3_mol"].as_f64().unwrap();
+    let c = 0.40768 * (0.29441 - 0.2700) * 8.314_462_618 * 369.83 / 42.48e5;
+    assert!(
+        (vol(0) - vol(1) - c).abs() < 1e-12,
+        "{} {} {c}",
+        vol(0),
+        vol(1)
+    );
+}

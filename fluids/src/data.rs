@@ -273,6 +273,7 @@ fn load_components(
             zc: r.zc,
             tb_k: r.tb_k,
             ttriple_k: r.ttriple_k,
+            z_ra: None,
             source_key: source_keys[0].clone(),
             source_keys,
             source,

@@ -67,6 +67,9 @@ pub struct ComponentRecord {
     pub tb_k: Option<f64>,
     /// Triple-point temperature, K, where a source was at hand.
     pub ttriple_k: Option<f64>,
+    /// Rackett compressibility Z_RA, where given (user components); the volume-translated
+    /// members take their Peneloux shift from it, or from Z_RA = 0.29056 - 0.08775 omega.
+    pub z_ra: Option<f64>,
     /// Key of the main source (the first of `source_keys`).
     pub source_key: String,
     /// Keys of every source used for this row.

@@ -34,6 +34,8 @@ pub struct UserComponent {
     pub omega: f64,
     pub vc_m3_mol: Option<f64>,
     pub zc: Option<f64>,
+    /// Rackett compressibility Z_RA, for the Peneloux shift of the translated members.
+    pub z_ra: Option<f64>,
     pub cp: UserCp,
     /// The user's source text.
     pub source: String,
@@ -105,6 +107,7 @@ pub fn register(c: UserComponent) -> Result<&'static ComponentRecord, String> {
         zc: c.zc,
         tb_k: None,
         ttriple_k: None,
+        z_ra: c.z_ra,
         source_key: "user".to_string(),
         source_keys: vec!["user".to_string()],
         source: format!("user component, {}: {}", c.origin, c.source),
