@@ -265,3 +265,46 @@ fn a_workbook_larger_than_a_sheet_is_refused_before_any_work() {
     assert!(err.contains("1048575 rows"), "{err}");
     assert!(!book.exists());
 }
+
+#[test]
+fn a_mixture_z_table_takes_the_batch_kernel_where_the_screen_clears_it() {
+    // A grid large enough for the envelope screen (60 x 50 states): Z alone comes from the
+    // batch kernel for the states clearly one phase, and from the flash elsewhere; asking
+    // for the phase too takes the per-state path everywhere. Both must agree state by state
+    // (the batch kernel and the per-state root of lowest Gibbs energy agree to 1e-12).
+    let gas = "methane=0.85,ethane=0.07,propane=0.04,n-butane=0.02,nitrogen=0.02";
+    let grid = |props: &str| {
+        let out = zf()
+            .args(["table", "--mix", gas, "-m", "pr", "-t", "180..357 K step 3"])
+            .args([
+                "-p",
+                "1..99 bar step 2",
+                "--properties",
+                props,
+                "-f",
+                "json",
+            ])
+            .output()
+            .unwrap();
+        assert!(matches!(out.status.code(), Some(0 | 3)));
+        let v: Value = serde_json::from_slice(&out.stdout).unwrap();
+        let method = v["basis"]["method"].as_str().unwrap().to_string();
+        (v["rows"].as_array().unwrap().clone(), method)
+    };
+    let (fast, method) = grid("z");
+    assert!(method.contains("batch kernel"), "{method}");
+    let (full, method) = grid("z,phase");
+    assert!(!method.contains("batch kernel"), "{method}");
+    assert_eq!(fast.len(), 60 * 50);
+    let mut split = 0;
+    for (a, b) in fast.iter().zip(&full) {
+        assert_eq!(a["error"].is_null(), b["error"].is_null(), "{a} {b}");
+        if a["error"].is_null() {
+            let (za, zb) = (f(&a["values"][0]), f(&b["values"][0]));
+            assert!((za - zb).abs() < 1e-12 * zb, "{a} {b}");
+        } else {
+            split += 1;
+        }
+    }
+    assert!(split > 0, "the grid crosses the two-phase region");
+}

@@ -212,40 +212,51 @@ impl Plan {
         })
         .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
         grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;
+        let total = t.len() * p.len();
+        let check = StateCheck::new(&built, &feed);
+        // A mixture's states are phase-checked where the envelope screen says so.
+        let screen = if feed.is_pure() {
+            PhaseScreen::default()
+        } else {
+            let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
+            PhaseScreen::new(&built, &feed.mole, &t, total, p_low)
+        };
         // The Z-only batch kernel has no phase check: it serves pure fluids, whose root of
-        // lowest Gibbs energy is the stable phase; a mixture takes the per-state path with
-        // its flash.
-        let fast = feed.is_pure() && !sel.phase && sel.properties.iter().all(|p| p.from_z);
+        // lowest Gibbs energy is the stable phase, and the states of a mixture that the
+        // envelope screen finds clearly one phase; every other mixture state takes the
+        // per-state path with its flash.
+        let fast = (feed.is_pure() || screen.is_active())
+            && !sel.phase
+            && sel.properties.iter().all(|p| p.from_z);
         let batch = if fast {
             crate::zgrid::batch_model(&built.id, &feed)
         } else {
             None
         };
-        let total = t.len() * p.len();
-        let check = StateCheck::new(&built, &feed);
-        let (z, screen, method) = match &batch {
+        let (z, method) = match &batch {
             Some(b) => {
                 let bar = crate::progress::bar(total, "computing Z");
                 let z = crate::zgrid::z_grid(b, &t, &p, |n| crate::progress::inc(&bar, n))
                     .map_err(|e| from_eos(&format!("model {}", built.id), e))?;
                 crate::progress::finish(bar);
-                (
-                    Some(z),
-                    PhaseScreen::default(),
-                    "Z from the cubic in Z for each state (batch kernel, root of lowest Gibbs \
-                     energy); density from P/(Z R T)"
-                        .to_string(),
-                )
+                let mut method = "Z from the cubic in Z for each state (batch kernel, root of \
+                                  lowest Gibbs energy); density from P/(Z R T)"
+                    .to_string();
+                if !feed.is_pure() {
+                    method.push_str(&format!(
+                        "; {} (a state that splits into two phases is flagged)",
+                        phase_screen::method_note(true)
+                    ));
+                }
+                (Some(z), method)
             }
             None => {
-                let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
-                let screen = PhaseScreen::new(&built, &feed.mole, &t, total, p_low);
                 let method = format!(
                     "each state from (T, P) with the root of lowest Gibbs energy; {} (a state \
                      that splits into two phases is flagged); every property from the model",
                     phase_screen::method_note(screen.is_active())
                 );
-                (None, screen, method)
+                (None, method)
             }
         };
         let basis = basis(args, &feed, &built, &sel, ambient, method);
@@ -289,10 +300,18 @@ impl Plan {
         let at = |k: usize| (self.t[k / np], self.p[k % np]);
         match &self.z {
             Some(z) => {
+                // A mixture state the screen cannot clear takes the per-state path, flash
+                // first; every other state takes the batch kernel's Z.
+                let mixture = !self.feed.is_pure();
                 let rows = range
+                    .into_par_iter()
                     .map(|k| {
                         let (t, p) = at(k);
-                        row_from_z(&self.sel, &self.feed, &self.check, t, p, z[k])
+                        if mixture && self.screen.needs_test(t, p) {
+                            row_from_state(self, t, p)
+                        } else {
+                            row_from_z(&self.sel, &self.feed, &self.check, t, p, z[k])
+                        }
                     })
                     .collect::<Vec<_>>();
                 crate::progress::inc(bar, rows.len() as u64);
