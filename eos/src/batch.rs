@@ -188,6 +188,63 @@ pub struct ZBatch {
     d2: f64,
 }
 
+/// Defines `$at(&self, level, args...)`, which runs the kernel `$body` compiled for the
+/// given instruction-set level when the processor has it (`$v3`: x86-64-v3, `$v4`: v4; see
+/// [`crate::cpu`]), and at the baseline otherwise.
+macro_rules! leveled {
+    ($(#[$doc:meta])* $at:ident, $v3:ident, $v4:ident, $body:ident,
+     ($($arg:ident: $ty:ty),*)) => {
+        $(#[$doc])*
+        fn $at(&self, level: crate::cpu::Level, $($arg: $ty),*) {
+            #[cfg(target_arch = "x86_64")]
+            {
+                use crate::cpu::Level;
+                let top = crate::cpu::level();
+                if level == Level::Avx512 && top >= Level::Avx512 {
+                    // SAFETY: the processor has the x86-64-v4 features (checked at run time
+                    // by `cpu::level`), the only condition for running code compiled for
+                    // them.
+                    #[allow(unsafe_code)]
+                    unsafe {
+                        self.$v4($($arg),*)
+                    };
+                    return;
+                }
+                if level >= Level::Avx2 && top >= Level::Avx2 {
+                    // SAFETY: the processor has the x86-64-v3 features (checked at run time
+                    // by `cpu::level`).
+                    #[allow(unsafe_code)]
+                    unsafe {
+                        self.$v3($($arg),*)
+                    };
+                    return;
+                }
+            }
+            #[cfg(not(target_arch = "x86_64"))]
+            let _ = level;
+            self.$body($($arg),*);
+        }
+
+        /// The kernel compiled for x86-64-v4 (AVX-512).
+        #[cfg(target_arch = "x86_64")]
+        #[target_feature(
+            enable = "avx512f,avx512dq,avx512cd,avx512bw,avx512vl,avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe"
+        )]
+        #[allow(unsafe_code)]
+        unsafe fn $v4(&self, $($arg: $ty),*) {
+            self.$body($($arg),*);
+        }
+
+        /// The kernel compiled for x86-64-v3 (AVX2).
+        #[cfg(target_arch = "x86_64")]
+        #[target_feature(enable = "avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe")]
+        #[allow(unsafe_code)]
+        unsafe fn $v3(&self, $($arg: $ty),*) {
+            self.$body($($arg),*);
+        }
+    };
+}
+
 impl ZBatch {
     /// Prepares `model` at mole fractions `x`. Only members with a Soave-type alpha (or none)
     /// are supported: `srk`, `pr`, `pr78`, `vdw`.
@@ -402,79 +459,15 @@ impl ZBatch {
     /// arithmetic, so any split of the slices (for example across threads) gives identical
     /// results.
     pub fn z_tp(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
-        if t.len() != p.len() || t.len() != out.len() {
-            return Err(length_error(
-                t.len(),
-                "equal lengths of temperatures, pressures and output",
-            ));
-        }
-        for ((tc, pc), oc) in t
-            .chunks(PIECE)
-            .zip(p.chunks(PIECE))
-            .zip(out.chunks_mut(PIECE))
-        {
-            check_states(tc, pc)?;
-            self.z_tp_piece(tc, pc, root, oc);
-        }
-        Ok(())
+        self.z_tp_at(crate::cpu::level(), t, p, root, out)
     }
 
-    fn z_tp_piece(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
-        self.piece_at(crate::cpu::level(), t, p, root, out);
-    }
-
-    /// [`ZBatch::z_tp_piece`] at a given instruction-set level (as [`ZBatch::isotherm_at`]).
-    fn piece_at(
-        &self,
-        level: crate::cpu::Level,
-        t: &[f64],
-        p: &[f64],
-        root: BatchRoot,
-        out: &mut [f64],
-    ) {
-        #[cfg(target_arch = "x86_64")]
-        {
-            use crate::cpu::Level;
-            let top = crate::cpu::level();
-            if level == Level::Avx512 && top >= Level::Avx512 {
-                // SAFETY: the processor has AVX-512F (checked at run time by `cpu::level`).
-                #[allow(unsafe_code)]
-                unsafe {
-                    self.piece_avx512(t, p, root, out)
-                };
-                return;
-            }
-            if level >= Level::Avx2 && top >= Level::Avx2 {
-                // SAFETY: the processor has AVX2 (checked at run time by `cpu::level`).
-                #[allow(unsafe_code)]
-                unsafe {
-                    self.piece_avx2(t, p, root, out)
-                };
-                return;
-            }
-        }
-        #[cfg(not(target_arch = "x86_64"))]
-        let _ = level;
-        self.piece_body(t, p, root, out);
-    }
-
-    /// The kernel compiled for AVX-512F.
-    #[cfg(target_arch = "x86_64")]
-    #[target_feature(
-        enable = "avx512f,avx512dq,avx512cd,avx512bw,avx512vl,avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe"
-    )]
-    #[allow(unsafe_code)]
-    unsafe fn piece_avx512(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
-        self.piece_body(t, p, root, out);
-    }
-
-    /// The kernel compiled for AVX2.
-    #[cfg(target_arch = "x86_64")]
-    #[target_feature(enable = "avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe")]
-    #[allow(unsafe_code)]
-    unsafe fn piece_avx2(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) {
-        self.piece_body(t, p, root, out);
-    }
+    leveled!(
+        /// One piece of [`ZBatch::z_tp`] at a given instruction-set level (as
+        /// [`ZBatch::isotherm_at`]).
+        piece_at, piece_v3, piece_v4, piece_body,
+        (t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64])
+    );
 
     /// The (T, P) kernel; inlined into each compiled level.
     #[inline(always)]
@@ -532,60 +525,13 @@ impl ZBatch {
         self.isotherm_at(crate::cpu::level(), t, p, root, out);
     }
 
-    /// [`ZBatch::isotherm_unchecked`] at a given instruction-set level, which must be one
-    /// this processor runs ([`crate::cpu::available`]); a higher one is run at the baseline.
-    fn isotherm_at(
-        &self,
-        level: crate::cpu::Level,
-        t: f64,
-        p: &[f64],
-        root: BatchRoot,
-        out: &mut [f64],
-    ) {
-        #[cfg(target_arch = "x86_64")]
-        {
-            use crate::cpu::Level;
-            let top = crate::cpu::level();
-            if level == Level::Avx512 && top >= Level::Avx512 {
-                // SAFETY: the processor has AVX-512F (checked at run time by `cpu::level`),
-                // the only condition for running a function compiled for it.
-                #[allow(unsafe_code)]
-                unsafe {
-                    self.isotherm_avx512(t, p, root, out)
-                };
-                return;
-            }
-            if level >= Level::Avx2 && top >= Level::Avx2 {
-                // SAFETY: the processor has AVX2 (checked at run time by `cpu::level`).
-                #[allow(unsafe_code)]
-                unsafe {
-                    self.isotherm_avx2(t, p, root, out)
-                };
-                return;
-            }
-        }
-        #[cfg(not(target_arch = "x86_64"))]
-        let _ = level;
-        self.isotherm_body(t, p, root, out);
-    }
-
-    /// The kernel compiled for AVX-512F.
-    #[cfg(target_arch = "x86_64")]
-    #[target_feature(
-        enable = "avx512f,avx512dq,avx512cd,avx512bw,avx512vl,avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe"
-    )]
-    #[allow(unsafe_code)]
-    unsafe fn isotherm_avx512(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) {
-        self.isotherm_body(t, p, root, out);
-    }
-
-    /// The kernel compiled for AVX2.
-    #[cfg(target_arch = "x86_64")]
-    #[target_feature(enable = "avx2,fma,bmi1,bmi2,lzcnt,popcnt,movbe")]
-    #[allow(unsafe_code)]
-    unsafe fn isotherm_avx2(&self, t: f64, p: &[f64], root: BatchRoot, out: &mut [f64]) {
-        self.isotherm_body(t, p, root, out);
-    }
+    leveled!(
+        /// [`ZBatch::isotherm_unchecked`] at a given instruction-set level, which must be one
+        /// this processor runs ([`crate::cpu::available`]); a higher one is run at the
+        /// baseline.
+        isotherm_at, isotherm_v3, isotherm_v4, isotherm_body,
+        (t: f64, p: &[f64], root: BatchRoot, out: &mut [f64])
+    );
 
     /// The isotherm kernel; inlined into each compiled level.
     #[inline(always)]
@@ -611,14 +557,7 @@ impl ZBatch {
     /// `out[i * p.len() + j]` (temperature outer, pressure inner). a(T) is computed once per
     /// temperature; the result is bit for bit that of [`ZBatch::z_tp`] on the flattened grid.
     pub fn z_grid(&self, t: &[f64], p: &[f64], root: BatchRoot, out: &mut [f64]) -> Result<()> {
-        self.check_grid(t, p, out)?;
-        if p.is_empty() {
-            return Ok(());
-        }
-        for (row, &ti) in out.chunks_exact_mut(p.len()).zip(t) {
-            self.isotherm_unchecked(ti, p, root, row);
-        }
-        Ok(())
+        self.z_grid_at(crate::cpu::level(), t, p, root, out)
     }
 
     /// [`ZBatch::z_grid`] with the kernel compiled for a given instruction-set level, for
