@@ -93,7 +93,8 @@ pub fn read(args: &FluidArgs) -> Result<Feed, CliError> {
     let mut feed = read_fluid(args)?;
     if args.kij.is_some() || args.kij_file.is_some() {
         let ids = feed.ids();
-        feed.kij = crate::kij_input::read(args.kij.as_deref(), args.kij_file.as_deref(), &ids)?;
+        feed.kij =
+            crate::kij_input::read(args.kij.as_deref(), args.kij_file.as_deref(), Some(&ids))?;
     }
     Ok(feed)
 }

@@ -211,11 +211,12 @@ pub fn read_file(path: &str) -> Result<Vec<UserKij>, CliError> {
 }
 
 /// The user's k_ij from a file and the command line (the command line's after the file's,
-/// so that they win), and a note for each pair that is not in the mixture.
+/// so that they win), and a note for each command-line pair that is not in the mixture
+/// `ids` (none when there is no one mixture, as in an audit).
 pub fn read(
     list: Option<&str>,
     file: Option<&str>,
-    ids: &[&str],
+    ids: Option<&[&str]>,
 ) -> Result<Vec<UserKij>, CliError> {
     let mut out = match file {
         Some(p) => read_file(p)?,
@@ -223,12 +224,14 @@ pub fn read(
     };
     if let Some(text) = list {
         let given = parse_list(text)?;
-        for u in &given {
-            if !(ids.contains(&u.a.as_str()) && ids.contains(&u.b.as_str())) {
-                crate::input_notes::push(format!(
-                    "--kij {}-{}: the pair is not in the mixture; the value is not used",
-                    u.a, u.b
-                ));
+        if let Some(ids) = ids {
+            for u in &given {
+                if !(ids.contains(&u.a.as_str()) && ids.contains(&u.b.as_str())) {
+                    crate::input_notes::push(format!(
+                        "--kij {}-{}: the pair is not in the mixture; the value is not used",
+                        u.a, u.b
+                    ));
+                }
             }
         }
         out.extend(given);

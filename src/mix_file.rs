@@ -67,7 +67,8 @@ fn component(label: &str) -> Result<(&'static ComponentRecord, Option<String>), 
              that choice in your basis"
         ));
     }
-    if let Ok(r) = fluids::find(l) {
+    let found = fluids::find(l);
+    if let Ok(r) = found {
         return Ok((r, None));
     }
     let lumped = match l.to_ascii_uppercase().as_str() {

@@ -142,18 +142,6 @@ fn overrides(spec: Option<&str>) -> Result<Vec<(Field, String)>, CliError> {
         .collect()
 }
 
-/// The user's k_ij: the file's, then the command line's (which win).
-fn user_kij(args: &AuditArgs) -> Result<Vec<fluids::UserKij>, CliError> {
-    let mut out = match &args.kij_file {
-        Some(p) => crate::kij_input::read_file(p)?,
-        None => Vec::new(),
-    };
-    if let Some(text) = &args.kij {
-        out.extend(crate::kij_input::parse_list(text)?);
-    }
-    Ok(out)
-}
-
 /// Runs the audit.
 pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
     let started = std::time::Instant::now();
@@ -215,7 +203,7 @@ pub fn run(args: &AuditArgs) -> Result<AuditReport, CliError> {
         ambient,
         model: ids[0].clone(),
         tolerance: tol,
-        kij: user_kij(args)?,
+        kij: crate::kij_input::read(args.kij.as_deref(), args.kij_file.as_deref(), None)?,
     };
     let mut sink = Sink::create(&output, kind)?;
     let mut head = csv::StringRecord::from(headers.clone());

@@ -35,7 +35,7 @@ pub fn run(args: &KijArgs) -> Result<KijReport, CliError> {
     let rows: Vec<KijRow> = fluids::kij::table()
         .into_iter()
         .filter(|k| ids.iter().all(|id| &k.a == id || &k.b == id))
-        .filter(|k| family.is_none_or_eq(k.fitted_for))
+        .filter(|k| family.map_or(true, |f| f == k.fitted_for))
         .map(|k| KijRow {
             family: k.fitted_for.key(),
             a: k.a,
@@ -61,15 +61,4 @@ pub fn run(args: &KijArgs) -> Result<KijReport, CliError> {
         rows,
         note: NOTE,
     })
-}
-
-/// `None` matches any family.
-trait FamilyFilter {
-    fn is_none_or_eq(&self, f: KijFamily) -> bool;
-}
-
-impl FamilyFilter for Option<KijFamily> {
-    fn is_none_or_eq(&self, f: KijFamily) -> bool {
-        self.map_or(true, |g| g == f)
-    }
 }

@@ -25,6 +25,13 @@ pub const TEMPERATURES: [f64; 3] = [273.15, 288.15, 293.15];
 
 const CSV: &str = include_str!("data/iso6976_summation_factors.csv");
 
+/// The embedded factors, read once.
+fn factors() -> Result<&'static [Factor], String> {
+    static FACTORS: std::sync::LazyLock<Result<Vec<Factor>, String>> =
+        std::sync::LazyLock::new(parse);
+    FACTORS.as_deref().map_err(Clone::clone)
+}
+
 /// One summation factor.
 #[derive(Debug, Clone, PartialEq)]
 struct Factor {
@@ -34,7 +41,7 @@ struct Factor {
     confidence: String,
 }
 
-fn factors() -> Result<Vec<Factor>, String> {
+fn parse() -> Result<Vec<Factor>, String> {
     let mut rdr = csv::Reader::from_reader(CSV.as_bytes());
     let mut out = Vec::new();
     for rec in rdr.records() {
