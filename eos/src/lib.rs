@@ -50,6 +50,7 @@ pub mod phase;
 pub mod properties;
 pub mod pure;
 pub mod residual;
+pub mod root_choice;
 pub mod solid;
 pub mod state;
 pub mod tp_explicit;

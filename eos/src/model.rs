@@ -5,9 +5,9 @@
 //! phase-equilibrium solvers can evaluate trial phases of any composition with one model.
 
 use crate::component::Component;
-use crate::equilibrium::phase_eval::{PhaseAt, RootSel};
 use crate::ideal_cp::IdealGasValues;
 use crate::residual::Residual;
+use crate::root_choice::{select_root, PhaseAt, RootSel};
 
 /// Up to three densities (mol/m3) that satisfy P(T, rho) = P for one (T, P, x), lowest first.
 #[derive(Debug, Clone, Copy, PartialEq, Default)]
@@ -68,7 +68,7 @@ pub trait Model: Send + Sync {
     /// ln phi of a phase of mole fractions `x` at (T, P) on the density root chosen by `sel`,
     /// into `out`, with the root's density, Z and Gibbs energy (`None` where the model has
     /// no usable root): the evaluation at the heart of every equilibrium solver. Default:
-    /// [`crate::equilibrium::phase_eval::ln_phi_at_tp_generic`] from [`Model::densities`],
+    /// [`ln_phi_at_tp_generic`] from [`Model::densities`],
     /// [`Model::alpha_z`] and [`Model::ln_phi`]; a model may share work between those steps
     /// (the values must be the same).
     fn ln_phi_at_tp(
@@ -79,7 +79,7 @@ pub trait Model: Send + Sync {
         sel: RootSel,
         out: &mut [f64],
     ) -> Option<PhaseAt> {
-        crate::equilibrium::phase_eval::ln_phi_at_tp_generic(self, t, p, x, sel, out)
+        ln_phi_at_tp_generic(self, t, p, x, sel, out)
     }
 
     /// d ln phi_i / d n_j at fixed T and P for one mole of composition `x` at (T, rho), rho
@@ -130,4 +130,36 @@ pub trait Model: Send + Sync {
             .map(|(c, &xi)| xi * c.molar_mass)
             .sum()
     }
+}
+
+/// ln phi at (T, P) and mole fractions `x` through the model's density roots, alpha and Z
+/// ([`Model::alpha_z`]) and ln phi at (T, rho): the default of [`Model::ln_phi_at_tp`].
+pub fn ln_phi_at_tp_generic<M: Model + ?Sized>(
+    model: &M,
+    t: f64,
+    p: f64,
+    x: &[f64],
+    sel: RootSel,
+    out: &mut [f64],
+) -> Option<PhaseAt> {
+    let roots = model.densities(t, p, x);
+    select_root(
+        t,
+        p,
+        roots.as_slice(),
+        sel,
+        |rho| {
+            let (alpha, z_model) = model.alpha_z(t, rho, x);
+            (alpha, z_model, ())
+        },
+        |rho, _, z_model, ln_z, out| {
+            model.ln_phi(t, rho, x, out);
+            // ln phi_i = mu_res_i/RT - ln Z: replace the model's ln Z by ln(P/(rho R T)).
+            let corr = z_model.ln() - ln_z;
+            for o in out.iter_mut() {
+                *o += corr;
+            }
+        },
+        out,
+    )
 }

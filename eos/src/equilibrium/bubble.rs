@@ -1,8 +1,9 @@
 //! Bubble points: the feed is a saturated liquid with an incipient vapour. See
 //! [`super::saturation_point`] for the method.
 
+use super::envelope_start::point;
 use super::sat_system::Side;
-use super::saturation_point::{point, Given, SaturationPoint};
+use super::saturation_point::{Given, SaturationPoint};
 use crate::error::Result;
 use crate::model::Model;
 

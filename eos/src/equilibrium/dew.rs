@@ -3,8 +3,9 @@
 //! two dew pressures at one temperature; the solver returns the one reached from the Wilson
 //! estimate (usually the lower); [`super::envelope`] gives the whole curve.
 
+use super::envelope_start::point;
 use super::sat_system::Side;
-use super::saturation_point::{point, Given, SaturationPoint};
+use super::saturation_point::{Given, SaturationPoint};
 use crate::error::Result;
 use crate::model::Model;
 

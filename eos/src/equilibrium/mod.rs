@@ -27,6 +27,7 @@ pub mod critical_point;
 pub mod dense;
 pub mod dew;
 pub mod envelope;
+pub mod envelope_start;
 pub mod flash;
 pub mod gdem;
 pub mod phase_eval;

@@ -10,10 +10,11 @@
 //!    ([`super::stability`]) at pressures (or temperatures) around the estimate; an unstable
 //!    trial phase of the right kind (lighter than the feed for a bubble point, heavier for a
 //!    dew point) gives K and the state to start from;
-//! 3. if neither converges, the phase envelope of the feed ([`super::envelope`], M. L.
-//!    Michelsen, Fluid Phase Equilib. 4 (1980) 1-10): the unknowns interpolated between the
-//!    two points of the wanted branch that bracket the given T or P (the first such pair in
-//!    trace order: of two dew points at one pressure, the one on the rising dew curve).
+//! 3. if neither converges, [`super::envelope_start`] tries the phase envelope of the feed
+//!    ([`super::envelope`], M. L. Michelsen, Fluid Phase Equilib. 4 (1980) 1-10): the
+//!    unknowns interpolated between the two points of the wanted branch that bracket the
+//!    given T or P (the first such pair in trace order: of two dew points at one pressure,
+//!    the one on the rising dew curve).
 //!
 //! A solution of the equations is accepted only if a stability test of the feed there finds
 //! no trial phase clearly below its tangent plane (tm < -1e-6): Newton's method can also
@@ -24,7 +25,6 @@
 //! cricondentherm, at P above the cricondenbar, or for a feed that is too close to a pure
 //! component (one component present: use [`super::saturation`]).
 
-use super::envelope::{self, EnvelopeOptions, EnvelopePoint};
 use super::phase_eval::{ln_phi_tp, MAX_COMPONENTS};
 use super::sat_system::{is_trivial, Densities, Side, System, MAX_VARS};
 use super::{saturation, stability, wilson};
@@ -187,100 +187,84 @@ fn substitute(sys: &System, x: &mut [f64], spec_t: bool) -> Option<()> {
     Some(())
 }
 
-/// A bubble or dew point from the direct starts, then from the phase envelope.
-pub(crate) fn point(
-    model: &dyn Model,
-    z: &[f64],
-    side: Side,
-    given: Given,
-) -> Result<SaturationPoint> {
-    point_with(model, z, side, given, true)
-}
-
-/// A bubble or dew point from the direct starts only (the envelope's own first point).
+/// A bubble or dew point from the direct starts (Wilson's K-values, then stability-based
+/// starts): the envelope's own first point, and the first try of [`super::envelope_start`].
 pub(crate) fn point_direct(
     model: &dyn Model,
     z: &[f64],
     side: Side,
     given: Given,
 ) -> Result<SaturationPoint> {
-    point_with(model, z, side, given, false)
+    match direct(model, z, side, given)? {
+        Direct::Found(r) => Ok(r),
+        Direct::NotFound(u) => Err(u.error()),
+    }
 }
 
-/// Starts from the traced phase envelope ([`super::envelope`]): on each pair of consecutive
-/// points of the wanted branch that brackets the given T or P (in trace order, so the dew
-/// point of the rising dew curve comes before the retrograde one), the unknowns are
-/// interpolated linearly in the given variable and corrected by Newton's method.
-fn from_envelope(
-    model: &dyn Model,
-    sys: &System,
-    given: Given,
+/// What the direct starts gave.
+pub(crate) enum Direct<'a> {
+    /// A converged, stable point.
+    Found(SaturationPoint),
+    /// No start converged: the system, for further starts, and what to report.
+    NotFound(Unsolved<'a>),
+}
+
+/// A bubble or dew point that no direct start solved.
+pub(crate) struct Unsolved<'a> {
+    /// The equations.
+    pub sys: System<'a>,
+    /// The point's specification: T or P.
+    pub given: Given,
     spec: usize,
     value: f64,
-) -> Option<SaturationPoint> {
-    let z = sys.z;
-    let n = z.len();
-    let m = n + 2;
-    let env = envelope::trace(model, z, EnvelopeOptions::default()).ok()?;
-    let bubble = sys.side == Side::Bubble;
-    let on_side = |pt: &EnvelopePoint| (pt.vapor_fraction < 0.5) == bubble;
-    let coord = |pt: &EnvelopePoint| match given {
-        Given::T(_) => pt.t.ln(),
-        Given::P(_) => pt.p.ln(),
-    };
-    let unknowns = |pt: &EnvelopePoint| {
-        let mut x = [0.0; MAX_VARS];
-        for i in 0..n {
-            if z[i] > 0.0 && pt.incipient[i] > 0.0 {
-                let r = (pt.incipient[i] / z[i]).ln();
-                x[i] = if bubble { r } else { -r };
-            }
-        }
-        x[n] = pt.t.ln();
-        x[n + 1] = pt.p.ln();
-        x
-    };
-    for pair in env.points.windows(2) {
-        let (a, b) = (&pair[0], &pair[1]);
-        if !(on_side(a) && on_side(b)) {
-            continue;
-        }
-        let (ca, cb) = (coord(a), coord(b));
-        if (value - ca) * (value - cb) > 0.0 {
-            continue;
-        }
-        let span = cb - ca;
-        let s = if span.abs() > 0.0 {
-            (value - ca) / span
-        } else {
-            0.0
-        };
-        let (xa, xb) = (unknowns(a), unknowns(b));
-        let mut x = [0.0; MAX_VARS];
-        for i in 0..m {
-            x[i] = xa[i] + s * (xb[i] - xa[i]);
-        }
-        if let Ok(r) = attempt(sys, &mut x[..m], spec, value) {
-            return Some(r);
-        }
-    }
-    None
+    first_err: Option<Error>,
 }
 
-fn point_with(
-    model: &dyn Model,
-    z: &[f64],
+impl Unsolved<'_> {
+    /// Newton's method from the unknowns `x` (ln K, ln T, ln P).
+    pub fn attempt(&self, x: &mut [f64]) -> Option<SaturationPoint> {
+        attempt(&self.sys, x, self.spec, self.value).ok()
+    }
+
+    /// The specified variable as the solver sees it: ln T or ln P.
+    pub fn value(&self) -> f64 {
+        self.value
+    }
+
+    /// The error that says no start converged.
+    pub fn error(self) -> Error {
+        let (side, given, model) = (self.sys.side, self.given, self.sys.model);
+        let what = match (side, given) {
+            (Side::Bubble, Given::T(t)) => format!("no bubble point at T = {t} K"),
+            (Side::Dew, Given::T(t)) => format!("no dew point at T = {t} K"),
+            (Side::Bubble, Given::P(p)) => format!("no bubble point at P = {p} Pa"),
+            (Side::Dew, Given::P(p)) => format!("no dew point at P = {p} Pa"),
+        };
+        Error::NoSolution(format!(
+            "{what} for this feed with {} (beyond the cricondentherm or cricondenbar, or no \
+             start converged; first attempt: {})",
+            model.id(),
+            self.first_err
+                .map(|e| e.to_string())
+                .unwrap_or_else(|| "none".into())
+        ))
+    }
+}
+
+/// Bubble or dew point from the direct starts, or what is left to try.
+pub(crate) fn direct<'a>(
+    model: &'a dyn Model,
+    z: &'a [f64],
     side: Side,
     given: Given,
-    use_envelope: bool,
-) -> Result<SaturationPoint> {
+) -> Result<Direct<'a>> {
     let (t0, p0) = match given {
         Given::T(t) => (t, 1e5),
         Given::P(p) => (300.0, p),
     };
     let n = stability::check(model, t0, p0, z)?;
     if n == 1 {
-        return pure(model, side, given);
+        return pure(model, side, given).map(Direct::Found);
     }
     if z.iter().filter(|&&v| v > 0.0).count() < 2 {
         return Err(Error::InvalidInput {
@@ -324,7 +308,7 @@ fn point_with(
         };
         let mut xx = start;
         match attempt(&sys, &mut xx[..m], spec, value) {
-            Ok(r) => return Ok(r),
+            Ok(r) => return Ok(Direct::Found(r)),
             Err(e) => first_err = Some(e),
         }
     }
@@ -369,26 +353,14 @@ fn point_with(
         }
         let mut xx = x;
         if let Ok(r) = attempt(&sys, &mut xx[..m], spec, value) {
-            return Ok(r);
+            return Ok(Direct::Found(r));
         }
     }
-    if use_envelope {
-        if let Some(r) = from_envelope(model, &sys, given, spec, value) {
-            return Ok(r);
-        }
-    }
-    let what = match (side, given) {
-        (Side::Bubble, Given::T(t)) => format!("no bubble point at T = {t} K"),
-        (Side::Dew, Given::T(t)) => format!("no dew point at T = {t} K"),
-        (Side::Bubble, Given::P(p)) => format!("no bubble point at P = {p} Pa"),
-        (Side::Dew, Given::P(p)) => format!("no dew point at P = {p} Pa"),
-    };
-    Err(Error::NoSolution(format!(
-        "{what} for this feed with {} (beyond the cricondentherm or cricondenbar, or no \
-         start converged; first attempt: {})",
-        model.id(),
-        first_err
-            .map(|e| e.to_string())
-            .unwrap_or_else(|| "none".into())
-    )))
+    Ok(Direct::NotFound(Unsolved {
+        sys,
+        given,
+        spec,
+        value,
+        first_err,
+    }))
 }

@@ -31,7 +31,7 @@
 //! Water is the exception to the crate's zero: every model of water, here and elsewhere, is on
 //! the steam-table zero (IAPWS R6-95(2018): u = 0 and s = 0 for the saturated liquid at the
 //! triple point), which is IAPWS-95's published one. For it the shift above is undone: h0/R
-//! and s0/R of the ideal gas at T_REF, P_REF are IAPWS-95's ([`steam_table_zero`]), and the
+//! and s0/R of the ideal gas at T_REF, P_REF are IAPWS-95's ([`super::registry::steam_table_zero`]), and the
 //! other models of water carry the same values in their ideal-gas heat capacity
 //! ([`crate::IdealGasCp::with_zero`]).
 
@@ -228,14 +228,13 @@ impl HelmholtzFluid {
 }
 
 /// The formulation whose published zero of enthalpy and entropy is the steam-table zero.
-const STEAM_TABLE_KEY: &str = "water-iapws95";
+pub(crate) const STEAM_TABLE_KEY: &str = "water-iapws95";
 
-/// h0/R (K) and s0/R of water's ideal gas at T_REF and P_REF on the steam-table zero (IAPWS
-/// R6-95(2018): u = 0 and s = 0 for the saturated liquid at the triple point), from the
-/// ideal part of IAPWS-95: the zero every model of water carries.
-pub fn steam_table_zero() -> Result<(f64, f64)> {
-    let f = HelmholtzFluid::new(super::registry::formulation(STEAM_TABLE_KEY)?);
-    Ok(f.zero)
+impl HelmholtzFluid {
+    /// h0/R (K) and s0/R of the ideal gas at T_REF, P_REF on the fluid's zero.
+    pub(crate) fn zero(&self) -> (f64, f64) {
+        self.zero
+    }
 }
 
 /// Highest density handled: the largest liquid density on the p_max isobar over the range of

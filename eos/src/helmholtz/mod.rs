@@ -47,8 +47,10 @@ pub mod residual_part;
 pub mod saturation;
 
 pub use derivs::Derivs;
-pub use fluid::{steam_table_zero, HelmholtzFluid};
+pub use fluid::HelmholtzFluid;
 pub use formulation::{Formulation, Tier, Validity};
 pub use properties::FluidProperties;
-pub use registry::{formulation, keys, reference_for, reference_formulation, technical_for};
+pub use registry::{
+    formulation, keys, reference_for, reference_formulation, steam_table_zero, technical_for,
+};
 pub use saturation::{Saturation, SaturationMethod};

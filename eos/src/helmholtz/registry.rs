@@ -15,7 +15,7 @@
 use std::sync::LazyLock;
 
 use super::data::{parse, Meta};
-use super::fluid::HelmholtzFluid;
+use super::fluid::{HelmholtzFluid, STEAM_TABLE_KEY};
 use super::formulation::{Formulation, Tier};
 use crate::error::{Error, Result};
 
@@ -200,4 +200,11 @@ pub fn reference_for(component_name_or_id: &str) -> Option<HelmholtzFluid> {
 /// methane, argon).
 pub fn technical_for(component_name_or_id: &str) -> Option<HelmholtzFluid> {
     find(component_name_or_id, Tier::Technical)
+}
+
+/// h0/R (K) and s0/R of water's ideal gas at T_REF and P_REF on the steam-table zero (IAPWS
+/// R6-95(2018): u = 0 and s = 0 for the saturated liquid at the triple point), from the
+/// ideal part of IAPWS-95: the zero every model of water carries.
+pub fn steam_table_zero() -> Result<(f64, f64)> {
+    Ok(HelmholtzFluid::new(formulation(STEAM_TABLE_KEY)?).zero())
 }
