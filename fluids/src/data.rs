@@ -19,10 +19,10 @@ use std::sync::LazyLock;
 use serde::Deserialize;
 
 use crate::error::DataError;
-use crate::kij::KijEntry;
-use crate::lookup::normalize;
+use crate::kij_entry::{KijEntry, KijFamily};
+use crate::name::normalize;
+use crate::record::Source;
 use crate::record::{ComponentRecord, Confidence, CpSegmentRecord};
-use crate::source::Source;
 
 const COMPONENTS_CSV: &str = include_str!("../data/components.csv");
 const IDEAL_CP_CSV: &str = include_str!("../data/ideal_cp.csv");
@@ -311,7 +311,7 @@ fn load_kij(sources: &[Source], comps: &[ComponentRecord]) -> Result<Vec<KijEntr
         if r.a == r.b || !r.value.is_finite() {
             return Err(err(F, format!("{tag}: bad pair or value")));
         }
-        let family = crate::kij::KijFamily::from_key(&r.family)
+        let family = KijFamily::from_key(&r.family)
             .ok_or_else(|| err(F, format!("{tag}: unknown family \"{}\"", r.family)))?;
         let keys = split_list(&r.source);
         let source = resolve(F, &tag, &keys, sources)?;

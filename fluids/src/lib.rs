@@ -67,9 +67,12 @@
 //!   additivity. Each record's `cp_notes` says which, and `cp_range_k` where it holds.
 //!
 //! ## Modules
-//! One concept per file: [`data`] (loading), [`lookup`] (find), [`suggest`] (suggestions),
-//! [`search`](mod@search) (substring search), [`kij`](mod@kij) (interaction parameters), [`source`](mod@source)
-//! (citations), [`record`] (the record type), [`error`] (typed errors).
+//! One concept per file, each using only those above it in this list: [`error`] (typed
+//! errors), [`name`] (the canonical form of a name), [`record`] (the record types),
+//! [`kij_entry`] (a k_ij row and its family), [`data`] (loading), [`source`](mod@source)
+//! (citations), [`suggest`] (suggestions), [`lookup`] (find a built-in component), [`user`]
+//! (the user's components), [`query`] (find any component), [`search`](mod@search) (substring
+//! search), [`kij`](mod@kij) (interaction parameters).
 
 // User input must never panic: no unwrap or expect outside tests.
 #![cfg_attr(not(test), deny(clippy::unwrap_used, clippy::expect_used))]
@@ -77,7 +80,10 @@
 pub mod data;
 pub mod error;
 pub mod kij;
+pub mod kij_entry;
 pub mod lookup;
+pub mod name;
+pub mod query;
 pub mod record;
 pub mod search;
 pub mod source;
@@ -87,8 +93,10 @@ pub mod user;
 pub use data::data_status;
 pub use error::{DataError, LookupError};
 pub use kij::{kij, kij_matrix, KijFamily, KijMatrix, KijOrigin, KijRecord, KijUse, UserKij};
-pub use lookup::{all, find, normalize};
-pub use record::{ComponentRecord, Confidence, CpSegmentRecord};
+pub use lookup::all;
+pub use name::normalize;
+pub use query::find;
+pub use record::{ComponentRecord, Confidence, CpSegmentRecord, Source};
 pub use search::search;
-pub use source::{source, sources, Source};
+pub use source::{source, sources};
 pub use suggest::suggestions;

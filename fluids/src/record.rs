@@ -117,3 +117,14 @@ impl ComponentRecord {
         &self.cp_model
     }
 }
+
+/// One literature source.
+#[derive(Debug, Clone, PartialEq, Eq, Serialize)]
+pub struct Source {
+    /// Short key used in the data files, e.g. `poling5`.
+    pub key: String,
+    /// Full citation.
+    pub citation: String,
+    /// How the source was used (e.g. "from memory", cross-checks made).
+    pub remark: String,
+}

@@ -1,7 +1,8 @@
 //! Substring search over ids, names, aliases, formulas and CAS numbers, for browsing ("which
-//! butanes are there?"). Matching uses the normalised form of [`crate::lookup::normalize`].
+//! butanes are there?"). Matching uses the normalised form of [`crate::name::normalize`].
 
-use crate::lookup::{all, normalize};
+use crate::lookup::all;
+use crate::name::normalize;
 use crate::record::ComponentRecord;
 
 /// Components whose id, name, alias, formula or CAS number contains `text`, in table order.

@@ -1,18 +1,7 @@
 //! Literature sources: every data row carries one or more source keys, each resolved here to a
 //! full citation (`data/sources.csv`).
 
-use serde::Serialize;
-
-/// One literature source.
-#[derive(Debug, Clone, PartialEq, Eq, Serialize)]
-pub struct Source {
-    /// Short key used in the data files, e.g. `poling5`.
-    pub key: String,
-    /// Full citation.
-    pub citation: String,
-    /// How the source was used (e.g. "from memory", cross-checks made).
-    pub remark: String,
-}
+use crate::record::Source;
 
 /// Every source, in the order of `data/sources.csv`; empty if the data failed to load
 /// (see [`crate::data_status`]).

@@ -4,7 +4,7 @@
 //! other.
 
 use crate::data::db;
-use crate::lookup::normalize;
+use crate::name::normalize;
 
 /// Similarity below which a name is not offered.
 const THRESHOLD: f64 = 0.80;

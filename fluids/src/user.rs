@@ -7,7 +7,7 @@
 //! with the same data gives back the record already there, with other data it is refused.
 
 use crate::error::LookupError;
-use crate::lookup::normalize;
+use crate::name::normalize;
 use crate::record::{ComponentRecord, Confidence, CpSegmentRecord};
 use std::sync::Mutex;
 
