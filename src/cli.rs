@@ -3,8 +3,15 @@
 
 use clap::{Args, Parser, Subcommand, ValueEnum};
 
+pub mod audit_args;
+pub mod compress_args;
 pub mod equilibrium_args;
+pub mod flow_args;
 pub mod grid_args;
+pub mod process_args;
+pub mod relief_args;
+pub mod saturation_args;
+pub mod vessel_args;
 pub use equilibrium_args::{EnvelopeArgs, FlashArgs};
 pub use grid_args::{ChartFormat, CompareArgs, TableArgs, TableFormat};
 
@@ -30,7 +37,7 @@ pub enum Command {
     /// The built-in interaction parameters (k_ij) with their sources, by component.
     Kij(KijArgs),
     /// Saturation pressure or temperature of a pure fluid, with both saturated phases.
-    Saturation(crate::commands::saturation::SaturationArgs),
+    Saturation(saturation_args::SaturationArgs),
     /// Run the built-in demonstration (a fuel-gas skid of a fictional compressor station).
     Demo(DemoArgs),
     /// Compare models over a T-P grid or a list of states, against a reference model, the
@@ -42,21 +49,21 @@ pub enum Command {
     Models(ModelsArgs),
     /// A vessel or cylinder: inventory, heating or cooling, usable gas, fill pressure, mass to
     /// a target, adiabatic venting.
-    Vessel(Box<crate::commands::vessel::VesselArgs>),
+    Vessel(Box<vessel_args::VesselArgs>),
     /// One compressor stage: discharge temperature, heads (isentropic, polytropic by Schultz
     /// and by path integration), work and power.
-    Compress(Box<crate::commands::compress::CompressArgs>),
+    Compress(Box<compress_args::CompressArgs>),
     /// A gas flow as mass, amount, and volume at every named base condition and at flowing
     /// conditions.
-    Flow(Box<crate::commands::flow::FlowArgs>),
+    Flow(Box<flow_args::FlowArgs>),
     /// A change of state along an isochoric, isobaric, isothermal, isentropic or isenthalpic
     /// path: end state, heat, work and changes of u, h, s.
-    Process(Box<crate::commands::process::ProcessArgs>),
+    Process(Box<process_args::ProcessArgs>),
     /// Z, real-gas isentropic exponent and molar mass at relieving conditions.
-    Relief(Box<crate::commands::relief::ReliefArgs>),
+    Relief(Box<relief_args::ReliefArgs>),
     /// Audit a spreadsheet (CSV or .xlsx) of gas calculations: recompute each row, flag and
     /// explain deviations, write an annotated copy.
-    Audit(Box<crate::commands::audit::AuditArgs>),
+    Audit(Box<audit_args::AuditArgs>),
     /// Phase equilibrium of a mixture: flash at (T, P), (P, h) or (P, s), or a bubble or dew
     /// point, for one model or several.
     Flash(FlashArgs),

@@ -2,7 +2,7 @@
 //! mole or mass basis, in fractions or percent. Fractions that do not sum to one are refused
 //! (the message gives the sum) unless the user asks for normalisation.
 
-use crate::cli::{Basis, FluidArgs};
+use crate::cli::Basis;
 use crate::error::CliError;
 use fluids::ComponentRecord;
 
@@ -85,43 +85,6 @@ impl Feed {
                 .collect();
             format!("mixture ({} mole fractions)", parts.join(", "))
         }
-    }
-}
-
-/// Reads `--fluid` or `--mix` with `--basis`, `--normalize` and the user's k_ij.
-pub fn read(args: &FluidArgs) -> Result<Feed, CliError> {
-    let mut feed = read_fluid(args)?;
-    if args.kij.is_some() || args.kij_file.is_some() {
-        let ids = feed.ids();
-        feed.kij =
-            crate::kij_input::read(args.kij.as_deref(), args.kij_file.as_deref(), Some(&ids))?;
-    }
-    Ok(feed)
-}
-
-fn read_fluid(args: &FluidArgs) -> Result<Feed, CliError> {
-    match (&args.fluid, &args.mix) {
-        (Some(name), None) => {
-            let rec = fluids::find(name)?;
-            Ok(Feed {
-                records: vec![rec],
-                as_entered: vec![1.0],
-                basis: args.basis,
-                percent: false,
-                normalized_from: None,
-                mole: vec![1.0],
-                mass: vec![1.0],
-                kij: Vec::new(),
-            })
-        }
-        (None, Some(mix)) => parse_mix(mix, args.basis, args.normalize),
-        (None, None) if args.mix_file.is_some() => {
-            let path = args.mix_file.as_deref().unwrap_or_default();
-            crate::mix_file::read(path, args.normalize)
-        }
-        _ => Err(CliError::BadInput(
-            "give one of --fluid NAME, --mix \"name=fraction,...\" or --mix-file FILE".to_string(),
-        )),
     }
 }
 

@@ -20,9 +20,9 @@
 //! printed with the normalised composition.
 
 use crate::cli::Basis;
-use crate::commands::audit_io::{kind_of, Kind};
 use crate::error::CliError;
 use crate::feed::{self, Amounts, Feed};
+use crate::sheet_rows::{kind_of, Kind};
 use fluids::ComponentRecord;
 use std::path::Path;
 
@@ -115,7 +115,7 @@ fn rows_of(path: &Path) -> Result<Vec<(usize, Vec<String>)>, String> {
             Ok(out)
         }
         Kind::Xlsx => {
-            let mut sheet = crate::commands::audit_sheet::Sheet::open(path, None)?;
+            let mut sheet = crate::xlsx_rows::Sheet::open(path, None)?;
             let mut out = vec![(0, sheet.headers.clone())];
             let mut rows = Vec::new();
             sheet.next_rows(usize::MAX, &mut rows);

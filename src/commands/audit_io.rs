@@ -1,41 +1,13 @@
 //! Reading an audited sheet (CSV streamed in chunks; .xlsx row by row through
-//! [`crate::commands::audit_sheet`], with merged cells found) and writing its annotated copy atomically: a temporary file in the same
+//! [`crate::xlsx_rows`], with merged cells found) and writing its annotated copy atomically: a temporary file in the same
 //! folder, renamed over the output only when complete. The input is never written.
 
-use crate::commands::audit_row::BadCell;
-use crate::commands::audit_sheet::Sheet;
 use crate::error::CliError;
+use crate::sheet_rows::{kind_of, BadCell, Kind, RawRow};
+use crate::xlsx_rows::Sheet;
 use std::fs::File;
 use std::io::BufReader;
 use std::path::{Path, PathBuf};
-
-/// A row as read: its spreadsheet row number, its cells as text, and a problem found while
-/// reading it (a merged cell, an unreadable record).
-pub type RawRow = (usize, csv::StringRecord, Option<BadCell>);
-
-/// The kind of file.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum Kind {
-    Csv,
-    Xlsx,
-}
-
-/// The kind of a path by its extension.
-pub fn kind_of(path: &Path) -> Result<Kind, CliError> {
-    match path
-        .extension()
-        .and_then(|e| e.to_str())
-        .map(str::to_ascii_lowercase)
-        .as_deref()
-    {
-        Some("csv") | Some("txt") => Ok(Kind::Csv),
-        Some("xlsx") | Some("xlsm") => Ok(Kind::Xlsx),
-        _ => Err(CliError::BadInput(format!(
-            "\"{}\": give a .csv or .xlsx file",
-            path.display()
-        ))),
-    }
-}
 
 /// A sheet being read.
 pub enum Source {

@@ -6,7 +6,9 @@ use crate::cli::Basis;
 use crate::commands::jobs_common;
 use crate::error::CliError;
 use crate::feed::{self, Feed};
+use crate::feed_input;
 use crate::models::{self, BuiltModel};
+use crate::sheet_rows::{column_letter, BadCell};
 use crate::units;
 use eos::ideal::IdealGas;
 use eos::jobs::audit::{self, Quantity, Row};
@@ -103,20 +105,6 @@ fn normalise(s: &str) -> String {
 fn split_header(h: &str) -> (String, Option<String>) {
     let (name, unit) = crate::file_header::split(h);
     (normalise(&name), unit)
-}
-
-/// Spreadsheet column letters of a 0-based index (A, B, ..., Z, AA, ...).
-pub fn column_letter(mut i: usize) -> String {
-    let mut s = Vec::new();
-    loop {
-        s.push(b'A' + (i % 26) as u8);
-        if i < 26 {
-            break;
-        }
-        i = i / 26 - 1;
-    }
-    s.reverse();
-    String::from_utf8(s).unwrap_or_default()
 }
 
 /// A mapped column.
@@ -256,16 +244,6 @@ pub struct Defaults {
     pub kij: Vec<fluids::UserKij>,
 }
 
-/// A bad cell or row.
-#[derive(Debug, Clone, PartialEq)]
-pub struct BadCell {
-    /// Spreadsheet row number (1 is the header).
-    pub row: usize,
-    /// Column letter and header, or "-" for the whole row.
-    pub column: String,
-    pub message: String,
-}
-
 /// A fluid read from a cell: its feed and the key of its model.
 pub struct FluidEntry {
     pub feed: Feed,
@@ -304,12 +282,7 @@ fn cell(cells: &csv::StringRecord, i: usize) -> &str {
 
 impl Cache {
     /// Reads the fluid cell of every row and builds the models they need.
-    pub fn prepare(
-        &mut self,
-        rows: &[crate::commands::audit_io::RawRow],
-        map: &Mapping,
-        d: &Defaults,
-    ) {
+    pub fn prepare(&mut self, rows: &[crate::sheet_rows::RawRow], map: &Mapping, d: &Defaults) {
         let Some(fc) = map.columns.get(&Field::Fluid) else {
             return;
         };
@@ -354,7 +327,7 @@ impl Cache {
 /// where it has one (a pure fluid among methane, nitrogen, CO2, argon, hydrogen, water),
 /// otherwise Peng-Robinson.
 fn model_for(asked: &str, feed: &Feed) -> String {
-    if asked != crate::commands::audit::AUTO {
+    if asked != crate::cli::audit_args::AUTO {
         asked.to_string()
     } else if models::applies("reference", feed) {
         "reference".to_string()
@@ -391,7 +364,7 @@ fn read_fluid(text: &str, basis: Basis) -> Result<Feed, String> {
             kij: None,
             kij_file: None,
         };
-        feed::read(&args).map_err(|e| e.to_string())
+        feed_input::read(&args).map_err(|e| e.to_string())
     }
 }
 

@@ -14,14 +14,14 @@ use crate::compare::iso6976_sum;
 use crate::compare::region::Region;
 use crate::compare::stats::Accumulator;
 use crate::error::CliError;
-use crate::feed::{self, Feed};
+use crate::feed::Feed;
+use crate::feed_input;
 use crate::models::{self, BuiltModel};
 use crate::range::StateCheck;
 use crate::report::compare::{
-    Band, CompareReport, GridAxes, IdealGasMap, ModelStats, PointReport, PointValue, ReferenceInfo,
-    RegionStats, StateAt,
+    Band, CompareReport, GridAxes, IdealGasMap, ModelStats, ReferenceInfo, RegionStats, StateAt,
 };
-use crate::report::compare_points::{Encoding, PointStore, Policy};
+use crate::report::compare_points::{Encoding, PointReport, PointStore, PointValue, Policy};
 use crate::units;
 use eos::constants::R;
 
@@ -567,7 +567,7 @@ impl Tally {
 
 /// Runs the comparison.
 pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
+    let feed = feed_input::read(&args.fluid)?;
     let ambient = units::ambient_pressure(&args.ambient)?;
     let tolerances = parse_tolerances(&args.tolerance)?;
     let (reference, mut states) = reference_and_states(args, &feed, ambient)?;

@@ -1,78 +1,20 @@
 //! `zfactor compress`: one compression stage per model, with the ideal-gas answer beside it.
 
-use crate::cli::{FluidArgs, Format};
+use crate::cli::compress_args::CompressArgs;
 use crate::commands::jobs_common::{self as jc, ctx, molar_flow, per_model, Flow, Pair};
 use crate::error::CliError;
-use crate::feed;
+use crate::feed_input;
 use crate::report::compress::{
     CompressInput, CompressReport, CompressResult, ExponentsReport, Shortcut,
 };
 use crate::report::jobs_common::{BaseReport, Compared, StateReport};
-use clap::Args;
 use eos::jobs::compressor::{stage, Efficiency, Exponents, Stage};
 use eos::phase::Phase;
 use eos::Model;
 
-/// Arguments of `zfactor compress`.
-#[derive(Debug, Args)]
-#[command(group(
-    clap::ArgGroup::new("efficiency")
-        .required(true)
-        .args(["isentropic_efficiency", "polytropic_efficiency"])
-))]
-pub struct CompressArgs {
-    #[command(flatten)]
-    pub fluid: FluidArgs,
-    /// Suction pressure, absolute or gauge: "30 barg" (also -p, --pressure).
-    #[arg(
-        long,
-        short = 'p',
-        visible_alias = "pressure",
-        allow_hyphen_values = true
-    )]
-    pub suction_pressure: String,
-    /// Suction temperature: "25 degC" (also -t, --temperature).
-    #[arg(
-        long,
-        short = 't',
-        visible_alias = "temperature",
-        allow_hyphen_values = true
-    )]
-    pub suction_temperature: String,
-    /// Discharge pressure, absolute or gauge: "90 barg".
-    #[arg(long, allow_hyphen_values = true)]
-    pub discharge_pressure: String,
-    /// Isentropic efficiency: a fraction or a percentage, "0.78" or "78%" (give this or
-    /// --polytropic-efficiency).
-    #[arg(long, allow_hyphen_values = true, value_parser = crate::units::efficiency)]
-    pub isentropic_efficiency: Option<f64>,
-    /// Polytropic efficiency: a fraction or a percentage, "0.80" or "80%" (give this or
-    /// --isentropic-efficiency).
-    #[arg(long, allow_hyphen_values = true, value_parser = crate::units::efficiency)]
-    pub polytropic_efficiency: Option<f64>,
-    /// Mass, molar, standard or actual (suction) volume flow: "12 kg/s", "50000 Sm3/h",
-    /// "20 MMscfd", "1500 m3/h".
-    #[arg(long)]
-    pub flow: Option<String>,
-    /// Base conditions of a standard volume flow (overrides the one its unit implies).
-    #[arg(long)]
-    pub base: Option<String>,
-    /// Ambient pressure that gauge readings are referred to.
-    #[arg(long, default_value = "101.325 kPa")]
-    pub ambient: String,
-    /// Model id, a comma-separated list, or "all" (the models that apply to the fluid): ideal,
-    /// vdw, rk, srk, pr, pr78, srk-pen, pr-pen, pr78-pen, virial, lk, dak, hy, if97, sw12,
-    /// reference (`zfactor models` says what each is).
-    #[arg(long, short = 'm', default_value = "all")]
-    pub model: String,
-    /// Output format.
-    #[arg(long, short = 'f', value_enum, default_value = "table")]
-    pub format: Format,
-}
-
 /// Computes the report.
 pub fn run(args: &CompressArgs) -> Result<CompressReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
+    let feed = feed_input::read(&args.fluid)?;
     let amb = jc::ambient(&args.ambient)?;
     let p1 = jc::pressure(&args.suction_pressure, amb)?;
     let t1 = jc::temperature(&args.suction_temperature)?;

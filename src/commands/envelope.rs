@@ -17,9 +17,10 @@
 use crate::cli::EnvelopeArgs;
 use crate::error::{from_eos, CliError};
 use crate::exit::Exit;
-use crate::feed::{self, Feed};
+use crate::feed::Feed;
+use crate::feed_input;
 use crate::models::{self, BuiltModel};
-use crate::report::envelope::{EnvelopeReport, EnvelopeRow, Isotherm, TpPoint};
+use crate::report::envelope::{pv_range, EnvelopeReport, EnvelopeRow, Isotherm, TpPoint};
 use crate::units;
 use eos::constants::R;
 use eos::equilibrium::{critical_point, envelope, saturation, EnvelopeOptions, EnvelopeStop};
@@ -35,8 +36,6 @@ const TR_START: f64 = 0.4;
 const ISOTHERMS_TR: [f64; 4] = [0.8, 0.9, 1.0, 1.2];
 /// Points per isotherm.
 const ISOTHERM_POINTS: usize = 240;
-/// The P-v chart shows the dome from this fraction of the critical pressure up.
-const DOME_FROM_PR: f64 = 0.05;
 
 /// A chart file to write, with its type from the extension.
 #[derive(Debug, Clone)]
@@ -115,7 +114,7 @@ pub fn dispatch(args: &EnvelopeArgs) -> Result<Exit, CliError> {
 
 /// Computes the envelope or curve (and the isotherms when `--pv` is given).
 pub fn run(args: &EnvelopeArgs) -> Result<EnvelopeReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
+    let feed = feed_input::read(&args.fluid)?;
     let ids = models::resolve_ids(&args.model, &feed)?;
     if ids.len() != 1 {
         return Err(CliError::BadInput(format!(
@@ -439,27 +438,4 @@ fn isotherms(
         });
     }
     out
-}
-
-/// Molar-volume range of the P-v chart: the dome from DOME_FROM_PR * Pc upwards, widened a
-/// little on both sides.
-pub fn pv_range(points: &[EnvelopeRow], pc: f64) -> (f64, f64) {
-    let shown: Vec<&EnvelopeRow> = points
-        .iter()
-        .filter(|r| r.pressure_pa >= DOME_FROM_PR * pc)
-        .collect();
-    let rows: Vec<&EnvelopeRow> = if shown.len() >= 2 {
-        shown
-    } else {
-        points.iter().collect()
-    };
-    let v_lo = rows
-        .iter()
-        .map(|r| 1.0 / r.liquid_molar_density_mol_m3)
-        .fold(f64::INFINITY, f64::min);
-    let v_hi = rows
-        .iter()
-        .map(|r| 1.0 / r.vapor_molar_density_mol_m3)
-        .fold(0.0, f64::max);
-    (0.8 * v_lo, 1.25 * v_hi)
 }

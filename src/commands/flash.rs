@@ -11,6 +11,7 @@ use crate::commands::each_model::{self, Answers};
 use crate::error::{from_eos, CliError};
 use crate::exit::Exit;
 use crate::feed::{self, Feed};
+use crate::feed_input;
 use crate::models::{self, BuiltModel};
 use crate::report::flash::{FlashInput, FlashPhase, FlashReport, FlashResultReport};
 use crate::report::state::ComponentFraction;
@@ -187,7 +188,7 @@ fn spec(args: &FlashArgs, feed: &Feed, ambient: f64) -> Result<Spec, CliError> {
 
 /// Computes the flash (or the saturation point) with every requested model.
 pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
+    let feed = feed_input::read(&args.fluid)?;
     if feed.is_pure() {
         return Err(pure_fluid(&feed));
     }

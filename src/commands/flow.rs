@@ -1,54 +1,19 @@
 //! `zfactor flow`: one flow of gas as mass, amount, and volume at every named base condition
 //! and at flowing conditions, using each model's Z at each condition.
 
-use crate::cli::{FluidArgs, Format};
+use crate::cli::flow_args::FlowArgs;
 use crate::commands::jobs_common::{self as jc, ctx, molar_flow, per_model, Flow, Pair};
 use crate::error::CliError;
-use crate::feed;
+use crate::feed_input;
 use crate::report::flow::{FlowInput, FlowReport, FlowResult, VolumeAt};
 use crate::report::jobs_common::Compared;
-use clap::Args;
 use eos::jobs::base_conditions::{molar_volume, NAMED};
 use eos::jobs::BaseConditions;
 use eos::Model;
 
-/// Arguments of `zfactor flow`.
-#[derive(Debug, Args)]
-pub struct FlowArgs {
-    #[command(flatten)]
-    pub fluid: FluidArgs,
-    /// The flow with its unit: "12 kg/s", "50000 Sm3/h", "20 MMscfd", "1500 m3/h" (actual
-    /// volume flows need --temperature and --pressure).
-    #[arg(long)]
-    pub flow: String,
-    /// Base conditions of a standard volume flow (overrides the one its unit implies).
-    #[arg(long)]
-    pub base: Option<String>,
-    /// Flowing temperature (for actual volume flows).
-    #[arg(long, short = 't', allow_hyphen_values = true, requires = "pressure")]
-    pub temperature: Option<String>,
-    /// Flowing pressure (for actual volume flows).
-    #[arg(
-        long,
-        short = 'p',
-        allow_hyphen_values = true,
-        requires = "temperature"
-    )]
-    pub pressure: Option<String>,
-    /// Ambient pressure that gauge readings are referred to.
-    #[arg(long, default_value = "101.325 kPa")]
-    pub ambient: String,
-    /// Model id, a comma-separated list, or "all".
-    #[arg(long, short = 'm', default_value = "all")]
-    pub model: String,
-    /// Output format.
-    #[arg(long, short = 'f', value_enum, default_value = "table")]
-    pub format: Format,
-}
-
 /// Computes the report.
 pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
+    let feed = feed_input::read(&args.fluid)?;
     let amb = jc::ambient(&args.ambient)?;
     let base = args.base.as_deref().map(|b| jc::base(b, amb)).transpose()?;
     let flow = jc::flow(&args.flow, "--flow", base)?;

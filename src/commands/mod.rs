@@ -3,7 +3,6 @@
 pub mod audit;
 pub mod audit_io;
 pub mod audit_row;
-pub mod audit_sheet;
 pub mod compare;
 pub mod compress;
 pub mod demo;

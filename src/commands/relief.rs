@@ -1,40 +1,17 @@
 //! `zfactor relief`: Z, the real-gas isentropic exponent and the molar mass at relieving
 //! conditions, per model, with a warning where Z is outside 0.8 to 1.1.
 
-use crate::cli::{FluidArgs, Format};
+use crate::cli::relief_args::ReliefArgs;
 use crate::commands::jobs_common::{self as jc, ctx, per_model, Pair};
 use crate::error::CliError;
-use crate::feed;
+use crate::feed_input;
 use crate::report::jobs_common::{Compared, StateReport};
 use crate::report::relief::{ReliefInput, ReliefReport, ReliefResult};
-use clap::Args;
 use eos::jobs::relief::{self, Z_RANGE};
-
-/// Arguments of `zfactor relief`.
-#[derive(Debug, Args)]
-pub struct ReliefArgs {
-    #[command(flatten)]
-    pub fluid: FluidArgs,
-    /// Relieving temperature.
-    #[arg(long, short = 't', allow_hyphen_values = true)]
-    pub temperature: String,
-    /// Relieving pressure (set pressure plus overpressure), absolute or gauge.
-    #[arg(long, short = 'p', allow_hyphen_values = true)]
-    pub pressure: String,
-    /// Ambient pressure that gauge readings are referred to.
-    #[arg(long, default_value = "101.325 kPa")]
-    pub ambient: String,
-    /// Model id, a comma-separated list, or "all".
-    #[arg(long, short = 'm', default_value = "all")]
-    pub model: String,
-    /// Output format.
-    #[arg(long, short = 'f', value_enum, default_value = "table")]
-    pub format: Format,
-}
 
 /// Computes the report.
 pub fn run(args: &ReliefArgs) -> Result<ReliefReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
+    let feed = feed_input::read(&args.fluid)?;
     let amb = jc::ambient(&args.ambient)?;
     let t = jc::temperature(&args.temperature)?;
     let p = jc::pressure(&args.pressure, amb)?;

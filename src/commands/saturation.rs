@@ -2,41 +2,19 @@
 //! for each requested model (the cubics and, where the fluid has one, its reference or 12-term
 //! Helmholtz formulation), through `eos::pure`.
 
-use crate::cli::{FluidArgs, Format};
+use crate::cli::saturation_args::SaturationArgs;
+use crate::cli::Format;
 use crate::commands::each_model::{self, Answers};
 use crate::error::CliError;
-use crate::feed::{self, Feed};
+use crate::feed::Feed;
+use crate::feed_input;
 use crate::report::saturation::{
     SaturatedPhase, SaturationInput, SaturationReport, SaturationResult,
 };
 use crate::units;
-use clap::Args;
 use eos::cubic::{Cubic, CubicKind};
 use eos::helmholtz::{reference_for, technical_for, HelmholtzFluid};
 use eos::pure::{PureError, PureFluid, PureProps, SatState};
-
-/// Arguments of `zfactor saturation`.
-#[derive(Debug, Args)]
-pub struct SaturationArgs {
-    #[command(flatten)]
-    pub fluid: FluidArgs,
-    /// Temperature with its unit ("300 K", "25 degC"): gives the saturation pressure.
-    #[arg(long, short = 't', allow_hyphen_values = true)]
-    pub temperature: Option<String>,
-    /// Pressure with its unit ("1 atm", "5 barg"): gives the saturation temperature.
-    #[arg(long, short = 'p', allow_hyphen_values = true)]
-    pub pressure: Option<String>,
-    /// Ambient pressure that gauge readings are referred to.
-    #[arg(long, default_value = "101.325 kPa")]
-    pub ambient: String,
-    /// Model id, a comma-separated list, or "all": vdw, rk, srk, pr, pr78, and reference or
-    /// sw12 where the fluid has that formulation.
-    #[arg(long, short = 'm', default_value = "all")]
-    pub model: String,
-    /// Output format.
-    #[arg(long, short = 'f', value_enum, default_value = "table")]
-    pub format: Format,
-}
 
 /// Model ids of this command, cubics first.
 pub const IDS: [&str; 7] = ["vdw", "rk", "srk", "pr", "pr78", "reference", "sw12"];
@@ -136,7 +114,7 @@ fn from_pure(context: &str, e: PureError) -> CliError {
 
 /// Computes the saturation state with every requested model.
 pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
+    let feed = feed_input::read(&args.fluid)?;
     if !feed.is_pure() {
         return Err(CliError::BadInput(format!(
             "saturation is for a pure fluid, but {} was given; use --fluid NAME",

@@ -4,6 +4,7 @@ use crate::cli::{RootArg, StateArgs};
 use crate::commands::each_model::{self, Answers};
 use crate::error::{from_eos, CliError};
 use crate::feed::{self, Feed};
+use crate::feed_input;
 use crate::models::{self, BuiltModel, ModelState};
 use crate::report::state::{
     ComponentFraction, CompositionRow, FugacityRow, ModelResult, PhaseResult, StateInput,
@@ -49,7 +50,7 @@ impl Given {
 
 /// Computes the state with every requested model.
 pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
-    let feed = feed::read(&args.fluid)?;
+    let feed = feed_input::read(&args.fluid)?;
     let ambient = units::ambient_pressure(&args.ambient)?;
     let t = args
         .temperature

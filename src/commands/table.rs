@@ -11,6 +11,7 @@ use crate::compare::grid;
 use crate::error::{from_eos, CliError};
 use crate::exit::Exit;
 use crate::feed::{self, Feed};
+use crate::feed_input;
 use crate::models::{self, BuiltModel};
 use crate::phase_screen::{self, PhaseScreen};
 use crate::range::StateCheck;
@@ -193,7 +194,7 @@ struct Plan {
 
 impl Plan {
     fn new(args: &TableArgs) -> Result<Plan, CliError> {
-        let feed = feed::read(&args.fluid)?;
+        let feed = feed_input::read(&args.fluid)?;
         let ambient = units::ambient_pressure(&args.ambient)?;
         let sel = table_property::parse(&args.properties)?;
         let ids = models::resolve_ids(&args.model, &feed)?;

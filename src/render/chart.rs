@@ -183,7 +183,7 @@ fn isotherms<DB: DrawingBackend>(
             .collect();
     }
     let on = |t: f64| {
-        let mut pts: Vec<&crate::report::compare::PointReport> = r
+        let mut pts: Vec<&crate::report::compare_points::PointReport> = r
             .points
             .held()
             .iter()

@@ -2,7 +2,8 @@
 
 use crate::error::CliError;
 use crate::render::number::sig;
-use crate::report::compare::{CompareReport, PointReport, StateAt};
+use crate::report::compare::{CompareReport, StateAt};
+use crate::report::compare_points::PointReport;
 use crate::units::PA_PER_BAR;
 use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
 use std::io::Write;

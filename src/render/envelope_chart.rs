@@ -12,10 +12,10 @@
 //! white. Files are written atomically ([`crate::output_file`]) and never over an existing
 //! file without `--force`.
 
-use crate::commands::envelope::pv_range;
 use crate::error::CliError;
 use crate::render::chart::register_font;
 use crate::render::number::sig;
+use crate::report::envelope::pv_range;
 use crate::report::envelope::{EnvelopeReport, TpPoint};
 use crate::units::PA_PER_BAR;
 use plotters::coord::Shift;

@@ -115,43 +115,6 @@ pub struct ModelStats {
     pub notes: Vec<String>,
 }
 
-/// One model at one point.
-#[derive(Debug, Clone, Serialize)]
-pub struct PointValue {
-    pub model: String,
-    pub z: Option<f64>,
-    pub molar_density_mol_m3: Option<f64>,
-    pub mass_density_kg_m3: Option<f64>,
-    /// Density deviation from the reference, percent.
-    pub deviation_pct: Option<f64>,
-    /// Why the model has no value here.
-    pub error: Option<String>,
-    /// "outside range", "solid", "solid may form" where the state is so for this model.
-    pub flag: Option<String>,
-}
-
-/// One point.
-#[derive(Debug, Clone, Serialize)]
-pub struct PointReport {
-    pub temperature_k: f64,
-    pub pressure_pa: f64,
-    /// Region: gas, liquid, supercritical, near-critical or two-phase (excluded).
-    pub phase: &'static str,
-    /// Line of the states or reference file.
-    pub line: Option<usize>,
-    /// Source of the reference value.
-    pub source: Option<String>,
-    pub reference_z: Option<f64>,
-    pub reference_density_kg_m3: Option<f64>,
-    /// Where the reference model itself is outside its range or in the solid region: the
-    /// deviations at this point are measured against an extrapolation.
-    pub reference_flag: Option<String>,
-    /// Every model's value and deviation.
-    pub values: Vec<PointValue>,
-    /// Spread of the real-gas models' densities, percent of their mean.
-    pub spread_pct: Option<f64>,
-}
-
 /// The spread between models.
 #[derive(Debug, Clone, Serialize)]
 pub struct Band {

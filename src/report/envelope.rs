@@ -78,3 +78,29 @@ pub struct Isotherm {
     /// Pressures, Pa.
     pub pressure_pa: Vec<f64>,
 }
+
+/// The P-v chart shows the dome from this fraction of the critical pressure up.
+const DOME_FROM_PR: f64 = 0.05;
+
+/// Molar-volume range of the P-v chart: the dome from DOME_FROM_PR * Pc upwards, widened a
+/// little on both sides.
+pub fn pv_range(points: &[EnvelopeRow], pc: f64) -> (f64, f64) {
+    let shown: Vec<&EnvelopeRow> = points
+        .iter()
+        .filter(|r| r.pressure_pa >= DOME_FROM_PR * pc)
+        .collect();
+    let rows: Vec<&EnvelopeRow> = if shown.len() >= 2 {
+        shown
+    } else {
+        points.iter().collect()
+    };
+    let v_lo = rows
+        .iter()
+        .map(|r| 1.0 / r.liquid_molar_density_mol_m3)
+        .fold(f64::INFINITY, f64::min);
+    let v_hi = rows
+        .iter()
+        .map(|r| 1.0 / r.vapor_molar_density_mol_m3)
+        .fold(0.0, f64::max);
+    (0.8 * v_lo, 1.25 * v_hi)
+}

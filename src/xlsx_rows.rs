@@ -7,8 +7,7 @@
 //! is cell 0); a row without any cell between rows with cells comes as an empty row, as
 //! the sheet shows it. A row that crosses a merged region carries the problem with it.
 
-use crate::commands::audit_io::RawRow;
-use crate::commands::audit_row::{column_letter, BadCell};
+use crate::sheet_rows::{column_letter, BadCell, RawRow};
 use calamine::{open_workbook, Data, Dimensions, Reader, Xlsx};
 use std::path::Path;
 use std::sync::mpsc::{sync_channel, Receiver};
