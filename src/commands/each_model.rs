@@ -33,9 +33,10 @@ pub fn run<T>(
         }
     }
     match first_err {
-        Some(e) if results.is_empty() => {
-            Err(e.with_message(format!("no model could answer: {}", warnings.join("; "))))
-        }
+        Some(e) if results.is_empty() => Err(CliError::NoModel {
+            summary: warnings.join("; "),
+            first: Box::new(e),
+        }),
         _ => Ok(Answers { results, warnings }),
     }
 }
@@ -83,7 +84,10 @@ mod tests {
         })
         .err()
         .unwrap();
-        assert!(matches!(e, CliError::BadInput(_)));
+        assert_eq!(e.exit_code(), crate::exit::Exit::BadInput);
+        assert!(
+            matches!(e, CliError::NoModel { ref first, .. } if matches!(**first, CliError::BadInput(_)))
+        );
         assert!(e.to_string().contains("a left out: outside"));
         assert!(e.to_string().contains("b left out: no root"));
     }

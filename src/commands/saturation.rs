@@ -5,7 +5,7 @@
 use crate::cli::saturation_args::SaturationArgs;
 use crate::cli::Format;
 use crate::commands::each_model::{self, Answers};
-use crate::error::CliError;
+use crate::error::{from_pure, CliError};
 use crate::feed::Feed;
 use crate::feed_input;
 use crate::report::saturation::{
@@ -100,15 +100,6 @@ fn phase(p: &PureProps, m: f64) -> SaturatedPhase {
         enthalpy_j_kg: p.h / m,
         entropy_j_mol_k: p.s,
         entropy_j_kg_k: p.s / m,
-    }
-}
-
-/// Maps a refusal of the pure-fluid layer: input outside what the model covers is bad input
-/// (exit 2), a failed solver a failed computation (exit 1).
-fn from_pure(context: &str, e: PureError) -> CliError {
-    match e {
-        PureError::Model(inner) => crate::error::from_eos(context, inner),
-        other => CliError::BadInput(format!("{context}: {other}")),
     }
 }
 

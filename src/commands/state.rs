@@ -2,7 +2,7 @@
 
 use crate::cli::{RootArg, StateArgs};
 use crate::commands::each_model::{self, Answers};
-use crate::error::{from_eos, CliError};
+use crate::error::{from_eos, from_pure, CliError};
 use crate::feed::{self, Feed};
 use crate::feed_input;
 use crate::models::{self, BuiltModel, ModelState};
@@ -480,22 +480,6 @@ fn unreachable_pair() -> eos::Result<ModelState> {
     Err(eos::Error::NoSolution(
         "this pair of properties needs a pure-fluid model".to_string(),
     ))
-}
-
-/// Maps a pure-fluid solver error: states the request cannot have are bad input.
-fn from_pure(context: &str, e: eos::pure::PureError) -> CliError {
-    use eos::pure::PureError as P;
-    match e {
-        P::Model(inner) => from_eos(context, inner),
-        P::NoSaturation { .. }
-        | P::OutOfRange { .. }
-        | P::QualityOutOfRange { .. }
-        | P::OnSaturationLine { .. }
-        | P::BelowTriplePoint { .. }
-        | P::UnsupportedPair { .. }
-        | P::InvalidInput { .. } => CliError::BadInput(format!("{context}: {e}")),
-        other => CliError::Computation(format!("{context}: {other}")),
-    }
 }
 
 /// A pure fluid inside the dome (or saturated): both phases from the model's saturation
