@@ -2,6 +2,7 @@
 //! read by [`crate::units`] and [`crate::feed`], so their messages can quote the input.
 
 use clap::{Args, Parser, Subcommand, ValueEnum};
+use shared_args::SharedArgs;
 
 pub mod audit_args;
 pub mod compress_args;
@@ -11,6 +12,7 @@ pub mod grid_args;
 pub mod process_args;
 pub mod relief_args;
 pub mod saturation_args;
+pub mod shared_args;
 pub mod vessel_args;
 pub use equilibrium_args::{EnvelopeArgs, FlashArgs};
 pub use grid_args::{ChartFormat, CompareArgs, TableArgs, TableFormat};
@@ -171,20 +173,11 @@ pub struct StateArgs {
     /// Pure fluids: vapour quality, 0 (saturated liquid) to 1 (saturated vapour), or percent.
     #[arg(long, short = 'x')]
     pub quality: Option<String>,
-    /// Ambient pressure that gauge readings are referred to.
-    #[arg(long, default_value = "101.325 kPa")]
-    pub ambient: String,
-    /// Model id, a comma-separated list, or "all" (the models that apply to the fluid): ideal,
-    /// vdw, rk, srk, pr, pr78, srk-pen, pr-pen, pr78-pen, virial, lk, dak, hy, if97, sw12,
-    /// reference (`zfactor models` says what each is).
-    #[arg(long, short = 'm', default_value = "all")]
-    pub model: String,
+    #[command(flatten)]
+    pub shared: SharedArgs,
     /// Which density root to report when a model has several.
     #[arg(long, value_enum, default_value = "stable")]
     pub root: RootArg,
-    /// Output format.
-    #[arg(long, short = 'f', value_enum, default_value = "table")]
-    pub format: Format,
 }
 
 /// Arguments of `zfactor fluids`.

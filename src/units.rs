@@ -284,8 +284,25 @@ pub fn ambient_pressure(input: &str) -> Result<f64, UnitError> {
     pressure(input).and_then(|p| absolute_pressure(input, p, 0.0))
 }
 
+/// An absolute pressure in Pa, and whether it was read as a gauge pressure.
+pub type PressureReading = (f64, bool);
+
+/// A temperature (K) and an absolute pressure (Pa, with the gauge flag), each where given:
+/// the temperature is read first, so its error is the one reported when both are bad.
+pub fn optional_tp(
+    temperature_text: Option<&str>,
+    pressure_text: Option<&str>,
+    ambient_pa: f64,
+) -> Result<(Option<f64>, Option<PressureReading>), UnitError> {
+    let t = temperature_text.map(temperature).transpose()?;
+    let p = pressure_text
+        .map(|text| pressure_reading(text, ambient_pa))
+        .transpose()?;
+    Ok((t, p))
+}
+
 /// An absolute pressure in Pa from a reading that may be gauge, with the gauge flag.
-pub fn pressure_reading(input: &str, ambient_pa: f64) -> Result<(f64, bool), UnitError> {
+pub fn pressure_reading(input: &str, ambient_pa: f64) -> Result<PressureReading, UnitError> {
     let reading = pressure(input)?;
     Ok((
         absolute_pressure(input, reading, ambient_pa)?,

@@ -31,6 +31,7 @@
 pub mod batch;
 pub mod catalogue;
 pub mod component;
+pub(crate) mod component_check;
 pub mod composition;
 pub mod constants;
 pub mod cpu;

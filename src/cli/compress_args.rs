@@ -1,6 +1,7 @@
 //! The arguments of `zfactor compress` (parsed by clap; the command is in `commands::compress`).
 
-use crate::cli::{FluidArgs, Format};
+use crate::cli::shared_args::SharedArgs;
+use crate::cli::FluidArgs;
 use clap::Args;
 
 /// Arguments of `zfactor compress`.
@@ -47,15 +48,6 @@ pub struct CompressArgs {
     /// Base conditions of a standard volume flow (overrides the one its unit implies).
     #[arg(long)]
     pub base: Option<String>,
-    /// Ambient pressure that gauge readings are referred to.
-    #[arg(long, default_value = "101.325 kPa")]
-    pub ambient: String,
-    /// Model id, a comma-separated list, or "all" (the models that apply to the fluid): ideal,
-    /// vdw, rk, srk, pr, pr78, srk-pen, pr-pen, pr78-pen, virial, lk, dak, hy, if97, sw12,
-    /// reference (`zfactor models` says what each is).
-    #[arg(long, short = 'm', default_value = "all")]
-    pub model: String,
-    /// Output format.
-    #[arg(long, short = 'f', value_enum, default_value = "table")]
-    pub format: Format,
+    #[command(flatten)]
+    pub shared: SharedArgs,
 }

@@ -1,6 +1,7 @@
 //! The arguments of `zfactor flow` (parsed by clap; the command is in `commands::flow`).
 
-use crate::cli::{FluidArgs, Format};
+use crate::cli::shared_args::SharedArgs;
+use crate::cli::FluidArgs;
 use clap::Args;
 
 /// Arguments of `zfactor flow`.
@@ -26,13 +27,6 @@ pub struct FlowArgs {
         requires = "temperature"
     )]
     pub pressure: Option<String>,
-    /// Ambient pressure that gauge readings are referred to.
-    #[arg(long, default_value = "101.325 kPa")]
-    pub ambient: String,
-    /// Model id, a comma-separated list, or "all".
-    #[arg(long, short = 'm', default_value = "all")]
-    pub model: String,
-    /// Output format.
-    #[arg(long, short = 'f', value_enum, default_value = "table")]
-    pub format: Format,
+    #[command(flatten)]
+    pub shared: SharedArgs,
 }

@@ -1,6 +1,7 @@
 //! The arguments of `zfactor relief` (parsed by clap; the command is in `commands::relief`).
 
-use crate::cli::{FluidArgs, Format};
+use crate::cli::shared_args::SharedArgs;
+use crate::cli::FluidArgs;
 use clap::Args;
 
 /// Arguments of `zfactor relief`.
@@ -14,13 +15,6 @@ pub struct ReliefArgs {
     /// Relieving pressure (set pressure plus overpressure), absolute or gauge.
     #[arg(long, short = 'p', allow_hyphen_values = true)]
     pub pressure: String,
-    /// Ambient pressure that gauge readings are referred to.
-    #[arg(long, default_value = "101.325 kPa")]
-    pub ambient: String,
-    /// Model id, a comma-separated list, or "all".
-    #[arg(long, short = 'm', default_value = "all")]
-    pub model: String,
-    /// Output format.
-    #[arg(long, short = 'f', value_enum, default_value = "table")]
-    pub format: Format,
+    #[command(flatten)]
+    pub shared: SharedArgs,
 }

@@ -15,7 +15,7 @@ use eos::Model;
 /// Computes the report.
 pub fn run(args: &CompressArgs) -> Result<CompressReport, CliError> {
     let feed = feed_input::read(&args.fluid)?;
-    let amb = jc::ambient(&args.ambient)?;
+    let amb = jc::ambient(&args.shared.ambient)?;
     let p1 = jc::pressure(&args.suction_pressure, amb)?;
     let t1 = jc::temperature(&args.suction_temperature)?;
     let p2 = jc::pressure(&args.discharge_pressure, amb)?;
@@ -48,7 +48,7 @@ pub fn run(args: &CompressArgs) -> Result<CompressReport, CliError> {
         .map(|f| jc::flow(f, "--flow", base))
         .transpose()?;
     let x = feed.mole.clone();
-    let (results, mut warnings) = per_model(&args.model, &feed, |pair| {
+    let (results, mut warnings) = per_model(&args.shared.model, &feed, |pair| {
         let mut r = one(pair, p1, t1, p2, eff, flow, &x)?;
         let edge = jc::edge_notes(
             pair,

@@ -4,6 +4,7 @@
 //! 70 barg and 40 degC. The demo computes the state with every model side by side, so the
 //! ideal-gas error and the spread between the cubic models are visible at a glance.
 
+use crate::cli::shared_args::SharedArgs;
 use crate::cli::{Basis, DemoArgs, FluidArgs, RootArg, StateArgs};
 use crate::error::CliError;
 use crate::exit::Exit;
@@ -30,10 +31,12 @@ pub fn run(args: &DemoArgs) -> Result<Exit, CliError> {
         enthalpy: None,
         entropy: None,
         quality: None,
-        ambient: "101.325 kPa".to_string(),
-        model: "all".to_string(),
+        shared: SharedArgs {
+            ambient: "101.325 kPa".to_string(),
+            model: "all".to_string(),
+            format: args.format,
+        },
         root: RootArg::Stable,
-        format: args.format,
     };
     if args.format == crate::cli::Format::Table {
         crate::render::emit(

@@ -7,6 +7,7 @@
 //! why (beyond the cricondenbar or the cricondentherm) as bad input.
 
 use crate::cli::FlashArgs;
+use crate::commands::cp_range;
 use crate::commands::each_model::{self, Answers};
 use crate::error::{from_eos, CliError};
 use crate::exit::Exit;
@@ -95,49 +96,14 @@ pub fn check_triple_points(feed: &Feed, t: f64, what: &str) -> Result<(), CliErr
     Ok(())
 }
 
-/// How far outside its fitted range (as a fraction of the range end) a heat-capacity
-/// polynomial is extrapolated before the result carries a warning rather than a note (the
-/// rule of `zfactor state`).
-const CP_EXTRAPOLATION_NOTE: f64 = 0.1;
-
-/// Notes and warnings for ideal-gas heat capacities used outside their fitted range at T:
-/// (notes, warnings). Only enthalpy and entropy (and so the (P, h), (P, s) flashes) depend
-/// on them.
-fn cp_extrapolation(feed: &Feed, t: f64) -> (Vec<String>, Vec<String>) {
-    let (mut notes, mut warnings) = (Vec::new(), Vec::new());
-    for r in &feed.records {
-        let (lo, hi) = r.cp_range_k;
-        if t < lo || t > hi {
-            let text = format!(
-                "the ideal-gas heat capacity of {} is fitted from {lo} K to {hi} K and is \
-                 extrapolated to {t:.2} K: enthalpy and entropy are less certain (the phase \
-                 split at given T and P is not affected)",
-                r.name
-            );
-            let near =
-                t >= lo * (1.0 - CP_EXTRAPOLATION_NOTE) && t <= hi * (1.0 + CP_EXTRAPOLATION_NOTE);
-            if near {
-                notes.push(text);
-            } else {
-                warnings.push(text);
-            }
-        }
-    }
-    (notes, warnings)
-}
-
 /// Reads the specification from the arguments.
 fn spec(args: &FlashArgs, feed: &Feed, ambient: f64) -> Result<Spec, CliError> {
-    let t = args
-        .temperature
-        .as_deref()
-        .map(units::temperature)
-        .transpose()?;
-    let p = args
-        .pressure
-        .as_deref()
-        .map(|text| units::pressure_reading(text, ambient).map(|r| r.0))
-        .transpose()?;
+    let (t, p) = units::optional_tp(
+        args.temperature.as_deref(),
+        args.pressure.as_deref(),
+        ambient,
+    )?;
+    let p = p.map(|(pa, _gauge)| pa);
     let mm = feed.molar_mass();
     let h = args
         .enthalpy
@@ -232,7 +198,11 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
     // note on the printed h and s, not a warning about the answer.
     let energy_spec = matches!(spec, Spec::Ph(..) | Spec::Ps(..));
     for r in &mut results {
-        let (mut notes, mut more) = cp_extrapolation(&feed, r.temperature_k);
+        let (mut notes, mut more) = cp_range::extrapolation(
+            &feed,
+            r.temperature_k,
+            "enthalpy and entropy are less certain (the phase split at given T and P is not affected)",
+        );
         if !energy_spec {
             notes.append(&mut more);
         }

@@ -14,7 +14,7 @@ use eos::Model;
 /// Computes the report.
 pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
     let feed = feed_input::read(&args.fluid)?;
-    let amb = jc::ambient(&args.ambient)?;
+    let amb = jc::ambient(&args.shared.ambient)?;
     let base = args.base.as_deref().map(|b| jc::base(b, amb)).transpose()?;
     let flow = jc::flow(&args.flow, "--flow", base)?;
     let actual = match (&args.temperature, &args.pressure) {
@@ -29,8 +29,9 @@ pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
         )));
     }
     let x = feed.mole.clone();
-    let (results, mut warnings) =
-        per_model(&args.model, &feed, |pair| one(pair, flow, actual, &x))?;
+    let (results, mut warnings) = per_model(&args.shared.model, &feed, |pair| {
+        one(pair, flow, actual, &x)
+    })?;
     for r in &results {
         for v in r.volumes.iter().filter(|v| v.phase == "two-phase") {
             warnings.push(format!(

@@ -5,6 +5,7 @@ pub mod audit_io;
 pub mod audit_row;
 pub mod compare;
 pub mod compress;
+pub mod cp_range;
 pub mod demo;
 pub mod each_model;
 pub mod envelope;
@@ -21,16 +22,17 @@ pub mod state;
 pub mod table;
 pub mod vessel;
 
-use crate::cli::{Cli, Command};
+use crate::cli::{Cli, Command, Format};
 use crate::error::CliError;
 use crate::exit::Exit;
+use crate::render::jobs::JobReport;
 
 /// Runs the parsed command and prints its report.
 pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
     match &cli.command {
         Command::State(args) => {
             let report = state::run(args)?;
-            crate::render::state(&report, args.format)?;
+            crate::render::state(&report, args.shared.format)?;
             Ok(exit_for(&report.warnings))
         }
         Command::Fluids(args) => {
@@ -57,34 +59,20 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
             crate::render::audit(&report, args.format)?;
             Ok(exit_for(&report.warnings))
         }
-        Command::Compress(args) => {
-            let report = compress::run(args)?;
-            crate::render::compress(&report, args.format)?;
-            Ok(exit_for(&report.warnings))
-        }
-        Command::Flow(args) => {
-            let report = flow::run(args)?;
-            crate::render::flow(&report, args.format)?;
-            Ok(exit_for(&report.warnings))
-        }
-        Command::Process(args) => {
-            let report = process::run(args)?;
-            crate::render::process(&report, args.format)?;
-            Ok(exit_for(&report.warnings))
-        }
-        Command::Relief(args) => {
-            let report = relief::run(args)?;
-            crate::render::relief(&report, args.format)?;
-            Ok(exit_for(&report.warnings))
-        }
-        Command::Vessel(args) => {
-            let report = vessel::run(args)?;
-            crate::render::vessel(&report, args.format)?;
-            Ok(exit_for(&report.warnings))
-        }
+        Command::Compress(args) => job(&compress::run(args)?, args.shared.format),
+        Command::Flow(args) => job(&flow::run(args)?, args.shared.format),
+        Command::Process(args) => job(&process::run(args)?, args.shared.format),
+        Command::Relief(args) => job(&relief::run(args)?, args.shared.format),
+        Command::Vessel(args) => job(&vessel::run(args)?, args.shared.format),
         Command::Flash(args) => flash::dispatch(args),
         Command::Envelope(args) => envelope::dispatch(args),
     }
+}
+
+/// Renders a job's report; success, or success with warnings.
+fn job<R: JobReport>(report: &R, format: Format) -> Result<Exit, CliError> {
+    crate::render::jobs::render(report, format)?;
+    Ok(exit_for(report.warnings()))
 }
 
 /// Success, or success with warnings.

@@ -13,7 +13,7 @@ use eos::Model;
 /// Computes the report.
 pub fn run(args: &ProcessArgs) -> Result<ProcessReport, CliError> {
     let feed = feed_input::read(&args.fluid)?;
-    let amb = jc::ambient(&args.ambient)?;
+    let amb = jc::ambient(&args.shared.ambient)?;
     let t1 = jc::temperature(&args.temperature)?;
     let p1 = jc::pressure(&args.pressure, amb)?;
     let path = match args.path {
@@ -53,7 +53,7 @@ pub fn run(args: &ProcessArgs) -> Result<ProcessReport, CliError> {
         )));
     }
     let x = feed.mole.clone();
-    let (results, mut warnings) = per_model(&args.model, &feed, |pair| {
+    let (results, mut warnings) = per_model(&args.shared.model, &feed, |pair| {
         let mut r = one(pair, t1, p1, path, end, &x)?;
         let edge = jc::edge_notes(pair, &feed, &[("start", &r.start), ("end", &r.end)]);
         r.notes.extend(edge);

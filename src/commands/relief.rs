@@ -12,11 +12,11 @@ use eos::jobs::relief::{self, Z_RANGE};
 /// Computes the report.
 pub fn run(args: &ReliefArgs) -> Result<ReliefReport, CliError> {
     let feed = feed_input::read(&args.fluid)?;
-    let amb = jc::ambient(&args.ambient)?;
+    let amb = jc::ambient(&args.shared.ambient)?;
     let t = jc::temperature(&args.temperature)?;
     let p = jc::pressure(&args.pressure, amb)?;
     let x = feed.mole.clone();
-    let (results, mut warnings) = per_model(&args.model, &feed, |pair| {
+    let (results, mut warnings) = per_model(&args.shared.model, &feed, |pair| {
         let mut r = one(pair, t, p, &x)?;
         let edge = jc::edge_notes(pair, &feed, &[("relieving state", &r.state)]);
         r.notes.extend(edge);

@@ -113,16 +113,11 @@ pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
         )));
     }
     let ambient = units::ambient_pressure(&args.ambient)?;
-    let t = args
-        .temperature
-        .as_deref()
-        .map(units::temperature)
-        .transpose()?;
-    let p = args
-        .pressure
-        .as_deref()
-        .map(|text| units::pressure_reading(text, ambient))
-        .transpose()?;
+    let (t, p) = units::optional_tp(
+        args.temperature.as_deref(),
+        args.pressure.as_deref(),
+        ambient,
+    )?;
     if t.is_some() == p.is_some() {
         return Err(CliError::BadInput(
             "give exactly one of --temperature (for the saturation pressure) and --pressure \

@@ -1,6 +1,7 @@
 //! `zfactor state`: one state of a fluid or mixture, for each requested model.
 
 use crate::cli::{RootArg, StateArgs};
+use crate::commands::cp_range;
 use crate::commands::each_model::{self, Answers};
 use crate::error::{from_eos, from_pure, CliError};
 use crate::feed::{self, Feed};
@@ -51,17 +52,12 @@ impl Given {
 /// Computes the state with every requested model.
 pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
     let feed = feed_input::read(&args.fluid)?;
-    let ambient = units::ambient_pressure(&args.ambient)?;
-    let t = args
-        .temperature
-        .as_deref()
-        .map(units::temperature)
-        .transpose()?;
-    let p = args
-        .pressure
-        .as_deref()
-        .map(|text| units::pressure_reading(text, ambient))
-        .transpose()?;
+    let ambient = units::ambient_pressure(&args.shared.ambient)?;
+    let (t, p) = units::optional_tp(
+        args.temperature.as_deref(),
+        args.pressure.as_deref(),
+        ambient,
+    )?;
     let rho = args
         .density
         .as_deref()
@@ -112,7 +108,7 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
                 .to_string(),
         ));
     }
-    let ids = models::resolve_ids(&args.model, &feed)?;
+    let ids = models::resolve_ids(&args.shared.model, &feed)?;
     let root = match args.root {
         RootArg::Stable => RootChoice::LowestGibbs,
         RootArg::Liquid => RootChoice::Liquid,
@@ -554,34 +550,14 @@ fn check_finite(r: &ModelResult) -> Result<(), CliError> {
     }
 }
 
-/// How far outside its fitted range (as a fraction of the range end) a heat-capacity
-/// polynomial is extrapolated before the result carries a warning rather than a note; a
-/// polynomial in T stays close to its end values just beyond its range (common practice).
-const CP_EXTRAPOLATION_NOTE: f64 = 0.1;
-
 /// Notes and warnings for heat capacities used outside their fitted range: (notes, warnings).
 fn extrapolation_warnings(feed: &Feed, results: &[ModelResult]) -> (Vec<String>, Vec<String>) {
-    let (mut notes, mut warnings) = (Vec::new(), Vec::new());
-    let Some(t) = results.first().map(|r| r.temperature_k) else {
-        return (notes, warnings);
-    };
-    for r in &feed.records {
-        let (lo, hi) = r.cp_range_k;
-        if t < lo || t > hi {
-            let text = format!(
-                "the ideal-gas heat capacity of {} is fitted from {lo} K to {hi} K and is \
-                 extrapolated to {t:.2} K: h, s, cp, cv and w are less certain (Z and density \
-                 are not affected)",
-                r.name
-            );
-            let near =
-                t >= lo * (1.0 - CP_EXTRAPOLATION_NOTE) && t <= hi * (1.0 + CP_EXTRAPOLATION_NOTE);
-            if near {
-                notes.push(text);
-            } else {
-                warnings.push(text);
-            }
-        }
+    match results.first() {
+        Some(r) => cp_range::extrapolation(
+            feed,
+            r.temperature_k,
+            "h, s, cp, cv and w are less certain (Z and density are not affected)",
+        ),
+        None => (Vec::new(), Vec::new()),
     }
-    (notes, warnings)
 }

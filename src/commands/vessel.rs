@@ -36,7 +36,7 @@ struct Input {
 /// Computes the report.
 pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
     let feed = feed_input::read(&args.fluid)?;
-    let amb = jc::ambient(&args.ambient)?;
+    let amb = jc::ambient(&args.shared.ambient)?;
     let t = jc::temperature(&args.temperature)?;
     let opt_t = |s: &Option<String>| s.as_deref().map(jc::temperature).transpose();
     let opt_p = |s: &Option<String>| s.as_deref().map(|x| jc::pressure(x, amb)).transpose();
@@ -80,7 +80,7 @@ pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
         )));
     }
     let x = feed.mole.clone();
-    let (results, mut warnings) = per_model(&args.model, &feed, |pair| {
+    let (results, mut warnings) = per_model(&args.shared.model, &feed, |pair| {
         let mut r = one(pair, &input, &x)?;
         let edge = jc::edge_notes(pair, &feed, &[("contents", &r.state)]);
         r.notes.extend(edge);

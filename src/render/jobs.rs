@@ -78,17 +78,24 @@ impl Grid {
     }
 }
 
-/// Renders a job report: `table` builds the terminal text.
-pub fn render<T: Serialize>(
-    report: &T,
-    format: Format,
-    table: impl FnOnce() -> String,
-    warnings: &[String],
-    caution: &str,
-) -> Result<(), CliError> {
+/// A job's report as the renderer sees it: its terminal table, its warnings and the caution
+/// printed with it.
+pub trait JobReport: Serialize {
+    /// The side-by-side terminal table.
+    fn table(&self) -> String;
+    /// The warnings of the run.
+    fn warnings(&self) -> &[String];
+    /// The caution for the equipment the job is about.
+    fn caution(&self) -> &str;
+}
+
+/// Renders a job's report: the table with the caution under it, or JSON or CSV on stdout
+/// with the warnings and the caution on stderr.
+pub fn render<T: JobReport>(report: &T, format: Format) -> Result<(), CliError> {
+    let caution = report.caution();
     let text = match format {
         Format::Table => {
-            let mut t = table();
+            let mut t = report.table();
             t.push_str(&format!(
                 "caution: {caution} Defer to local codes and licensed review.\n"
             ));
@@ -99,8 +106,8 @@ pub fn render<T: Serialize>(
     };
     emit(&text)?;
     match format {
-        Format::Table => side_notes(warnings, None),
-        _ => side_notes(warnings, Some(caution)),
+        Format::Table => side_notes(report.warnings(), None),
+        _ => side_notes(report.warnings(), Some(caution)),
     }
     Ok(())
 }

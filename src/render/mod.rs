@@ -11,6 +11,7 @@ pub mod envelope_chart;
 pub mod flash;
 pub mod flow;
 pub mod grid_table;
+pub mod job_tables;
 pub mod jobs;
 pub mod json;
 pub mod kij;
@@ -88,73 +89,6 @@ pub fn fluids(report: &FluidsReport, format: Format) -> Result<(), CliError> {
         }
     };
     emit(&text)
-}
-
-/// Renders a vessel report.
-pub fn vessel(
-    report: &crate::report::vessel::VesselReport,
-    format: Format,
-) -> Result<(), CliError> {
-    jobs::render(
-        report,
-        format,
-        || vessel::table(report),
-        &report.warnings,
-        report.caution,
-    )
-}
-
-/// Renders a compressor report.
-pub fn compress(
-    report: &crate::report::compress::CompressReport,
-    format: Format,
-) -> Result<(), CliError> {
-    jobs::render(
-        report,
-        format,
-        || compress::table(report),
-        &report.warnings,
-        report.caution,
-    )
-}
-
-/// Renders a flow report.
-pub fn flow(report: &crate::report::flow::FlowReport, format: Format) -> Result<(), CliError> {
-    jobs::render(
-        report,
-        format,
-        || flow::table(report),
-        &report.warnings,
-        report.caution,
-    )
-}
-
-/// Renders a process report.
-pub fn process(
-    report: &crate::report::process::ProcessReport,
-    format: Format,
-) -> Result<(), CliError> {
-    jobs::render(
-        report,
-        format,
-        || process::table(report),
-        &report.warnings,
-        report.caution,
-    )
-}
-
-/// Renders a relief report.
-pub fn relief(
-    report: &crate::report::relief::ReliefReport,
-    format: Format,
-) -> Result<(), CliError> {
-    jobs::render(
-        report,
-        format,
-        || process::relief(report),
-        &report.warnings,
-        report.caution,
-    )
 }
 
 /// Renders an audit summary.

@@ -5,11 +5,12 @@ use super::roots::solve_cubic;
 use super::spec::{CriticalConstants, CubicSpec};
 use super::CubicKind;
 use crate::component::Component;
+use crate::component_check::{self, FINITE_OMEGA};
 use crate::constants::R;
-use crate::equilibrium::phase_eval::{select_root, PhaseAt, RootSel};
-use crate::error::{Error, Result};
+use crate::error::Result;
 use crate::model::{DensityRoots, Model};
 use crate::residual::Residual;
+use crate::root_choice::{select_root, PhaseAt, RootSel};
 
 /// Most components a model accepts; per-state work uses stack arrays of this size.
 pub const MAX_COMPONENTS: usize = 64;
@@ -50,30 +51,11 @@ impl Cubic {
     /// interaction parameters, row-major (zero when `None`); it must be symmetric with a zero
     /// diagonal.
     pub fn new(kind: CubicKind, comps: &[Component], kij: Option<&[f64]>) -> Result<Self> {
-        let n = comps.len();
-        if n == 0 || n > MAX_COMPONENTS {
-            return Err(Error::invalid(
-                "number of components",
-                n as f64,
-                format!("1 to {MAX_COMPONENTS}"),
-            ));
-        }
+        component_check::check(comps, MAX_COMPONENTS, &FINITE_OMEGA)?;
         for c in comps {
-            for (what, v) in [
-                ("critical temperature", c.tc),
-                ("critical pressure", c.pc),
-                ("molar mass", c.molar_mass),
-            ] {
-                crate::error::positive(what, v)?;
-            }
-            if !c.omega.is_finite() {
-                return Err(Error::invalid(
-                    "acentric factor",
-                    c.omega,
-                    "a finite number",
-                ));
-            }
+            crate::error::positive("molar mass", c.molar_mass)?;
         }
+        let n = comps.len();
         let one_minus_k = match kij {
             None => vec![1.0; n * n],
             Some(k) => {

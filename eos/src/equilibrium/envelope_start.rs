@@ -19,10 +19,7 @@ pub(crate) fn point(
 ) -> Result<SaturationPoint> {
     match direct(model, z, side, given)? {
         Direct::Found(r) => Ok(r),
-        Direct::NotFound(u) => match from_envelope(model, &u) {
-            Some(r) => Ok(r),
-            None => Err(u.error()),
-        },
+        Direct::NotFound(u) => from_envelope(model, &u).ok_or_else(|| u.error()),
     }
 }
 

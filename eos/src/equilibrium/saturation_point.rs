@@ -195,10 +195,10 @@ pub(crate) fn point_direct(
     side: Side,
     given: Given,
 ) -> Result<SaturationPoint> {
-    match direct(model, z, side, given)? {
+    direct(model, z, side, given).and_then(|d| match d {
         Direct::Found(r) => Ok(r),
         Direct::NotFound(u) => Err(u.error()),
-    }
+    })
 }
 
 /// What the direct starts gave.

@@ -18,6 +18,7 @@ use super::constants::{OMEGA_R, REFERENCE, SIMPLE};
 use super::fluid::{Branch, FluidPoint};
 use super::mixing::{zc, PairTerms, PseudoCritical};
 use crate::component::Component;
+use crate::component_check::{self, OmegaRule};
 use crate::composition;
 use crate::constants::R;
 use crate::error::{positive, Error, Result};
@@ -70,25 +71,15 @@ impl LeeKesler {
     /// The model for `comps`; `kstar` is the n x n matrix of the mixing-rule parameter k*_jk
     /// (row-major, symmetric, ones on the diagonal; all ones when `None`).
     pub fn new(comps: &[Component], kstar: Option<&[f64]>) -> Result<Self> {
+        component_check::check(
+            comps,
+            MAX_COMPONENTS,
+            &OmegaRule {
+                ok: |omega| omega.is_finite() && zc(omega) > 0.0,
+                accepted: "a finite number below 3.4 (Zc = 0.2905 - 0.085 omega > 0)",
+            },
+        )?;
         let n = comps.len();
-        if n == 0 || n > MAX_COMPONENTS {
-            return Err(Error::invalid(
-                "number of components",
-                n as f64,
-                format!("1 to {MAX_COMPONENTS}"),
-            ));
-        }
-        for c in comps {
-            positive("critical temperature", c.tc)?;
-            positive("critical pressure", c.pc)?;
-            if !c.omega.is_finite() || zc(c.omega) <= 0.0 {
-                return Err(Error::invalid(
-                    "acentric factor",
-                    c.omega,
-                    "a finite number below 3.4 (Zc = 0.2905 - 0.085 omega > 0)",
-                ));
-            }
-        }
         let kstar = match kstar {
             None => vec![1.0; n * n],
             Some(k) => {

@@ -26,6 +26,7 @@
 
 use super::correlation::Correlation;
 use crate::component::Component;
+use crate::component_check::{self, FINITE_OMEGA};
 use crate::composition;
 use crate::constants::R;
 use crate::error::{positive, Error, Result};
@@ -68,28 +69,13 @@ impl Virial {
     /// The model for `comps` with the given correlation and k_ij (n x n row-major, symmetric,
     /// zero diagonal; zero when `None`).
     pub fn new(comps: &[Component], correlation: Correlation, kij: Option<&[f64]>) -> Result<Self> {
-        let n = comps.len();
-        if n == 0 || n > MAX_COMPONENTS {
-            return Err(Error::invalid(
-                "number of components",
-                n as f64,
-                format!("1 to {MAX_COMPONENTS}"),
-            ));
-        }
+        component_check::check(comps, MAX_COMPONENTS, &FINITE_OMEGA)?;
         for c in comps {
-            positive("critical temperature", c.tc)?;
-            positive("critical pressure", c.pc)?;
-            if !c.omega.is_finite() {
-                return Err(Error::invalid(
-                    "acentric factor",
-                    c.omega,
-                    "a finite number",
-                ));
-            }
             if let Some(v) = c.vc {
                 positive("critical volume", v)?;
             }
         }
+        let n = comps.len();
         if let Some(k) = kij {
             crate::pair_matrix::check(
                 k,
