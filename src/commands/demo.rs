@@ -45,6 +45,6 @@ pub fn run(args: &DemoArgs) -> Result<Exit, CliError> {
         )?;
     }
     let report = super::state::run(&state)?;
-    crate::render::state(&report, args.format)?;
+    crate::render::output::render(&report, args.format)?;
     Ok(super::exit_for(&report.warnings))
 }

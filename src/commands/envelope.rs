@@ -108,7 +108,7 @@ pub fn dispatch(args: &EnvelopeArgs) -> Result<Exit, CliError> {
         crate::render::envelope_chart::write_pv(&report, &c.path, c.png, args.force)?;
         report.charts.push(c.path.display().to_string());
     }
-    crate::render::envelope::render(&report, args.format)?;
+    crate::render::output::render(&report, args.format)?;
     Ok(crate::commands::exit_for(&report.warnings))
 }
 

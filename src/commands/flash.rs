@@ -58,7 +58,7 @@ impl Spec {
 /// Runs the command and prints its report.
 pub fn dispatch(args: &FlashArgs) -> Result<Exit, CliError> {
     let report = run(args)?;
-    crate::render::flash::render(&report, args.format)?;
+    crate::render::output::render(&report, args.format)?;
     Ok(crate::commands::exit_for(&report.warnings))
 }
 

@@ -25,14 +25,14 @@ pub mod vessel;
 use crate::cli::{Cli, Command, Format};
 use crate::error::CliError;
 use crate::exit::Exit;
-use crate::render::jobs::JobReport;
+use crate::render::output::{render, Output};
 
 /// Runs the parsed command and prints its report.
 pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
     match &cli.command {
         Command::State(args) => {
             let report = state::run(args)?;
-            crate::render::state(&report, args.shared.format)?;
+            render(&report, args.shared.format)?;
             Ok(exit_for(&report.warnings))
         }
         Command::Fluids(args) => {
@@ -56,7 +56,7 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
         Command::Saturation(args) => saturation::run_and_render(args),
         Command::Audit(args) => {
             let report = audit::run(args)?;
-            crate::render::audit(&report, args.format)?;
+            render(&report, args.format)?;
             Ok(exit_for(&report.warnings))
         }
         Command::Compress(args) => job(&compress::run(args)?, args.shared.format),
@@ -70,8 +70,8 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
 }
 
 /// Renders a job's report; success, or success with warnings.
-fn job<R: JobReport>(report: &R, format: Format) -> Result<Exit, CliError> {
-    crate::render::jobs::render(report, format)?;
+fn job<R: Output>(report: &R, format: Format) -> Result<Exit, CliError> {
+    render(report, format)?;
     Ok(exit_for(report.warnings()))
 }
 

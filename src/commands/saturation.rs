@@ -3,7 +3,6 @@
 //! Helmholtz formulation), through `eos::pure`.
 
 use crate::cli::saturation_args::SaturationArgs;
-use crate::cli::Format;
 use crate::commands::each_model::{self, Answers};
 use crate::error::{from_pure, CliError};
 use crate::feed::Feed;
@@ -233,15 +232,6 @@ fn unreachable_pair() -> Result<SatState, PureError> {
 /// Computes and prints.
 pub fn run_and_render(args: &SaturationArgs) -> Result<crate::exit::Exit, CliError> {
     let report = run(args)?;
-    let text = match args.format {
-        Format::Table => crate::render::saturation_table::render(&report),
-        Format::Csv => crate::render::saturation_csv::render(&report)?,
-        Format::Json => crate::render::json::to_string(&report)?,
-    };
-    crate::render::emit(&text)?;
-    match args.format {
-        Format::Table => crate::render::side_notes(&report.warnings, None),
-        _ => crate::render::side_notes(&report.warnings, Some(report.caution)),
-    }
+    crate::render::output::render(&report, args.format)?;
     Ok(super::exit_for(&report.warnings))
 }

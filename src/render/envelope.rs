@@ -1,6 +1,5 @@
 //! The envelope report as a terminal table, CSV (one row per point, SI units) or JSON.
 
-use crate::cli::Format;
 use crate::error::CliError;
 use crate::render::number::sig;
 use crate::report::envelope::{EnvelopeReport, TpPoint};
@@ -11,21 +10,6 @@ const STYLE: TableStyle = TableStyle::new()
     .top_border(LineStyle::none().fill('-').junction('-'))
     .header_separator(LineStyle::none().fill('-').junction('-'))
     .bottom_border(LineStyle::none().fill('-').junction('-'));
-
-/// Prints the report in `format`; warnings (and, for CSV and JSON, the caution) on stderr.
-pub fn render(r: &EnvelopeReport, format: Format) -> Result<(), CliError> {
-    let text = match format {
-        Format::Table => text(r),
-        Format::Csv => csv(r)?,
-        Format::Json => crate::render::json::to_string(r)?,
-    };
-    crate::render::emit(&text)?;
-    match format {
-        Format::Table => crate::render::side_notes(&r.warnings, None),
-        _ => crate::render::side_notes(&r.warnings, Some(r.caution)),
-    }
-    Ok(())
-}
 
 fn point(name: &str, p: Option<TpPoint>) -> Option<String> {
     p.map(|p| {

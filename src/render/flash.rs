@@ -1,7 +1,6 @@
 //! The flash report as a terminal table, CSV (one row per model and phase, SI units) or
 //! JSON (the report struct as it is).
 
-use crate::cli::Format;
 use crate::error::CliError;
 use crate::render::number::{opt, sig};
 use crate::report::flash::{FlashReport, FlashResultReport};
@@ -27,21 +26,6 @@ fn right(t: &mut Table, from: usize) {
             col.set_cell_alignment(CellAlignment::Right);
         }
     }
-}
-
-/// Prints the report in `format`; warnings (and, for CSV and JSON, the caution) on stderr.
-pub fn render(r: &FlashReport, format: Format) -> Result<(), CliError> {
-    let text = match format {
-        Format::Table => text(r),
-        Format::Csv => csv(r)?,
-        Format::Json => crate::render::json::to_string(r)?,
-    };
-    crate::render::emit(&text)?;
-    match format {
-        Format::Table => crate::render::side_notes(&r.warnings, None),
-        _ => crate::render::side_notes(&r.warnings, Some(r.caution)),
-    }
-    Ok(())
 }
 
 fn mode_line(r: &FlashReport) -> String {

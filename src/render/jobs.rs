@@ -2,10 +2,8 @@
 //! model, each value with the ideal-gas answer and its error under it), JSON as the report
 //! struct is, and CSV with one row per model (nested fields flattened to dotted names).
 
-use crate::cli::Format;
 use crate::error::CliError;
 use crate::render::number::{opt, sig};
-use crate::render::{emit, json, side_notes};
 use crate::report::jobs_common::Compared;
 use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
 use serde::Serialize;
@@ -78,40 +76,6 @@ impl Grid {
     }
 }
 
-/// A job's report as the renderer sees it: its terminal table, its warnings and the caution
-/// printed with it.
-pub trait JobReport: Serialize {
-    /// The side-by-side terminal table.
-    fn table(&self) -> String;
-    /// The warnings of the run.
-    fn warnings(&self) -> &[String];
-    /// The caution for the equipment the job is about.
-    fn caution(&self) -> &str;
-}
-
-/// Renders a job's report: the table with the caution under it, or JSON or CSV on stdout
-/// with the warnings and the caution on stderr.
-pub fn render<T: JobReport>(report: &T, format: Format) -> Result<(), CliError> {
-    let caution = report.caution();
-    let text = match format {
-        Format::Table => {
-            let mut t = report.table();
-            t.push_str(&format!(
-                "caution: {caution} Defer to local codes and licensed review.\n"
-            ));
-            t
-        }
-        Format::Json => json::to_string(report)?,
-        Format::Csv => csv_rows(report)?,
-    };
-    emit(&text)?;
-    match format {
-        Format::Table => side_notes(report.warnings(), None),
-        _ => side_notes(report.warnings(), Some(caution)),
-    }
-    Ok(())
-}
-
 fn flatten(prefix: &str, v: &Value, out: &mut Vec<(String, String)>) {
     match v {
         Value::Object(m) => {
@@ -143,7 +107,7 @@ fn scalar(v: &Value) -> String {
 }
 
 /// One CSV row per element of the report's `results`, SI units.
-fn csv_rows<T: Serialize>(report: &T) -> Result<String, CliError> {
+pub fn csv_rows<T: Serialize>(report: &T) -> Result<String, CliError> {
     let v = serde_json::to_value(report).map_err(|e| CliError::Output(e.to_string()))?;
     let rows = v
         .get("results")

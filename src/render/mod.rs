@@ -11,12 +11,13 @@ pub mod envelope_chart;
 pub mod flash;
 pub mod flow;
 pub mod grid_table;
-pub mod job_tables;
 pub mod jobs;
 pub mod json;
 pub mod kij;
 pub mod notes;
 pub mod number;
+pub mod output;
+pub mod outputs;
 pub mod process;
 pub mod saturation_csv;
 pub mod saturation_table;
@@ -26,7 +27,6 @@ pub mod vessel;
 use crate::cli::Format;
 use crate::error::CliError;
 use crate::report::fluids::FluidsReport;
-use crate::report::state::StateReport;
 use std::io::Write;
 
 /// Writes `text` to stdout in one piece.
@@ -45,21 +45,6 @@ pub fn side_notes(warnings: &[String], caution: Option<&str>) {
     if let Some(c) = caution {
         eprintln!("caution: {c}");
     }
-}
-
-/// Renders a state report.
-pub fn state(report: &StateReport, format: Format) -> Result<(), CliError> {
-    let text = match format {
-        Format::Table => table::state(report),
-        Format::Csv => csv::state(report)?,
-        Format::Json => json::to_string(report)?,
-    };
-    emit(&text)?;
-    match format {
-        Format::Table => side_notes(&report.warnings, None),
-        _ => side_notes(&report.warnings, Some(report.caution)),
-    }
-    Ok(())
 }
 
 /// Renders the model catalogue.
@@ -89,27 +74,4 @@ pub fn fluids(report: &FluidsReport, format: Format) -> Result<(), CliError> {
         }
     };
     emit(&text)
-}
-
-/// Renders an audit summary.
-pub fn audit(report: &crate::report::audit::AuditReport, format: Format) -> Result<(), CliError> {
-    let text = match format {
-        Format::Table => format!(
-            "{}caution: {} Defer to local codes and licensed review.\n",
-            audit::table(report),
-            report.caution
-        ),
-        Format::Json => json::to_string(report)?,
-        Format::Csv => {
-            return Err(CliError::BadInput(
-                "the audit summary is a table or JSON; the annotated copy is the CSV".to_string(),
-            ))
-        }
-    };
-    emit(&text)?;
-    match format {
-        Format::Table => side_notes(&report.warnings, None),
-        _ => side_notes(&report.warnings, Some(report.caution)),
-    }
-    Ok(())
 }
