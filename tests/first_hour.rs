@@ -144,3 +144,19 @@ fn a_note_shared_by_several_models_is_printed_once() {
     assert_eq!(out.matches("k_ij (pr family)").count(), 1, "{out}");
     assert!(out.contains("pr, pr78"), "{out}");
 }
+
+#[test]
+fn saturation_of_a_mixture_points_to_the_bubble_and_dew_points_of_flash() {
+    let (code, out, err) = run(&[
+        "saturation",
+        "--mix",
+        "methane=0.5,ethane=0.5",
+        "-t",
+        "200 K",
+    ]);
+    assert_eq!(code, 2, "{err}");
+    assert!(out.is_empty());
+    for option in ["zfactor flash", "--bubble-pressure", "--dew-temperature"] {
+        assert!(err.contains(option), "{option} not in: {err}");
+    }
+}

@@ -122,6 +122,44 @@ fn relief_warns_outside_the_z_range_and_not_inside_it() {
 }
 
 #[test]
+fn relief_gives_the_critical_pressure_ratio_and_the_api_520_coefficient() {
+    // Argon is monatomic: k = 5/3 exactly for the ideal gas, whose critical pressure ratio is
+    // (3/4)^2.5 = 0.48714 and flow function sqrt(5/3 (3/4)^4) = 0.72618 (computed by hand);
+    // API 520 Part I tabulates C = 378 (US units) near k = 1.66 (recalled from memory).
+    let (v, _, err) = run_json(&[
+        "relief", "--fluid", "argon", "-t", "300 K", "-p", "1 bar", "-m", "ideal,pr",
+    ]);
+    let ideal = &v["results"][0];
+    assert_eq!(ideal["model"], "ideal", "{err}");
+    let ratio = ideal["critical_pressure_ratio"]["value"].as_f64().unwrap();
+    assert!((ratio - 0.75f64.powf(2.5)).abs() < 1e-9, "{ratio}");
+    let c = ideal["sizing_coefficient_c"]["value"].as_f64().unwrap();
+    assert!(
+        (c - 0.03948 * (5.0 / 3.0 * 0.75f64.powi(4)).sqrt()).abs() < 1e-9,
+        "{c}"
+    );
+    assert!((c * 520.0 / 0.03948 - 378.0).abs() < 1.0, "{c}");
+    // At 1 bar PR's real-gas k, and so both, are within 0.2 % of the ideal gas's.
+    let pr = &v["results"][1];
+    let dev = pr["critical_pressure_ratio"]["ideal_error_pct"]
+        .as_f64()
+        .unwrap();
+    assert!(dev.abs() < 0.2, "{dev}");
+    // The terminal table says what C is for.
+    let out = zf()
+        .args([
+            "relief", "--fluid", "argon", "-t", "300 K", "-p", "1 bar", "-m", "pr",
+        ])
+        .output()
+        .unwrap();
+    let text = String::from_utf8_lossy(&out.stdout);
+    assert!(
+        text.contains("C (API 520, SI)") && text.contains("kPa abs"),
+        "{text}"
+    );
+}
+
+#[test]
 fn bad_process_and_relief_input_is_refused() {
     zf().args([
         "process",

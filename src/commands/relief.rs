@@ -1,5 +1,6 @@
-//! `zfactor relief`: Z, the real-gas isentropic exponent and the molar mass at relieving
-//! conditions, per model, with a warning where Z is outside 0.8 to 1.1.
+//! `zfactor relief`: Z, the real-gas isentropic exponent, the critical pressure ratio, the
+//! API 520 gas coefficient C and the molar mass at relieving conditions, per model, with a
+//! warning where Z is outside 0.8 to 1.1.
 
 use crate::cli::relief_args::ReliefArgs;
 use crate::commands::jobs_common::{self as jc, ctx, per_model, Pair};
@@ -56,6 +57,14 @@ fn one(pair: &Pair, t: f64, p: f64, x: &[f64]) -> Result<ReliefResult, CliError>
         model_name: pair.built.name.clone(),
         z: Compared::new(r.z, ri.z),
         isentropic_exponent: Compared::new(r.k_real, ri.k_ideal),
+        critical_pressure_ratio: Compared::new(
+            relief::critical_pressure_ratio(r.k_real).map_err(&e)?,
+            relief::critical_pressure_ratio(ri.k_ideal).map_err(&e)?,
+        ),
+        sizing_coefficient_c: Compared::new(
+            relief::sizing_coefficient(r.k_real).map_err(&e)?,
+            relief::sizing_coefficient(ri.k_ideal).map_err(&e)?,
+        ),
         molar_mass_kg_mol: r.molar_mass,
         z_outside_range: r.z_outside_range,
         state: StateReport::from(&r.state),

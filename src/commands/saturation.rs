@@ -107,7 +107,10 @@ pub fn run(args: &SaturationArgs) -> Result<SaturationReport, CliError> {
     let feed = feed_input::read(&args.fluid)?;
     if !feed.is_pure() {
         return Err(CliError::BadInput(format!(
-            "saturation is for a pure fluid, but {} was given; use --fluid NAME",
+            "saturation is for a pure fluid, but {} was given; use --fluid NAME, or for a \
+             mixture's bubble and dew points `zfactor flash --mix ... --bubble-pressure` or \
+             --dew-pressure at a temperature, --bubble-temperature or --dew-temperature at a \
+             pressure (and `zfactor envelope` for the whole curve)",
             feed.label()
         )));
     }

@@ -106,6 +106,22 @@ pub fn relief(r: &ReliefReport) -> String {
             .collect::<Vec<_>>(),
         1.0,
     );
+    g.compared(
+        "critical pressure ratio",
+        "-",
+        &res.iter()
+            .map(|m| Some(m.critical_pressure_ratio))
+            .collect::<Vec<_>>(),
+        1.0,
+    );
+    g.compared(
+        "C (API 520, SI)",
+        "-",
+        &res.iter()
+            .map(|m| Some(m.sizing_coefficient_c))
+            .collect::<Vec<_>>(),
+        1.0,
+    );
     g.nums(
         "molar mass",
         "g/mol",
@@ -129,7 +145,12 @@ pub fn relief(r: &ReliefReport) -> String {
     );
     out.push_str(&g.finish());
     out.push_str(
-        "k: the model's real-gas -(v/P)(dP/dv)_s; its ideal-gas row is cp0/cv0 at the same T.\n",
+        "k: the model's real-gas -(v/P)(dP/dv)_s; its ideal-gas row is cp0/cv0 at the same T.\n\
+         critical pressure ratio (2/(k+1))^(k/(k-1)) and C = 0.03948 sqrt(k (2/(k+1))^((k+1)/(k-1)))\n\
+         from each k; C is for A = W / (C Kd P1 Kb Kc) sqrt(T Z / M), A mm2, W kg/h, P1 kPa abs,\n\
+         T K, M kg/kmol (API 520 Part I; 520 x the root in US units).\n\
+         Z outside the range: the ideal-gas sizing equations, with Z as a correction, lose\n\
+         accuracy there (common practice); size with a real-gas method.\n",
     );
     out
 }

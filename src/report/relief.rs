@@ -33,6 +33,11 @@ pub struct ReliefResult {
     pub z: Compared,
     /// Real-gas isentropic exponent -(v/P)(dP/dv)_s, beside the ideal-gas cp0/cv0.
     pub isentropic_exponent: Compared,
+    /// Critical (choked-flow) pressure ratio (2/(k+1))^(k/(k-1)) from each k.
+    pub critical_pressure_ratio: Compared,
+    /// Gas coefficient C of the SI critical-flow sizing equation of API 520 Part I from
+    /// each k (A in mm2, W in kg/h, P1 in kPa abs, T in K, M in kg/kmol).
+    pub sizing_coefficient_c: Compared,
     pub molar_mass_kg_mol: f64,
     pub z_outside_range: bool,
     pub state: StateReport,
