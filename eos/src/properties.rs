@@ -43,6 +43,8 @@ pub struct Properties {
     pub s: f64,
     /// Internal energy, J/mol.
     pub u: f64,
+    /// Gibbs energy h - T s, J/mol.
+    pub g: f64,
     /// Isochoric heat capacity, J/(mol K).
     pub cv: f64,
     /// Isobaric heat capacity, J/(mol K); `None` where the state is mechanically unstable
@@ -71,6 +73,16 @@ impl Properties {
     /// Mass density, kg/m3.
     pub fn mass_density(&self) -> f64 {
         self.rho * self.molar_mass
+    }
+
+    /// The same state on another zero of energy and entropy: h and u moved by `dh` (J/mol),
+    /// s by `ds` (J/(mol K)), and so g by dh - T ds.
+    pub fn shifted(mut self, dh: f64, ds: f64) -> Properties {
+        self.u += dh;
+        self.h += dh;
+        self.s += ds;
+        self.g += dh - self.t * ds;
+        self
     }
 }
 
@@ -120,6 +132,7 @@ pub fn evaluate(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> Properties {
         h,
         s,
         u: h - p / rho,
+        g: h - t * s,
         cv,
         cp,
         w,

@@ -13,7 +13,8 @@ use crate::report::saturation::{
 use crate::units;
 use eos::cubic::{Cubic, CubicKind};
 use eos::helmholtz::{reference_for, technical_for, HelmholtzFluid};
-use eos::pure::{PureError, PureFluid, PureProps, SatState};
+use eos::properties::Properties;
+use eos::pure::{PureError, PureFluid, SatState};
 
 /// Model ids of this command, cubics first.
 pub const IDS: [&str; 7] = ["vdw", "rk", "srk", "pr", "pr78", "reference", "sw12"];
@@ -89,7 +90,7 @@ fn resolve(spec: &str) -> Result<(Vec<String>, bool), CliError> {
     Ok((ids, false))
 }
 
-fn phase(p: &PureProps, m: f64) -> SaturatedPhase {
+fn phase(p: &Properties, m: f64) -> SaturatedPhase {
     SaturatedPhase {
         molar_density_mol_m3: p.rho,
         mass_density_kg_m3: p.rho * m,

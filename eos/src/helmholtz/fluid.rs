@@ -38,13 +38,14 @@
 use super::branch_hint;
 use super::density::{self, solve_branch, Branch};
 use super::formulation::{Formulation, Tier, Validity};
-use super::properties::{self, FluidProperties};
+use super::properties;
 use super::saturation::{self, Saturation};
 use crate::component::Component;
 use crate::constants::{P_REF, R, T_REF};
 use crate::error::{positive, Error, Result};
 use crate::ideal_cp::{IdealGasCp, IdealGasValues};
 use crate::model::{DensityRoots, Model};
+use crate::properties::Properties;
 use crate::residual::Residual;
 
 /// A pure fluid with a Helmholtz formulation.
@@ -143,7 +144,7 @@ impl HelmholtzFluid {
 
     /// Every property at T (K) and molar density rho (mol/m3) in the formulation's own
     /// convention.
-    pub fn properties(&self, t: f64, rho: f64) -> Result<FluidProperties> {
+    pub fn properties(&self, t: f64, rho: f64) -> Result<Properties> {
         positive("temperature (K)", t)?;
         positive("molar density (mol/m3)", rho)?;
         Ok(properties::evaluate(self.form, t, rho))
@@ -211,7 +212,7 @@ impl HelmholtzFluid {
     }
 
     /// All properties at T (K) and p (Pa) for the stable root.
-    pub fn properties_tp(&self, t: f64, p: f64) -> Result<FluidProperties> {
+    pub fn properties_tp(&self, t: f64, p: f64) -> Result<Properties> {
         let rho = self.density(t, p)?;
         self.properties(t, rho)
     }

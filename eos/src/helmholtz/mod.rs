@@ -18,7 +18,7 @@
 //! equations of Span & Wagner (2003) for nitrogen, carbon dioxide, methane and argon.
 //!
 //! [`HelmholtzFluid`] implements [`crate::Model`] (id `reference` or `sw12`) and also gives
-//! direct (T, rho) properties in the formulation's own convention ([`FluidProperties`]),
+//! direct (T, rho) properties in the formulation's own convention ([`crate::properties::Properties`]),
 //! densities from (T, p) ([`density`]) and saturation ([`saturation`]).
 //!
 //! ## Example
@@ -49,7 +49,6 @@ pub mod saturation;
 pub use derivs::Derivs;
 pub use fluid::HelmholtzFluid;
 pub use formulation::{Formulation, Tier, Validity};
-pub use properties::FluidProperties;
 pub use registry::{
     formulation, keys, reference_for, reference_formulation, steam_table_zero, technical_for,
 };

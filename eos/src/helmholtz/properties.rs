@@ -1,6 +1,8 @@
 //! Every property of a single-phase state at (T, rho) straight from a formulation, in the
 //! formulation's own reference convention (for IAPWS-95: u = s = 0 for the saturated liquid at
-//! the triple point).
+//! the triple point), as the [`Properties`] every model fills. The residual (departure)
+//! parts at the same T and P are h_res/(R T) = tau phir_t + delta phir_d, s_res/R =
+//! tau phir_t - phir + ln Z and g_res/(R T) = phir + delta phir_d - ln Z.
 //!
 //! With phi0, phi_r and their derivatives at (tau, delta) (IAPWS R6-95(2018), Table 3;
 //! Span (2000), *Multiparameter Equations of State*, table 3.9):
@@ -22,66 +24,11 @@
 
 use super::derivs::Derivs;
 use super::formulation::Formulation;
-
-/// Properties of one state, molar SI units (J/mol, J/(mol K), Pa, mol/m3).
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub struct FluidProperties {
-    /// Temperature, K.
-    pub t: f64,
-    /// Molar density, mol/m3.
-    pub rho: f64,
-    /// Pressure, Pa.
-    pub p: f64,
-    /// Compressibility factor p/(rho R T) with the formulation's R.
-    pub z: f64,
-    /// Internal energy, J/mol.
-    pub u: f64,
-    /// Enthalpy, J/mol.
-    pub h: f64,
-    /// Entropy, J/(mol K).
-    pub s: f64,
-    /// Gibbs energy, J/mol.
-    pub g: f64,
-    /// Helmholtz energy, J/mol.
-    pub a: f64,
-    /// Isochoric heat capacity, J/(mol K).
-    pub cv: f64,
-    /// Isobaric heat capacity, J/(mol K); `None` where dp/drho <= 0 (mechanically unstable).
-    pub cp: Option<f64>,
-    /// Speed of sound, m/s; `None` where mechanically unstable.
-    pub w: Option<f64>,
-    /// Joule-Thomson coefficient, K/Pa; `None` where mechanically unstable.
-    pub jt: Option<f64>,
-    /// Natural logarithm of the fugacity coefficient.
-    pub ln_phi: f64,
-    /// (dp/drho)_T, Pa m3/mol.
-    pub dp_drho: f64,
-    /// (dp/dT)_rho, Pa/K.
-    pub dp_dt: f64,
-    /// Molar mass, kg/mol.
-    pub molar_mass: f64,
-}
-
-impl FluidProperties {
-    /// Mass density, kg/m3.
-    pub fn mass_density(&self) -> f64 {
-        self.rho * self.molar_mass
-    }
-
-    /// Fugacity coefficient.
-    pub fn phi(&self) -> f64 {
-        self.ln_phi.exp()
-    }
-
-    /// Fugacity, Pa.
-    pub fn fugacity(&self) -> f64 {
-        self.p * self.phi()
-    }
-}
+use crate::properties::Properties;
 
 /// All properties at T (K) and rho (mol/m3) from the two parts' derivatives. The caller has
 /// checked T > 0 and rho > 0.
-pub fn evaluate(f: &Formulation, t: f64, rho: f64) -> FluidProperties {
+pub fn evaluate(f: &Formulation, t: f64, rho: f64) -> Properties {
     let (tau, delta) = f.reduce(t, rho);
     let i = f.ideal(tau, delta);
     let r = f.residual(tau, delta);
@@ -97,7 +44,7 @@ pub fn from_derivs(
     delta: f64,
     i: &Derivs,
     r: &Derivs,
-) -> FluidProperties {
+) -> Properties {
     let rt = f.r * t;
     let dr_d = delta * r.d;
     let z = 1.0 + dr_d;
@@ -115,24 +62,31 @@ pub fn from_derivs(
         -(dr_d + delta * delta * r.dd + delta * tau * r.dt) / ((x * x + cv_r * k) * f.r * rho)
     });
     let a_rt = i.a + r.a;
-    FluidProperties {
+    let p = rho * rt * z;
+    let cv = f.r * cv_r;
+    let dp_drho = rt * k;
+    let ln_z = z.ln();
+    Properties {
         t,
+        p,
         rho,
-        p: rho * rt * z,
         z,
-        u: rt * tau_t,
+        molar_mass: f.molar_mass,
+        h_res: rt * (tau * r.t + dr_d),
+        s_res: f.r * (tau * r.t - r.a + ln_z),
+        g_res: rt * (r.a + dr_d - ln_z),
         h: rt * (1.0 + tau_t + dr_d),
         s: f.r * (tau_t - a_rt),
+        u: rt * tau_t,
         g: rt * (1.0 + a_rt + dr_d),
-        a: rt * a_rt,
-        cv: f.r * cv_r,
+        cv,
         cp,
         w,
         jt,
-        ln_phi: r.a + dr_d - z.ln(),
-        dp_drho: rt * k,
+        isentropic_exponent: cp.map(|cp| rho / p * cp / cv * dp_drho),
+        dp_drho,
         dp_dt: rho * f.r * x,
-        molar_mass: f.molar_mass,
+        ln_phi: vec![r.a + dr_d - ln_z],
     }
 }
 

@@ -17,8 +17,8 @@
 //! 0.1 Tc to 20 Tc and up to 100 pc.
 
 use super::error::{positive, PureError, PureResult};
-use super::fluid::{Branch, Critical, FluidRange, PureFluid, PureProps, SatState};
-use crate::constants::{P_REF, R};
+use super::fluid::{Branch, Critical, FluidRange, PureFluid, SatState};
+use crate::constants::R;
 use crate::cubic::Cubic;
 use crate::equilibrium::saturation;
 use crate::model::Model;
@@ -31,21 +31,6 @@ pub const T_MIN_OVER_TC: f64 = 0.1;
 pub const T_MAX_OVER_TC: f64 = 20.0;
 /// Highest pressure accepted, in multiples of pc.
 pub const P_MAX_OVER_PC: f64 = 100.0;
-
-fn convert(p: &Properties) -> PureProps {
-    PureProps {
-        t: p.t,
-        p: p.p,
-        rho: p.rho,
-        z: p.z,
-        u: p.u,
-        h: p.h,
-        s: p.s,
-        cv: p.cv,
-        cp: p.cp,
-        w: p.w,
-    }
-}
 
 fn check_pure(c: &Cubic) -> PureResult<()> {
     let n = c.components().len();
@@ -114,8 +99,8 @@ impl PureFluid for Cubic {
         Ok(SatState {
             t: s.t,
             p: s.p,
-            liquid: convert(&s.liquid),
-            vapor: convert(&s.vapor),
+            liquid: s.liquid,
+            vapor: s.vapor,
         })
     }
 
@@ -134,12 +119,12 @@ impl PureFluid for Cubic {
         Ok(SatState {
             t: s.t,
             p: s.p,
-            liquid: convert(&s.liquid),
-            vapor: convert(&s.vapor),
+            liquid: s.liquid,
+            vapor: s.vapor,
         })
     }
 
-    fn props(&self, t: f64, rho: f64) -> PureResult<PureProps> {
+    fn props(&self, t: f64, rho: f64) -> PureResult<Properties> {
         check_pure(self)?;
         positive("temperature (K)", t)?;
         positive("molar density (mol/m3)", rho)?;
@@ -152,10 +137,8 @@ impl PureFluid for Cubic {
                 range: format!("below the co-volume limit 1/b = {max:.6e} mol/m3"),
             });
         }
-        let r = self.residual(t, rho, &x);
-        let ig = self.ideal_gas(t, &x);
-        let z = r.z();
-        let p = rho * R * t * z;
+        let props = crate::properties::evaluate(self, t, rho, &x);
+        let p = props.p;
         if !(p > 0.0 && p.is_finite()) {
             return Err(PureError::Model(crate::Error::NoSolution(format!(
                 "{} gives p = {p:.6e} Pa at T = {t} K, rho = {rho} mol/m3: inside the \
@@ -163,29 +146,7 @@ impl PureFluid for Cubic {
                 self.model_title()
             ))));
         }
-        let h = R * ig.h_r + R * t * (r.a_d - r.a_t);
-        let s = R * (ig.s_r - (p / P_REF).ln()) + R * (-r.a - r.a_t + z.ln());
-        let cv = R * (ig.cp_r - 1.0 - r.a_tt - 2.0 * r.a_t);
-        let dp_drho = R * t * r.dp_drho_rt();
-        let dp_dt = rho * R * r.dp_dt_rho_r();
-        let cp = (dp_drho > 0.0).then(|| cv + t * dp_dt * dp_dt / (rho * rho * dp_drho));
-        let m = self.components()[0].molar_mass;
-        let w = cp.and_then(|cp| {
-            let w2 = cp / cv * dp_drho / m;
-            (w2 > 0.0).then(|| w2.sqrt())
-        });
-        Ok(PureProps {
-            t,
-            p,
-            rho,
-            z,
-            u: h - p / rho,
-            h,
-            s,
-            cv,
-            cp,
-            w,
-        })
+        Ok(props)
     }
 
     fn pressure(&self, t: f64, rho: f64) -> PureResult<f64> {

@@ -3,12 +3,14 @@
 //! ([`crate::cubic::Cubic`]) with one component.
 //!
 //! A pure fluid gives its critical point, its range, its own saturation solver (equal pressure
-//! and equal Gibbs energy of the two phases) and every property at (T, rho). Properties are in
+//! and equal Gibbs energy of the two phases) and every property at (T, rho) ([`Properties`], as
+//! every model gives them). Properties are in
 //! the fluid's zero, the same for every model: the steam-table zero for water (IAPWS-95: u = s =
 //! 0 for the saturated liquid at the triple point), h = s = 0 for the ideal gas at 298.15 K and
 //! 101.325 kPa for every other fluid. An enthalpy or entropy entered is read on the same zero.
 
 use super::error::PureResult;
+use crate::properties::Properties;
 
 /// Which density root of an isotherm.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -59,53 +61,17 @@ impl FluidRange {
     }
 }
 
-/// Properties of one single-phase state, molar SI units.
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub struct PureProps {
-    /// Temperature, K.
-    pub t: f64,
-    /// Pressure, Pa.
-    pub p: f64,
-    /// Molar density, mol/m3.
-    pub rho: f64,
-    /// Compressibility factor.
-    pub z: f64,
-    /// Internal energy, J/mol.
-    pub u: f64,
-    /// Enthalpy, J/mol.
-    pub h: f64,
-    /// Entropy, J/(mol K).
-    pub s: f64,
-    /// Isochoric heat capacity, J/(mol K).
-    pub cv: f64,
-    /// Isobaric heat capacity, J/(mol K); `None` where mechanically unstable.
-    pub cp: Option<f64>,
-    /// Speed of sound, m/s; `None` where mechanically unstable.
-    pub w: Option<f64>,
-}
-
-impl PureProps {
-    /// Molar volume, m3/mol.
-    pub fn v(&self) -> f64 {
-        1.0 / self.rho
-    }
-    /// Molar Gibbs energy h - T s, J/mol.
-    pub fn g(&self) -> f64 {
-        self.h - self.t * self.s
-    }
-}
-
 /// A saturation state: both coexisting phases at one (T, p).
-#[derive(Debug, Clone, Copy, PartialEq)]
+#[derive(Debug, Clone, PartialEq)]
 pub struct SatState {
     /// Temperature, K.
     pub t: f64,
     /// Pressure, Pa.
     pub p: f64,
     /// Saturated liquid.
-    pub liquid: PureProps,
+    pub liquid: Properties,
     /// Saturated vapour.
-    pub vapor: PureProps,
+    pub vapor: Properties,
 }
 
 impl SatState {
@@ -139,7 +105,7 @@ pub trait PureFluid {
     /// Saturation at pressure `p` (Pa), from the model's own equal-Gibbs solver.
     fn saturation_p(&self, p: f64) -> PureResult<SatState>;
     /// Every property at T (K) and molar density rho (mol/m3).
-    fn props(&self, t: f64, rho: f64) -> PureResult<PureProps>;
+    fn props(&self, t: f64, rho: f64) -> PureResult<Properties>;
     /// The model's pressure (Pa) at T (K) and rho (mol/m3), as the equation gives it (it may be
     /// negative inside the dome).
     fn pressure(&self, t: f64, rho: f64) -> PureResult<f64>;

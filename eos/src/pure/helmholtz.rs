@@ -1,6 +1,6 @@
 //! [`PureFluid`] for the Helmholtz formulations: saturation from the formulation's own
 //! equal-pressure, equal-Gibbs-energy solver ([`crate::helmholtz::saturation`], Akasaka's
-//! Newton scheme), properties from the formulation ([`crate::helmholtz::FluidProperties`])
+//! Newton scheme), properties from the formulation ([`HelmholtzFluid::properties`])
 //! with h and s on the fluid's zero (the one every model of the fluid reports: the steam-table
 //! zero for water, the ideal gas at 298.15 K and 101.325 kPa otherwise), density roots from
 //! [`crate::helmholtz::density`].
@@ -10,32 +10,22 @@
 //! [`crate::helmholtz::fluid`].
 
 use super::error::{positive, PureError, PureResult};
-use super::fluid::{Branch, Critical, FluidRange, PureFluid, PureProps, SatState};
+use super::fluid::{Branch, Critical, FluidRange, PureFluid, SatState};
 use crate::helmholtz::branch_hint::ancillary_pressure;
 use crate::helmholtz::density::{self as hd, solve_branch};
-use crate::helmholtz::{FluidProperties, HelmholtzFluid, Saturation};
+use crate::helmholtz::{HelmholtzFluid, Saturation};
+use crate::properties::Properties;
 
 /// The formulation's properties on the fluid's zero of h and s (the one every model of the
 /// fluid reports, [`HelmholtzFluid::zero_shift`]).
-fn convert(fluid: &HelmholtzFluid, p: &FluidProperties) -> PureProps {
+fn on_fluid_zero(fluid: &HelmholtzFluid, p: Properties) -> Properties {
     let (dh, ds) = fluid.zero_shift();
-    PureProps {
-        t: p.t,
-        p: p.p,
-        rho: p.rho,
-        z: p.z,
-        u: p.u + dh,
-        h: p.h + dh,
-        s: p.s + ds,
-        cv: p.cv,
-        cp: p.cp,
-        w: p.w,
-    }
+    p.shifted(dh, ds)
 }
 
 fn sat_state(fluid: &HelmholtzFluid, s: &Saturation) -> PureResult<SatState> {
-    let liquid = convert(fluid, &fluid.properties(s.t, s.rho_liq)?);
-    let mut vapor = convert(fluid, &fluid.properties(s.t, s.rho_vap)?);
+    let liquid = on_fluid_zero(fluid, fluid.properties(s.t, s.rho_liq)?);
+    let mut vapor = on_fluid_zero(fluid, fluid.properties(s.t, s.rho_vap)?);
     // Both phases at the converged pressure (taken from the vapour side by the solver).
     let mut liquid = liquid;
     liquid.p = s.p;
@@ -128,8 +118,8 @@ impl PureFluid for HelmholtzFluid {
         }
     }
 
-    fn props(&self, t: f64, rho: f64) -> PureResult<PureProps> {
-        Ok(convert(self, &self.properties(t, rho)?))
+    fn props(&self, t: f64, rho: f64) -> PureResult<Properties> {
+        Ok(on_fluid_zero(self, self.properties(t, rho)?))
     }
 
     fn pressure(&self, t: f64, rho: f64) -> PureResult<f64> {

@@ -45,6 +45,6 @@ pub mod solve;
 pub mod state;
 
 pub use error::{PureError, PureResult};
-pub use fluid::{Branch, Critical, FluidRange, PureFluid, PureProps, SatState};
+pub use fluid::{Branch, Critical, FluidRange, PureFluid, SatState};
 pub use solve::{state, SATURATION_TOLERANCE};
 pub use state::{PureState, Quantity, Spec};

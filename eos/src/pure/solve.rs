@@ -24,11 +24,12 @@
 //! IAPWS R14-08, see [`super::ice`]).
 
 use super::error::{finite, positive, PureError, PureResult};
-use super::fluid::{Branch, PureFluid, PureProps, SatState};
+use super::fluid::{Branch, PureFluid, SatState};
 use super::ice;
 use super::state::{PureState, Spec};
 use crate::equilibrium::brent;
 use crate::phase::Phase;
+use crate::properties::Properties;
 
 /// Relative distance |p / p_s(T) - 1| within which a (T, P) request counts as on the
 /// saturation line.
@@ -226,7 +227,7 @@ fn at_tv(fluid: &dyn PureFluid, t: f64, v: f64) -> PureResult<PureState> {
         side
     } else {
         let sat = fluid.saturation_t(t)?;
-        let (vl, vv) = (sat.liquid.v(), sat.vapor.v());
+        let (vl, vv) = (sat.liquid.molar_volume(), sat.vapor.molar_volume());
         if v < vl {
             Branch::Liquid
         } else if v > vv {
@@ -237,10 +238,8 @@ fn at_tv(fluid: &dyn PureFluid, t: f64, v: f64) -> PureResult<PureState> {
     };
     let props = fluid.props(t, rho)?;
     check_p(fluid, props.p)?;
-    Ok(PureState::single(
-        props,
-        single_phase(fluid, t, props.p, side),
-    ))
+    let phase = single_phase(fluid, t, props.p, side);
+    Ok(PureState::single(props, phase))
 }
 
 /// The saturation state at p, or `None` where the isobar crosses no dome (at or above pc,
@@ -332,7 +331,7 @@ fn branch_at(fluid: &dyn PureFluid, t: f64, side: Branch) -> Branch {
 
 fn finish_single(
     fluid: &dyn PureFluid,
-    props: PureProps,
+    props: Properties,
     side: Branch,
     p: f64,
 ) -> PureResult<PureState> {
@@ -359,7 +358,7 @@ fn at_pv(fluid: &dyn PureFluid, p: f64, v: f64) -> PureResult<PureState> {
     let crit = fluid.critical();
     let (t0, side) = match dome_at(fluid, p)? {
         Some(sat) => {
-            let (vl, vv) = (sat.liquid.v(), sat.vapor.v());
+            let (vl, vv) = (sat.liquid.molar_volume(), sat.vapor.molar_volume());
             if v < vl {
                 (sat.t, Branch::Liquid)
             } else if v > vv {
@@ -396,7 +395,7 @@ enum Energy {
 }
 
 impl Energy {
-    fn of(self, p: &PureProps) -> f64 {
+    fn of(self, p: &Properties) -> f64 {
         match self {
             Energy::H => p.h,
             Energy::S => p.s,
@@ -435,7 +434,7 @@ fn at_p_energy(fluid: &dyn PureFluid, p: f64, target: f64, e: Energy) -> PureRes
             (t0, side, e.of(&fluid.props(t0, rho)?))
         }
     };
-    let at = |t: f64| -> PureResult<PureProps> {
+    let at = |t: f64| -> PureResult<Properties> {
         let rho = fluid.density(t, p, branch_at(fluid, t, side))?;
         fluid.props(t, rho)
     };

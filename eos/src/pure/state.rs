@@ -2,8 +2,9 @@
 //! ([`PureState`]).
 
 use super::error::{PureError, PureResult};
-use super::fluid::{PureProps, SatState};
+use super::fluid::SatState;
 use crate::phase::Phase;
+use crate::properties::Properties;
 
 /// Two properties that fix a pure-fluid state, SI molar units: T in K, p in Pa, v in m3/mol,
 /// h in J/mol, s in J/(mol K), x the vapour quality (mass = mole fraction of vapour).
@@ -94,7 +95,7 @@ fn order(q: Quantity) -> u8 {
 }
 
 /// A pure-fluid state: single-phase, saturated or two-phase.
-#[derive(Debug, Clone, Copy, PartialEq)]
+#[derive(Debug, Clone, PartialEq)]
 pub struct PureState {
     /// Temperature, K.
     pub t: f64,
@@ -117,14 +118,14 @@ pub struct PureState {
     /// Vapour quality for saturated and two-phase states, `None` for single-phase states.
     pub quality: Option<f64>,
     /// Every property of a single-phase state.
-    pub single: Option<PureProps>,
+    pub single: Option<Properties>,
     /// Both saturated phases of a saturated or two-phase state.
     pub saturation: Option<SatState>,
 }
 
 impl PureState {
     /// A single-phase state.
-    pub fn single(props: PureProps, phase: Phase) -> Self {
+    pub fn single(props: Properties, phase: Phase) -> Self {
         PureState {
             t: props.t,
             p: props.p,
@@ -149,7 +150,7 @@ impl PureState {
         }
         let (l, g) = (&sat.liquid, &sat.vapor);
         let lever = |a: f64, b: f64| (1.0 - x) * a + x * b;
-        let v = lever(l.v(), g.v());
+        let v = lever(l.molar_volume(), g.molar_volume());
         let phase = if x <= 0.0 {
             Phase::SaturatedLiquid
         } else if x >= 1.0 {

@@ -161,6 +161,7 @@ pub fn evaluate(
         h,
         s,
         u: h - p * vol,
+        g: h - t * s,
         cv,
         cp,
         w,
