@@ -10,6 +10,7 @@ use crate::feed::Feed;
 use eos::cubic::{Cubic, CubicKind};
 use eos::gas_gravity::ZCorrelation;
 use eos::ideal::IdealGas;
+use eos::need::Need;
 use eos::phase::Phase;
 use eos::properties::Properties;
 use eos::pure::PureFluid;
@@ -138,9 +139,26 @@ impl BuiltModel {
 
     /// The state at (T, P).
     pub fn at_tp(&self, t: f64, p: f64, x: &[f64], root: RootChoice) -> eos::Result<ModelState> {
+        self.at_tp_need(t, p, x, root, Need::All)
+    }
+
+    /// The state at (T, P) with what `need` asks for computed (see
+    /// [`eos::properties::Properties::computed`]).
+    pub fn at_tp_need(
+        &self,
+        t: f64,
+        p: f64,
+        x: &[f64],
+        root: RootChoice,
+        need: Need,
+    ) -> eos::Result<ModelState> {
         match &self.engine {
-            Engine::Helmholtz(m) => State::at_tp(m.as_ref(), t, p, x, root).map(from_state),
-            Engine::TpExplicit(m) => tp_explicit::state_tp(m.as_ref(), t, p, x, root).map(from_tp),
+            Engine::Helmholtz(m) => {
+                State::at_tp_need(m.as_ref(), t, p, x, root, need).map(from_state)
+            }
+            Engine::TpExplicit(m) => {
+                tp_explicit::evaluate_need(m.as_ref(), t, p, x, root, need).map(from_tp)
+            }
         }
     }
 

@@ -46,6 +46,7 @@ pub mod if97;
 pub mod jobs;
 pub mod lee_kesler;
 pub mod model;
+pub mod need;
 pub mod pair_matrix;
 pub mod phase;
 pub mod properties;

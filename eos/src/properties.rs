@@ -17,6 +17,7 @@
 
 use crate::constants::{P_REF, R};
 use crate::model::Model;
+use crate::need::Need;
 
 /// All properties of one single-phase state. Molar quantities are per mole of mixture.
 #[derive(Debug, Clone, PartialEq)]
@@ -62,6 +63,10 @@ pub struct Properties {
     pub dp_dt: f64,
     /// ln of each component's fugacity coefficient.
     pub ln_phi: Vec<f64>,
+    /// What was computed. With [`Need::Volumetric`] only t, p, rho, z, molar_mass and
+    /// dp_drho hold values; the energies, heat capacities and dp_dt are NaN, cp, w, jt and
+    /// the isentropic exponent `None`, and ln_phi empty.
+    pub computed: Need,
 }
 
 impl Properties {
@@ -89,6 +94,39 @@ impl Properties {
 /// Evaluates every property at T (K), molar density rho (mol/m3) and mole fractions x. The
 /// caller has validated the inputs.
 pub fn evaluate(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> Properties {
+    evaluate_need(model, t, rho, x, Need::All)
+}
+
+/// Evaluates what `need` asks for (see [`Properties::computed`]); the values computed are
+/// those of [`evaluate`], bit for bit.
+pub fn evaluate_need(model: &dyn Model, t: f64, rho: f64, x: &[f64], need: Need) -> Properties {
+    if need == Need::Volumetric {
+        let r = model.residual(t, rho, x);
+        let z = r.z();
+        return Properties {
+            t,
+            p: rho * R * t * z,
+            rho,
+            z,
+            molar_mass: model.molar_mass(x),
+            h_res: f64::NAN,
+            s_res: f64::NAN,
+            g_res: f64::NAN,
+            h: f64::NAN,
+            s: f64::NAN,
+            u: f64::NAN,
+            g: f64::NAN,
+            cv: f64::NAN,
+            cp: None,
+            w: None,
+            jt: None,
+            isentropic_exponent: None,
+            dp_drho: R * t * r.dp_drho_rt(),
+            dp_dt: f64::NAN,
+            ln_phi: Vec::new(),
+            computed: Need::Volumetric,
+        };
+    }
     let r = model.residual(t, rho, x);
     let ig = model.ideal_gas(t, x);
     let z = r.z();
@@ -141,5 +179,6 @@ pub fn evaluate(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> Properties {
         dp_drho,
         dp_dt,
         ln_phi,
+        computed: Need::All,
     }
 }

@@ -9,8 +9,9 @@ use crate::composition;
 use crate::constants::R;
 use crate::error::{positive, Error, Result};
 use crate::model::{DensityRoots, Model};
+use crate::need::Need;
 use crate::phase::Phase;
-use crate::properties::{evaluate, Properties};
+use crate::properties::{evaluate, evaluate_need, Properties};
 
 /// Which density root of (T, P) to report.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
@@ -45,7 +46,18 @@ fn g_res_rt(model: &dyn Model, t: f64, rho: f64, x: &[f64]) -> f64 {
 
 /// Names the phase of a single-phase state at (T, P, rho).
 pub(crate) fn phase_of(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -> (Phase, usize) {
-    let roots = refined_densities(model, t, p, x);
+    phase_among(model, t, p, rho, x, &refined_densities(model, t, p, x))
+}
+
+/// [`phase_of`] with the refined density roots at (T, P) already found.
+fn phase_among(
+    model: &dyn Model,
+    t: f64,
+    p: f64,
+    rho: f64,
+    x: &[f64],
+    roots: &DensityRoots,
+) -> (Phase, usize) {
     let n = roots.as_slice().len();
     let (tc, pc) = model.pseudo_critical(x);
     if t >= tc {
@@ -78,6 +90,18 @@ pub(crate) fn phase_of(model: &dyn Model, t: f64, p: f64, rho: f64, x: &[f64]) -
 impl State {
     /// The state at temperature `t` (K) and pressure `p` (Pa).
     pub fn at_tp(model: &dyn Model, t: f64, p: f64, x: &[f64], root: RootChoice) -> Result<Self> {
+        Self::at_tp_need(model, t, p, x, root, Need::All)
+    }
+
+    /// [`State::at_tp`] computing what `need` asks for (the root and the phase are the same).
+    pub fn at_tp_need(
+        model: &dyn Model,
+        t: f64,
+        p: f64,
+        x: &[f64],
+        root: RootChoice,
+        need: Need,
+    ) -> Result<Self> {
         positive("temperature (K)", t)?;
         positive("pressure (Pa)", p)?;
         composition::check(x, model.components().len())?;
@@ -98,8 +122,8 @@ impl State {
                 .min_by(|a, b| g_res_rt(model, t, *a, x).total_cmp(&g_res_rt(model, t, *b, x)))
                 .unwrap_or(r[0]),
         };
-        let props = evaluate(model, t, rho, x);
-        let (phase, n) = phase_of(model, t, p, rho, x);
+        let props = evaluate_need(model, t, rho, x, need);
+        let (phase, n) = phase_among(model, t, p, rho, x, &roots);
         Ok(State {
             props,
             phase,

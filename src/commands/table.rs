@@ -18,6 +18,7 @@ use crate::range::StateCheck;
 use crate::report::table::{ComponentSource, TableBasis, TableColumn, TableRow, UnitNote};
 use crate::table_property::{self, Selection};
 use crate::units;
+use eos::need::Need;
 use eos::state::RootChoice;
 use rayon::prelude::*;
 use std::path::Path;
@@ -190,6 +191,8 @@ struct Plan {
     z: Option<Vec<f64>>,
     screen: PhaseScreen,
     basis: TableBasis,
+    /// What the per-state path computes: Z and density only when every column comes from Z.
+    need: Need,
 }
 
 impl Plan {
@@ -261,7 +264,13 @@ impl Plan {
             }
         };
         let basis = basis(args, &feed, &built, &sel, ambient, method);
+        let need = if sel.properties.iter().all(|p| p.from_z) {
+            Need::Volumetric
+        } else {
+            Need::All
+        };
         Ok(Plan {
+            need,
             sel,
             feed,
             built,
@@ -386,7 +395,7 @@ fn row_from_state(plan: &Plan, t: f64, p: f64) -> TableRow {
             )),
         };
     }
-    match built.at_tp(t, p, &feed.mole, RootChoice::LowestGibbs) {
+    match built.at_tp_need(t, p, &feed.mole, RootChoice::LowestGibbs, plan.need) {
         Ok(s) => TableRow {
             temperature_k: t,
             pressure_pa: p,

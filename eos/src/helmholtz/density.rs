@@ -40,10 +40,17 @@ pub fn p_dp(f: &Formulation, t: f64, rho: f64) -> (f64, f64) {
     )
 }
 
+/// Relative width of the spinodal bracket below which the isotherm is taken as a parabola
+/// about its extremum (the tangent bound of [`spinodal`]).
+const TANGENT_BRACKET: f64 = 1e-3;
+
 /// Bisection on the sign of dp/drho between `stable` (dp/drho > 0) and `unstable` (<= 0):
 /// a density next to the spinodal and its pressure. Stops early at a stable point whose
-/// pressure passes `target` in the direction `above` (a root lies before it), or when the
-/// bracket is 1e-8 wide (p is flat at the spinodal, so its pressure is then known to ~1e-16).
+/// pressure passes `target` in the direction `above` (a root lies before it), at a stable
+/// point within [`TANGENT_BRACKET`] of the unstable one whose tangent cannot reach the target
+/// (no root on this side; the tangent's value is returned, beyond the spinodal's pressure), or
+/// when the bracket is 1e-8 wide (p is flat at the spinodal, so its pressure is then known to
+/// ~1e-16).
 fn spinodal(
     f: &Formulation,
     t: f64,
@@ -64,6 +71,15 @@ fn spinodal(
             p_stable = p;
             if (above && p >= target) || (!above && p <= target) {
                 break;
+            }
+            // Close to the spinodal the isotherm is locally a parabola about its extremum,
+            // so p there lies within the tangent at this point: when even the tangent cannot
+            // reach the target, no root lies on this side and the bracket need not shrink.
+            let reach = p + dp * (unstable - stable);
+            if (unstable - stable).abs() <= TANGENT_BRACKET * mid
+                && ((above && reach < target) || (!above && reach > target))
+            {
+                return (stable, reach);
             }
         } else {
             unstable = mid;

@@ -87,6 +87,7 @@ pub fn from_derivs(
         dp_drho,
         dp_dt: rho * f.r * x,
         ln_phi: vec![r.a + dr_d - ln_z],
+        computed: crate::need::Need::All,
     }
 }
 

@@ -5,6 +5,7 @@ use crate::composition;
 use crate::constants::{P_REF, R};
 use crate::error::{positive, Error, Result};
 use crate::ideal_cp::IdealGasValues;
+use crate::need::Need;
 use crate::phase::Phase;
 use crate::properties::Properties;
 use crate::state::RootChoice;
@@ -91,6 +92,21 @@ pub fn evaluate(
     x: &[f64],
     root: RootChoice,
 ) -> Result<TpState> {
+    evaluate_need(model, t, p, x, root, Need::All)
+}
+
+/// What `need` asks for at (T, P, x) on branch `root` (see
+/// [`crate::properties::Properties::computed`]): Z and density take one evaluation of the
+/// model, every property also the departures and the numerical derivatives. The values
+/// computed are those of [`evaluate`], bit for bit.
+pub fn evaluate_need(
+    model: &dyn TpModel,
+    t: f64,
+    p: f64,
+    x: &[f64],
+    root: RootChoice,
+    need: Need,
+) -> Result<TpState> {
     positive("temperature (K)", t)?;
     positive("pressure (Pa)", p)?;
     composition::check(x, model.components().len())?;
@@ -103,6 +119,41 @@ pub fn evaluate(
         .zip(x)
         .map(|(c, xi)| xi * c.molar_mass)
         .sum();
+    if need == Need::Volumetric {
+        if !(z.is_finite() && rho.is_finite()) {
+            return Err(Error::NoSolution(format!(
+                "{} gives no finite properties at T = {t} K, P = {p} Pa",
+                model.id()
+            )));
+        }
+        return Ok(TpState {
+            props: Properties {
+                t,
+                p,
+                rho,
+                z,
+                molar_mass: m,
+                h_res: f64::NAN,
+                s_res: f64::NAN,
+                g_res: f64::NAN,
+                h: f64::NAN,
+                s: f64::NAN,
+                u: f64::NAN,
+                g: f64::NAN,
+                cv: f64::NAN,
+                cp: None,
+                w: None,
+                jt: None,
+                isentropic_exponent: None,
+                dp_drho: f64::NAN,
+                dp_dt: f64::NAN,
+                ln_phi: Vec::new(),
+                computed: Need::Volumetric,
+            },
+            phase: name_phase(model, t, p, rho, x),
+            warnings: pt.warnings,
+        });
+    }
     let (h_dep, s_dep, ln_phi_mix) = departures(model, t, p, x, root)?;
     let ig = ideal_part(model, t, x, pt.ideal);
     let mixing: f64 = x.iter().filter(|&&v| v > 0.0).map(|&v| v * v.ln()).sum();
@@ -170,6 +221,7 @@ pub fn evaluate(
         dp_drho: -1.0 / (rho * rho * dvdp),
         dp_dt: -dvdt / dvdp,
         ln_phi,
+        computed: Need::All,
     };
     let finite = [props.h, props.s, props.cv, props.z, props.rho]
         .iter()

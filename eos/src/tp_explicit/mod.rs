@@ -22,7 +22,7 @@ mod gas_gravity;
 pub mod if97;
 mod lee_kesler;
 
-pub use evaluate::{evaluate, state_prho, state_tp, state_trho, TpState};
+pub use evaluate::{evaluate, evaluate_need, state_prho, state_tp, state_trho, TpState};
 pub use gas_gravity::GravityModel;
 pub use if97::If97Model;
 pub use lee_kesler::LeeKeslerModel;
