@@ -80,6 +80,34 @@ impl Properties {
         self.rho * self.molar_mass
     }
 
+    /// A state of which only the volumetric part is computed ([`Need::Volumetric`]); `dp_drho`
+    /// NaN where the model does not have it at no extra cost.
+    pub fn volumetric(t: f64, p: f64, rho: f64, z: f64, molar_mass: f64, dp_drho: f64) -> Self {
+        Properties {
+            t,
+            p,
+            rho,
+            z,
+            molar_mass,
+            h_res: f64::NAN,
+            s_res: f64::NAN,
+            g_res: f64::NAN,
+            h: f64::NAN,
+            s: f64::NAN,
+            u: f64::NAN,
+            g: f64::NAN,
+            cv: f64::NAN,
+            cp: None,
+            w: None,
+            jt: None,
+            isentropic_exponent: None,
+            dp_drho,
+            dp_dt: f64::NAN,
+            ln_phi: Vec::new(),
+            computed: Need::Volumetric,
+        }
+    }
+
     /// The same state on another zero of energy and entropy: h and u moved by `dh` (J/mol),
     /// s by `ds` (J/(mol K)), and so g by dh - T ds.
     pub fn shifted(mut self, dh: f64, ds: f64) -> Properties {
@@ -103,29 +131,14 @@ pub fn evaluate_need(model: &dyn Model, t: f64, rho: f64, x: &[f64], need: Need)
     if need == Need::Volumetric {
         let r = model.residual(t, rho, x);
         let z = r.z();
-        return Properties {
+        return Properties::volumetric(
             t,
-            p: rho * R * t * z,
+            rho * R * t * z,
             rho,
             z,
-            molar_mass: model.molar_mass(x),
-            h_res: f64::NAN,
-            s_res: f64::NAN,
-            g_res: f64::NAN,
-            h: f64::NAN,
-            s: f64::NAN,
-            u: f64::NAN,
-            g: f64::NAN,
-            cv: f64::NAN,
-            cp: None,
-            w: None,
-            jt: None,
-            isentropic_exponent: None,
-            dp_drho: R * t * r.dp_drho_rt(),
-            dp_dt: f64::NAN,
-            ln_phi: Vec::new(),
-            computed: Need::Volumetric,
-        };
+            model.molar_mass(x),
+            R * t * r.dp_drho_rt(),
+        );
     }
     let r = model.residual(t, rho, x);
     let ig = model.ideal_gas(t, x);

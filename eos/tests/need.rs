@@ -56,7 +56,8 @@ fn same_volumetric(full: &Properties, vol: &Properties, what: &str) {
 fn models_with_a_helmholtz_energy_give_the_same_root_and_z() {
     let pr = Cubic::new(CubicKind::Pr76, &[methane()], None).unwrap();
     let water95 = reference_for("water").unwrap();
-    let models: [(&dyn Model, &[(f64, f64)]); 2] = [
+    type States<'a> = &'a [(f64, f64)];
+    let models: [(&dyn Model, States); 2] = [
         (&pr, &[(150.0, 1e5), (150.0, 50e5), (300.0, 100e5)]),
         (
             &water95,

@@ -127,29 +127,7 @@ pub fn evaluate_need(
             )));
         }
         return Ok(TpState {
-            props: Properties {
-                t,
-                p,
-                rho,
-                z,
-                molar_mass: m,
-                h_res: f64::NAN,
-                s_res: f64::NAN,
-                g_res: f64::NAN,
-                h: f64::NAN,
-                s: f64::NAN,
-                u: f64::NAN,
-                g: f64::NAN,
-                cv: f64::NAN,
-                cp: None,
-                w: None,
-                jt: None,
-                isentropic_exponent: None,
-                dp_drho: f64::NAN,
-                dp_dt: f64::NAN,
-                ln_phi: Vec::new(),
-                computed: Need::Volumetric,
-            },
+            props: Properties::volumetric(t, p, rho, z, m, f64::NAN),
             phase: name_phase(model, t, p, rho, x),
             warnings: pt.warnings,
         });
