@@ -160,3 +160,29 @@ fn saturation_of_a_mixture_points_to_the_bubble_and_dew_points_of_flash() {
         assert!(err.contains(option), "{option} not in: {err}");
     }
 }
+
+#[test]
+fn flash_labels_read_as_a_practitioner_writes_them() {
+    let (code, out, err) = run(&[
+        "flash",
+        "--mix",
+        "methane=0.8,ethane=0.1,propane=0.06,n-butane=0.04",
+        "-t",
+        "-40 degC",
+        "-p",
+        "30 bar",
+        "-m",
+        "pr",
+    ]);
+    assert!(code == 0 || code == 3, "{err}");
+    // The temperature with its unit, then Celsius; enthalpy and entropy per kilogram like
+    // every other command; vapour mole fractions y, liquid x (common practice).
+    assert!(out.contains("233.150 K (-40.000 degC)"), "{out}");
+    assert!(out.contains("kJ/kg") && out.contains("kJ/(kg K)"), "{out}");
+    assert!(
+        out.contains("vapor (y)") && out.contains("liquid (x)"),
+        "{out}"
+    );
+    assert!(out.contains("methane [mol/mol]"), "{out}");
+    assert!(!out.contains(" x methane"), "{out}");
+}

@@ -88,11 +88,11 @@ fn model_text(m: &FlashResultReport) -> String {
     row(
         "temperature",
         format!(
-            "{} ({} degC)",
+            "{} K ({} degC)",
             sig(m.temperature_k, 6),
             sig(m.temperature_k - KELVIN_AT_0_DEGC, 5)
         ),
-        "K",
+        "",
     );
     row("pressure", sig(m.pressure_pa / PA_PER_BAR, 6), "bar abs");
     row(
@@ -117,8 +117,9 @@ fn model_text(m: &FlashResultReport) -> String {
         "mol/m3",
     );
     row("molar mass", sig(m.molar_mass_kg_mol * 1e3, 6), "g/mol");
-    row("enthalpy", sig(m.enthalpy_j_mol, 6), "J/mol");
-    row("entropy", sig(m.entropy_j_mol_k, 6), "J/(mol K)");
+    let per_kg = 1e3 * m.molar_mass_kg_mol;
+    row("enthalpy", sig(m.enthalpy_j_mol / per_kg, 6), "kJ/kg");
+    row("entropy", sig(m.entropy_j_mol_k / per_kg, 6), "kJ/(kg K)");
     if let Some(res) = m.fugacity_residual {
         row("fugacity residual", sig(res, 3), "max |ln f_V - ln f_L|");
     }
@@ -126,7 +127,12 @@ fn model_text(m: &FlashResultReport) -> String {
     out.push_str(&format!("{s}\n"));
     let mut p = new_table();
     let mut header = vec!["phase".to_string()];
-    header.extend(m.phases.iter().map(|ph| ph.phase.clone()));
+    // Mole fractions of a vapour are written y, of a liquid x (common practice).
+    header.extend(m.phases.iter().map(|ph| match ph.phase.as_str() {
+        "vapor" => "vapor (y)".to_string(),
+        "liquid" => "liquid (x)".to_string(),
+        other => other.to_string(),
+    }));
     p.set_header(header);
     let line = |name: &str, f: &dyn Fn(&crate::report::flash::FlashPhase) -> String| {
         let mut v = vec![name.to_string()];
@@ -145,7 +151,7 @@ fn model_text(m: &FlashResultReport) -> String {
     }));
     if let Some(first) = m.phases.first() {
         for (k, c) in first.composition.iter().enumerate() {
-            p.add_row(line(&format!("x {}", c.component), &|ph| {
+            p.add_row(line(&format!("{} [mol/mol]", c.component), &|ph| {
                 sig(ph.composition[k].mole_fraction, 6)
             }));
         }
