@@ -35,6 +35,7 @@ pub mod render;
 pub mod report;
 pub mod sheet_rows;
 pub mod solid_check;
+pub mod state_arrays;
 pub mod table_property;
 pub mod units;
 pub mod xlsx_rows;

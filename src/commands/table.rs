@@ -13,13 +13,13 @@ use crate::exit::Exit;
 use crate::feed::{self, Feed};
 use crate::feed_input;
 use crate::models::{self, BuiltModel};
-use crate::phase_screen::{self, PhaseScreen};
+use crate::phase_screen;
 use crate::range::StateCheck;
 use crate::report::table::{ComponentSource, TableBasis, TableColumn, TableRow, UnitNote};
+use crate::state_arrays::StatePlan;
 use crate::table_property::{self, Selection};
 use crate::units;
 use eos::need::Need;
-use eos::state::RootChoice;
 use rayon::prelude::*;
 use std::path::Path;
 
@@ -184,15 +184,14 @@ struct Plan {
     sel: Selection,
     feed: Feed,
     built: BuiltModel,
-    check: StateCheck,
     t: Vec<f64>,
     p: Vec<f64>,
     /// Z of every state, temperature outer, when the batch kernel serves the table.
     z: Option<Vec<f64>>,
-    screen: PhaseScreen,
     basis: TableBasis,
-    /// What the per-state path computes: Z and density only when every column comes from Z.
-    need: Need,
+    /// The per-state path: range checks, phase screen, and what it computes (Z and density
+    /// only when every column comes from Z).
+    states: StatePlan,
 }
 
 impl Plan {
@@ -217,14 +216,15 @@ impl Plan {
         .map_err(|e| CliError::BadInput(format!("--pressures: {e}")))?;
         grid::check_size(t.len(), p.len()).map_err(CliError::BadInput)?;
         let total = t.len() * p.len();
-        let check = StateCheck::new(&built, &feed);
         // A mixture's states are phase-checked where the envelope screen says so.
-        let screen = if feed.is_pure() {
-            PhaseScreen::default()
+        let need = if sel.properties.iter().all(|p| p.from_z) {
+            Need::Volumetric
         } else {
-            let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
-            PhaseScreen::new(&built, &feed.mole, &t, total, p_low)
+            Need::All
         };
+        let p_low = p.iter().copied().fold(f64::INFINITY, f64::min);
+        let states = StatePlan::new(&built, &feed, &t, total, p_low, need);
+        let screen = &states.screen;
         // The Z-only batch kernel has no phase check: it serves pure fluids, whose root of
         // lowest Gibbs energy is the stable phase, and the states of a mixture that the
         // envelope screen finds clearly one phase; every other mixture state takes the
@@ -264,21 +264,14 @@ impl Plan {
             }
         };
         let basis = basis(args, &feed, &built, &sel, ambient, method);
-        let need = if sel.properties.iter().all(|p| p.from_z) {
-            Need::Volumetric
-        } else {
-            Need::All
-        };
         Ok(Plan {
-            need,
+            states,
             sel,
             feed,
             built,
-            check,
             t,
             p,
             z,
-            screen,
             basis,
         })
     }
@@ -317,10 +310,10 @@ impl Plan {
                     .into_par_iter()
                     .map(|k| {
                         let (t, p) = at(k);
-                        if mixture && self.screen.needs_test(t, p) {
+                        if mixture && self.states.screen.needs_test(t, p) {
                             row_from_state(self, t, p)
                         } else {
-                            row_from_z(&self.sel, &self.feed, &self.check, t, p, z[k])
+                            row_from_z(&self.sel, &self.feed, &self.states.check, t, p, z[k])
                         }
                     })
                     .collect::<Vec<_>>();
@@ -372,67 +365,24 @@ fn row_from_z(
     }
 }
 
-/// One state of the per-state path: flashed first where the screen says so (a split has no
-/// single-phase values), then the model's stable root with its range and solid flags.
+/// One state of the per-state path ([`StatePlan::at`]) as a row of the table.
 fn row_from_state(plan: &Plan, t: f64, p: f64) -> TableRow {
-    let (sel, built, feed) = (&plan.sel, &plan.built, &plan.feed);
-    let split = plan
-        .screen
-        .needs_test(t, p)
-        .then(|| split_fraction(built, feed, t, p))
-        .flatten();
-    if let Some(beta) = split {
-        return TableRow {
-            temperature_k: t,
-            pressure_pa: p,
-            phase: sel.phase.then_some("two-phase"),
-            values: vec![None; sel.properties.len()],
-            flag: None,
-            error: Some(format!(
-                "model {}: the mixture splits into vapour ({beta:.4} mol/mol) and liquid here; \
-                 single-phase values would be meaningless (see `zfactor state` for the phases)",
-                built.id
-            )),
-        };
-    }
-    match built.at_tp_need(t, p, &feed.mole, RootChoice::LowestGibbs, plan.need) {
-        Ok(s) => TableRow {
-            temperature_k: t,
-            pressure_pa: p,
-            phase: sel.phase.then(|| s.phase.as_str()),
-            values: sel
+    let sel = &plan.sel;
+    let o = plan.states.at(&plan.built, &plan.feed, t, p);
+    TableRow {
+        temperature_k: t,
+        pressure_pa: p,
+        phase: o.phase.filter(|_| sel.phase),
+        values: match &o.props {
+            Some(props) => sel
                 .properties
                 .iter()
-                .map(|pr| table_property::from_state(pr, &s.props))
+                .map(|pr| table_property::from_state(pr, props))
                 .collect(),
-            flag: if s.warnings.is_empty() {
-                plan.check.flag(t, p, s.props.rho)
-            } else {
-                Some("outside range".to_string())
-            },
-            error: None,
+            None => vec![None; sel.properties.len()],
         },
-        Err(e) => TableRow {
-            temperature_k: t,
-            pressure_pa: p,
-            phase: None,
-            values: vec![None; sel.properties.len()],
-            flag: None,
-            error: Some(format!("model {}: {e}", built.id)),
-        },
-    }
-}
-
-/// The vapour fraction when a mixture splits at (T, P) with this model (flash with models
-/// that have a Helmholtz energy); `None` for one phase, a pure fluid or a failed flash (the
-/// single-phase path then reports its own error).
-fn split_fraction(built: &BuiltModel, feed: &Feed, t: f64, p: f64) -> Option<f64> {
-    let m = built
-        .helmholtz()
-        .filter(|_| !feed.is_pure() && built.id != "ideal")?;
-    match eos::equilibrium::flash::tp(m, t, p, &feed.mole) {
-        Ok(eos::equilibrium::flash::FlashResult::TwoPhase(s)) => Some(s.vapor_fraction),
-        _ => None,
+        flag: o.flag,
+        error: o.error,
     }
 }
 
