@@ -143,3 +143,16 @@ fn the_gravity_correlations_tend_to_the_ideal_gas() {
     let s = tp_explicit::state_tp(&m, 300.0, 1e3, &[1.0], RootChoice::LowestGibbs).unwrap();
     assert!((s.props.z - 1.0).abs() < 1e-4);
 }
+
+#[test]
+fn t_rho_inverts_t_p_where_the_ideal_gas_start_lies_beyond_the_models_range() {
+    // Lee-Kesler methane at 250 K and 149.4 bar: the ideal-gas pressure of its density
+    // (about 230 bar) is the start of the search, and doubling it leaves Lee-Kesler's range
+    // (Pr <= 10); the bracket must keep its last good end. Found by the Python property test.
+    let lk = LeeKeslerModel::new(&[methane()], None).unwrap();
+    let (t, p) = (250.0, 14_935_545.0);
+    let s = tp_explicit::state_tp(&lk, t, p, &[1.0], RootChoice::LowestGibbs).unwrap();
+    let back =
+        tp_explicit::state_trho(&lk, t, s.props.rho, &[1.0], RootChoice::LowestGibbs).unwrap();
+    assert_relative_eq!(back.props.p, p, max_relative = 1e-9);
+}

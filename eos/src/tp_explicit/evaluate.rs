@@ -262,14 +262,32 @@ fn solve_log(
     let (mut lo, mut hi) = (start.ln(), start.ln());
     let f0 = g(lo)?;
     let (mut flo, mut fhi) = (f0, f0);
+    // Each end moves out by a factor of two while the model answers there; an end where it
+    // does not (outside its range) stays at its last good value, so a root between the other
+    // end and it is still bracketed.
+    let (mut lo_open, mut hi_open) = (true, true);
     for _ in 0..60 {
-        if flo < 0.0 && fhi > 0.0 || flo > 0.0 && fhi < 0.0 {
+        if flo < 0.0 && fhi > 0.0 || flo > 0.0 && fhi < 0.0 || !(lo_open || hi_open) {
             break;
         }
-        lo -= std::f64::consts::LN_2;
-        hi += std::f64::consts::LN_2;
-        flo = g(lo).unwrap_or(f64::NAN);
-        fhi = g(hi).unwrap_or(f64::NAN);
+        if lo_open {
+            match g(lo - std::f64::consts::LN_2) {
+                Ok(v) if v.is_finite() => {
+                    lo -= std::f64::consts::LN_2;
+                    flo = v;
+                }
+                _ => lo_open = false,
+            }
+        }
+        if hi_open {
+            match g(hi + std::f64::consts::LN_2) {
+                Ok(v) if v.is_finite() => {
+                    hi += std::f64::consts::LN_2;
+                    fhi = v;
+                }
+                _ => hi_open = false,
+            }
+        }
     }
     if flo.is_nan() || fhi.is_nan() || flo * fhi >= 0.0 {
         return Err(Error::NoSolution(format!(

@@ -1,0 +1,253 @@
+"""zfactor: real-gas properties from equations of state, on NumPy arrays.
+
+The same engine as the ``zfactor`` command line: the fluid is read as ``--fluid`` or
+``--mix`` read it, the model built from the same catalogue, and every state goes through the
+same path as ``zfactor table``: a mixture is flashed where it may split (a split state gets
+no single-phase value), the stable root is computed for what is asked, and a state outside
+the model's range or in the solid region is flagged. Values are SI (K, Pa, kg/m3, J/mol,
+J/(mol K), m/s, K/Pa) unless a unit is given for the inputs.
+
+Example::
+
+    >>> import numpy as np, zfactor
+    >>> t = np.array([273.15, 300.0])
+    >>> zfactor.z(t, 50e5, fluid="methane", model="pr")      # doctest: +SKIP
+    array([0.8850..., 0.9162...])
+
+Caution: zfactor is a screening and design-support tool; pressure equipment, cylinders and
+relief systems must be designed to the applicable local codes and checked by a licensed
+engineer.
+"""
+
+from __future__ import annotations
+
+import warnings
+from typing import Any, Dict, Optional
+
+import numpy as np
+
+from . import _zfactor
+
+__all__ = [
+    "ZFactorWarning",
+    "properties",
+    "z",
+    "density",
+    "frame",
+    "pressure",
+    "model_ids",
+]
+
+__version__ = _zfactor.__version__
+
+# Properties computed only when asked for (the rest come from Z alone).
+_CALORIC = ("h", "s", "cp", "cv", "w", "jt", "phi")
+
+
+class ZFactorWarning(UserWarning):
+    """States outside a model's range, in the solid region, or without a single-phase value."""
+
+
+def model_ids() -> list:
+    """The model ids, as ``zfactor models`` lists them."""
+    return list(_zfactor.model_ids())
+
+
+def _flat(a: np.ndarray) -> np.ndarray:
+    # One contiguous, aligned float64 block (arrays from a pickle, as Dask workers receive
+    # them, can be misaligned).
+    return np.require(a, dtype=np.float64, requirements=["C", "A"]).ravel()
+
+
+def _to_si(values: Any, unit: Optional[str], quantity: str, ambient: str) -> np.ndarray:
+    arr = np.asarray(values, dtype=float)
+    if unit is None:
+        return arr
+    a, b = _zfactor.unit_map(quantity, unit, _zfactor.ambient_pressure(ambient))
+    return a * arr + b
+
+
+def properties(
+    t: Any,
+    p: Any,
+    *,
+    fluid: Optional[str] = None,
+    mix: Optional[str] = None,
+    model: str = "pr",
+    kij: Optional[str] = None,
+    t_unit: Optional[str] = None,
+    p_unit: Optional[str] = None,
+    ambient: str = "101.325 kPa",
+    everything: bool = True,
+    warn: bool = True,
+) -> Dict[str, Any]:
+    """Properties of a fluid at every (T, P), as a dict of arrays of the broadcast shape.
+
+    ``t`` and ``p`` broadcast against each other (NumPy rules); in K and Pa unless
+    ``t_unit``/``p_unit`` name a unit the command line accepts ("degC", "degF", "bar", "barg",
+    "psig", "MPa", ...; gauge units refer to ``ambient``). Give one of ``fluid`` (a component
+    name, alias, formula or CAS number) or ``mix`` ("methane=0.9,ethane=0.1"); ``kij`` sets
+    interaction parameters over the built-in ones ("methane-co2=0.1"). ``model`` is one id of
+    :func:`model_ids`.
+
+    Keys: ``z``, ``density`` (kg/m3), ``molar_density`` (mol/m3); with ``everything`` also
+    ``h``, ``s`` (J/mol, J/(mol K), on the fluid's zero), ``cp``, ``cv``, ``w``, ``jt`` and
+    ``phi`` (fugacity coefficients, one column per component); and per state ``phase``
+    ("vapor", "liquid", "supercritical", "gas", "two-phase"), ``flag`` (None inside the
+    model's range) and ``error`` (why a state has no value: NaN there). The basis is under
+    ``model``, ``model_name``, ``citation``, ``fluid``, ``components``, ``notes`` and
+    ``caution``. Flagged states and states without a value raise a :class:`ZFactorWarning`
+    (one for the call) unless ``warn`` is False.
+
+    A temperature or pressure that is NaN, infinite or not above zero raises ``ValueError``
+    naming its index; so do an unknown fluid or model, with the command line's message.
+
+    >>> r = properties(300.0, [1e5, 50e5], fluid="nitrogen", model="pr")   # doctest: +SKIP
+    >>> r["z"], r["phase"]                                                  # doctest: +SKIP
+    """
+    tk = _to_si(t, t_unit, "temperature", ambient)
+    pa = _to_si(p, p_unit, "pressure", ambient)
+    tk, pa = np.broadcast_arrays(tk, pa)
+    shape = tk.shape
+    flat_t = _flat(tk)
+    flat_p = _flat(pa)
+    raw = _zfactor.evaluate(
+        flat_t, flat_p, model, fluid=fluid, mix=mix, kij=kij, everything=everything
+    )
+    out: Dict[str, Any] = {}
+    for key in ("z", "density", "molar_density") + (_CALORIC if everything else ()):
+        v = raw[key]
+        out[key] = v.reshape(shape + v.shape[1:])
+    for key in ("phase", "flag", "error"):
+        out[key] = np.array(raw[key], dtype=object).reshape(shape)
+    for key in ("model", "model_name", "citation", "fluid", "components", "notes", "caution"):
+        out[key] = raw[key]
+    if warn:
+        _warn(raw, flat_t, flat_p)
+    return out
+
+
+def _warn(raw: Dict[str, Any], t: np.ndarray, p: np.ndarray) -> None:
+    for key, what in (("flag", "flagged"), ("error", "without a value")):
+        marked = [i for i, v in enumerate(raw[key]) if v]
+        if marked:
+            i = marked[0]
+            warnings.warn(
+                f"{len(marked)} of {len(t)} states {what} by model {raw['model']}; the first, "
+                f"T = {t[i]} K, P = {p[i]} Pa: {raw[key][i]}",
+                ZFactorWarning,
+                stacklevel=3,
+            )
+
+
+def z(t: Any, p: Any, **kwargs: Any) -> np.ndarray:
+    """Compression factor Z at every (T, P); only Z is computed (for a pure fluid with a
+    cubic model by the batch kernel, the same Z to round-off).
+
+    Arguments as :func:`properties`. NaN where a state has no single-phase value (a mixture
+    that splits), with a :class:`ZFactorWarning`.
+
+    >>> z([250.0, 300.0], 100e5, fluid="methane", model="pr")   # doctest: +SKIP
+    """
+    fast = _z_batch(t, p, **kwargs)
+    if fast is not None:
+        return fast
+    return properties(t, p, everything=False, **kwargs)["z"]
+
+
+def _z_batch(
+    t: Any,
+    p: Any,
+    *,
+    fluid: Optional[str] = None,
+    mix: Optional[str] = None,
+    model: str = "pr",
+    kij: Optional[str] = None,
+    t_unit: Optional[str] = None,
+    p_unit: Optional[str] = None,
+    ambient: str = "101.325 kPa",
+    warn: bool = True,
+) -> Optional[np.ndarray]:
+    # A pure fluid with a member of the cubic family: the batch kernel (eight states at a
+    # time; Z equal to the per-state path to round-off), with the same range flags.
+    tk = _to_si(t, t_unit, "temperature", ambient)
+    pa = _to_si(p, p_unit, "pressure", ambient)
+    tk, pa = np.broadcast_arrays(tk, pa)
+    found = _zfactor.z_batch(_flat(tk), _flat(pa), model, fluid=fluid, mix=mix, kij=kij)
+    if found is None:
+        return None
+    z_values, flags = found
+    if warn:
+        _warn({"flag": flags, "error": [], "model": model}, _flat(tk), _flat(pa))
+    return z_values.reshape(tk.shape)
+
+
+def density(t: Any, p: Any, **kwargs: Any) -> np.ndarray:
+    """Mass density (kg/m3) at every (T, P); arguments as :func:`properties`."""
+    return properties(t, p, everything=False, **kwargs)["density"]
+
+
+def pressure(
+    t: Any,
+    molar_density: Any,
+    *,
+    fluid: Optional[str] = None,
+    mix: Optional[str] = None,
+    model: str = "pr",
+    kij: Optional[str] = None,
+    warn: bool = True,
+) -> np.ndarray:
+    """Pressure (Pa) at every (T in K, molar density in mol/m3), broadcast; NaN where the
+    model has no single-phase state there (inside the two-phase region), with a
+    :class:`ZFactorWarning`. The inverse of :func:`properties`' ``molar_density``.
+
+    >>> rho = properties(300.0, 50e5, fluid="methane", model="pr")["molar_density"]  # doctest: +SKIP
+    >>> pressure(300.0, rho, fluid="methane", model="pr")                            # doctest: +SKIP
+    """
+    tk, rho = np.broadcast_arrays(np.asarray(t, dtype=float), np.asarray(molar_density, dtype=float))
+    shape = tk.shape
+    p, errors = _zfactor.pressure(
+        _flat(tk),
+        _flat(rho),
+        model,
+        fluid=fluid,
+        mix=mix,
+        kij=kij,
+    )
+    missing = [i for i, e in enumerate(errors) if e]
+    if warn and missing:
+        warnings.warn(
+            f"{len(missing)} of {len(errors)} states without a value: {errors[missing[0]]}",
+            ZFactorWarning,
+            stacklevel=2,
+        )
+    return p.reshape(shape)
+
+
+def frame(t: Any, p: Any, **kwargs: Any):
+    """The properties of :func:`properties` as a pandas DataFrame (one row per state, T and P
+    in K and Pa first), with the basis (model, citation, fluid, notes, caution) in
+    ``DataFrame.attrs``. Needs pandas (``pip install pandas``)."""
+    import pandas as pd
+
+    r = properties(t, p, **kwargs)
+    tk = _to_si(t, kwargs.get("t_unit"), "temperature", kwargs.get("ambient", "101.325 kPa"))
+    pa = _to_si(p, kwargs.get("p_unit"), "pressure", kwargs.get("ambient", "101.325 kPa"))
+    tk, pa = np.broadcast_arrays(tk, pa)
+    cols: Dict[str, Any] = {"T": tk.ravel(), "P": pa.ravel()}
+    for key in ("z", "density", "molar_density") + _CALORIC:
+        if key not in r:
+            continue
+        v = r[key]
+        if key == "phi":
+            flat = v.reshape(-1, v.shape[-1])
+            for j, comp in enumerate(r["components"]):
+                cols[f"phi_{comp}"] = flat[:, j]
+        else:
+            cols[key] = v.ravel()
+    for key in ("phase", "flag", "error"):
+        cols[key] = r[key].ravel()
+    df = pd.DataFrame(cols)
+    for key in ("model", "model_name", "citation", "fluid", "components", "notes", "caution"):
+        df.attrs[key] = r[key]
+    return df
