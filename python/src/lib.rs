@@ -196,11 +196,16 @@ fn z_batch<'py>(
             .map(|()| {
                 let check = zfactor::range::StateCheck::new(&built, &feed);
                 let r = eos::constants::R;
-                let flags: Vec<Option<String>> = t
+                // Only the flagged states, as (index, flag): a list of a million Nones would
+                // cost the caller more than the kernel.
+                let flags: Vec<(usize, String)> = t
                     .par_iter()
                     .zip(p.par_iter())
                     .zip(z.par_iter())
-                    .map(|((&t, &p), &z)| check.flag(t, p, p / (z * r * t)))
+                    .enumerate()
+                    .filter_map(|(i, ((&t, &p), &z))| {
+                        check.flag(t, p, p / (z * r * t)).map(|f| (i, f))
+                    })
                     .collect();
                 (z, flags)
             })
@@ -210,8 +215,8 @@ fn z_batch<'py>(
     Ok(Some((PyArray1::from_vec(py, z), flags)))
 }
 
-/// Z of every state and its flag.
-type ZAndFlags<'py> = (Bound<'py, PyArray1<f64>>, Vec<Option<String>>);
+/// Z of every state, and the flagged states as (index, flag).
+type ZAndFlags<'py> = (Bound<'py, PyArray1<f64>>, Vec<(usize, String)>);
 
 /// Pressures (Pa) and, per state, why there is none.
 type PressuresAndErrors<'py> = (Bound<'py, PyArray1<f64>>, Vec<Option<String>>);

@@ -176,9 +176,16 @@ def _z_batch(
     found = _zfactor.z_batch(_flat(tk), _flat(pa), model, fluid=fluid, mix=mix, kij=kij)
     if found is None:
         return None
-    z_values, flags = found
-    if warn:
-        _warn({"flag": flags, "error": [], "model": model}, _flat(tk), _flat(pa))
+    z_values, flagged = found
+    if warn and flagged:
+        i, flag = flagged[0]
+        ft, fp = _flat(tk), _flat(pa)
+        warnings.warn(
+            f"{len(flagged)} of {ft.size} states flagged by model {model}; the first, "
+            f"T = {ft[i]} K, P = {fp[i]} Pa: {flag}",
+            ZFactorWarning,
+            stacklevel=3,
+        )
     return z_values.reshape(tk.shape)
 
 

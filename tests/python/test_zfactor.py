@@ -173,3 +173,16 @@ def test_help_teaches_with_an_example():
     assert ">>>" in zfactor.z.__doc__
     assert ">>>" in zfactor.properties.__doc__
     assert "pr" in zfactor.model_ids() and "reference" in zfactor.model_ids()
+
+
+def test_the_fast_z_of_a_pure_fluid_warns_like_the_rest():
+    # Methane's triple point is 90.69 K (Setzmann & Wagner 1991, recalled from memory): at
+    # 80 K and 10 bar it is solid, which Peng-Robinson does not know; the state is flagged.
+    with pytest.warns(zfactor.ZFactorWarning, match="solid"):
+        z = zfactor.z([150.0, 80.0], 10e5, fluid="methane", model="pr")
+    assert np.isfinite(z).all()
+    r = zfactor.properties([150.0, 80.0], 10e5, fluid="methane", model="pr", warn=False)
+    assert r["flag"][0] is None and "solid" in r["flag"][1]
+    # The batch kernel's Newton root and the per-state closed-form root agree to round-off,
+    # which for a liquid's small Z is a few 1e-13 relative.
+    np.testing.assert_allclose(z, r["z"], rtol=1e-12)
