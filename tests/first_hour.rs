@@ -186,3 +186,47 @@ fn flash_labels_read_as_a_practitioner_writes_them() {
     assert!(out.contains("methane [mol/mol]"), "{out}");
     assert!(!out.contains(" x methane"), "{out}");
 }
+
+#[test]
+fn terminal_output_fits_a_hundred_columns_with_every_model() {
+    let gas = "methane=0.9,ethane=0.06,propane=0.03,co2=0.01";
+    let compress = [&COMPRESS[..], &["--isentropic-efficiency", "0.78"]].concat();
+    let runs: [&[&str]; 7] = [
+        &["state", "--fluid", "methane", "-t", "300 K", "-p", "50 bar"],
+        &["state", "--mix", gas, "-t", "300 K", "-p", "50 bar"],
+        &[
+            "vessel", "--fluid", "hydrogen", "--volume", "50 L", "-t", "15 degC", "-p", "200 barg",
+        ],
+        &[
+            "flow", "--fluid", "methane", "--flow", "10 kg/s", "-t", "15 degC", "-p", "60 bar",
+        ],
+        &compress,
+        &[
+            "relief", "--fluid", "propane", "-t", "80 degC", "-p", "20 bar",
+        ],
+        &[
+            "process",
+            "--fluid",
+            "nitrogen",
+            "--path",
+            "isenthalpic",
+            "-t",
+            "20 degC",
+            "-p",
+            "200 bar",
+            "--to-pressure",
+            "10 bar",
+        ],
+    ];
+    for args in runs {
+        let (code, out, err) = run(&[args, &["-m", "all"]].concat());
+        assert!(code == 0 || code == 3, "{args:?}: {err}");
+        let widest = out.lines().map(|l| l.chars().count()).max().unwrap_or(0);
+        assert!(
+            widest <= 100,
+            "{args:?}: a line of {widest} columns:\n{out}"
+        );
+        // Every model is still there, in a part of its own table if need be.
+        assert!(out.contains("pr78") && out.contains("ideal"), "{args:?}");
+    }
+}

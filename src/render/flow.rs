@@ -1,6 +1,6 @@
 //! Terminal table of `zfactor flow`.
 
-use crate::render::jobs::Grid;
+use crate::render::model_grid::Grid;
 use crate::render::number::sig;
 use crate::report::flow::FlowReport;
 

@@ -3,78 +3,8 @@
 //! struct is, and CSV with one row per model (nested fields flattened to dotted names).
 
 use crate::error::CliError;
-use crate::render::number::{opt, sig};
-use crate::report::jobs_common::Compared;
-use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
 use serde::Serialize;
 use serde_json::Value;
-
-const STYLE: TableStyle = TableStyle::new()
-    .top_border(LineStyle::none().fill('-').junction('-'))
-    .header_separator(LineStyle::none().fill('-').junction('-'))
-    .bottom_border(LineStyle::none().fill('-').junction('-'));
-
-/// A table with one column per model.
-pub struct Grid {
-    table: Table,
-    n: usize,
-}
-
-impl Grid {
-    /// A table with the model ids as column heads.
-    pub fn new(models: &[String]) -> Self {
-        let mut table = Table::new();
-        table
-            .load_style(STYLE)
-            .set_content_arrangement(ContentArrangement::Disabled);
-        let mut head = vec!["quantity".to_string(), "unit".to_string()];
-        head.extend(models.iter().cloned());
-        table.set_header(head);
-        Grid {
-            table,
-            n: models.len(),
-        }
-    }
-
-    /// One row of text cells.
-    pub fn row(&mut self, name: &str, unit: &str, cells: Vec<String>) {
-        let mut c = vec![name.to_string(), unit.to_string()];
-        c.extend(cells);
-        c.resize(self.n + 2, "-".to_string());
-        self.table.add_row(c);
-    }
-
-    /// One row of numbers, `scale` dividing SI values into the display unit.
-    pub fn nums(&mut self, name: &str, unit: &str, vals: &[Option<f64>], scale: f64) {
-        let cells = vals
-            .iter()
-            .map(|v| v.map_or_else(|| "-".to_string(), |v| sig(v / scale, 6)))
-            .collect();
-        self.row(name, unit, cells);
-    }
-
-    /// A compared value: the model's, the ideal gas's, and the ideal-gas error in percent.
-    pub fn compared(&mut self, name: &str, unit: &str, vals: &[Option<Compared>], scale: f64) {
-        let f = |g: &dyn Fn(&Compared) -> String| -> Vec<String> {
-            vals.iter()
-                .map(|v| v.as_ref().map_or_else(|| "-".to_string(), g))
-                .collect()
-        };
-        self.row(name, unit, f(&|c| sig(c.value / scale, 6)));
-        self.row("  ideal gas", unit, f(&|c| sig(c.ideal / scale, 6)));
-        self.row("  ideal-gas error", "%", f(&|c| opt(c.ideal_error_pct, 3)));
-    }
-
-    /// The table as text.
-    pub fn finish(mut self) -> String {
-        for (i, col) in self.table.column_iter_mut().enumerate() {
-            if i >= 2 {
-                col.set_cell_alignment(CellAlignment::Right);
-            }
-        }
-        format!("{}\n", self.table)
-    }
-}
 
 fn flatten(prefix: &str, v: &Value, out: &mut Vec<(String, String)>) {
     match v {

@@ -14,6 +14,7 @@ pub mod grid_table;
 pub mod jobs;
 pub mod json;
 pub mod kij;
+pub mod model_grid;
 pub mod notes;
 pub mod number;
 pub mod output;
@@ -23,6 +24,7 @@ pub mod saturation_csv;
 pub mod saturation_table;
 pub mod table;
 pub mod vessel;
+pub mod wrap;
 
 use crate::cli::Format;
 use crate::error::CliError;

@@ -22,7 +22,7 @@ pub trait Output: Serialize {
 /// Prints `report` in `format`.
 pub fn render<R: Output>(report: &R, format: Format) -> Result<(), CliError> {
     let text = match format {
-        Format::Table => report.text(),
+        Format::Table => crate::render::wrap::fold(&report.text()),
         Format::Csv => report.csv()?,
         Format::Json => json::to_string(report)?,
     };

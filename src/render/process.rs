@@ -1,6 +1,6 @@
 //! Terminal tables of `zfactor process` and `zfactor relief`.
 
-use crate::render::jobs::Grid;
+use crate::render::model_grid::Grid;
 use crate::render::number::sig;
 use crate::report::jobs_common::Compared;
 use crate::report::process::{ProcessReport, ProcessResult};

@@ -1,6 +1,7 @@
 //! Terminal tables. State results put the models side by side, one column each, so the
 //! ideal-gas answer and every real-gas model can be read across one row.
 
+use crate::render::model_grid::Grid;
 use crate::render::number::{opt, sig};
 use crate::report::fluids::FluidsReport;
 use crate::report::state::StateReport;
@@ -79,14 +80,10 @@ pub fn state(r: &StateReport) -> String {
         }
     }
 
-    let mut t = new_table();
-    let mut header = vec!["property".to_string(), "unit".to_string()];
-    header.extend(r.results.iter().map(|m| m.model.clone()));
-    t.set_header(header);
-    let row = |t: &mut Table, name: &str, unit: &str, f: &dyn Fn(usize) -> String| {
-        let mut cells = vec![name.to_string(), unit.to_string()];
-        cells.extend((0..r.results.len()).map(f));
-        t.add_row(cells);
+    let models: Vec<String> = r.results.iter().map(|m| m.model.clone()).collect();
+    let mut t = Grid::labelled("property", &models);
+    let row = |t: &mut Grid, name: &str, unit: &str, f: &dyn Fn(usize) -> String| {
+        t.row(name, unit, (0..r.results.len()).map(f).collect());
     };
     let res = &r.results;
     row(&mut t, "phase", "", &|i| res[i].phase.clone());
@@ -157,8 +154,7 @@ pub fn state(r: &StateReport) -> String {
             opt(res[i].fugacity.get(k).and_then(|f| f.phi), 6)
         });
     }
-    right_align(&mut t, 2);
-    out.push_str(&format!("{t}\n"));
+    out.push_str(&t.finish());
     let notes = crate::render::notes::grouped(
         res.iter().map(|m| (m.model.as_str(), m.notes.as_slice())),
         |_| false,

@@ -1,6 +1,6 @@
 //! Terminal table of `zfactor vessel`.
 
-use crate::render::jobs::Grid;
+use crate::render::model_grid::Grid;
 use crate::render::number::sig;
 use crate::report::vessel::VesselReport;
 use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};

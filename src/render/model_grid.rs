@@ -1,0 +1,117 @@
+//! Terminal tables with one column per model, the quantity and its unit first. More than
+//! [`MAX_SIDE_BY_SIDE`] models are shown in parts one under the other, so that a line stays
+//! within about 100 columns (common practice for terminal output).
+
+use crate::render::number::{opt, sig};
+use crate::report::jobs_common::Compared;
+use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
+
+/// Models shown side by side in one part of a table.
+pub const MAX_SIDE_BY_SIDE: usize = 4;
+
+/// The widest a table line should be, in characters (a terminal of 100 columns).
+pub const WIDTH: usize = 100;
+
+const STYLE: TableStyle = TableStyle::new()
+    .top_border(LineStyle::none().fill('-').junction('-'))
+    .header_separator(LineStyle::none().fill('-').junction('-'))
+    .bottom_border(LineStyle::none().fill('-').junction('-'));
+
+/// A table with one column per model.
+pub struct Grid {
+    head: Vec<String>,
+    rows: Vec<Vec<String>>,
+    n: usize,
+}
+
+impl Grid {
+    /// A table with the model ids as column heads.
+    pub fn new(models: &[String]) -> Self {
+        Self::labelled("quantity", models)
+    }
+
+    /// A table whose first column is headed `label`, with the model ids as column heads.
+    pub fn labelled(label: &str, models: &[String]) -> Self {
+        let mut head = vec![label.to_string(), "unit".to_string()];
+        head.extend(models.iter().cloned());
+        Grid {
+            head,
+            rows: Vec::new(),
+            n: models.len(),
+        }
+    }
+
+    /// One row of text cells.
+    pub fn row(&mut self, name: &str, unit: &str, cells: Vec<String>) {
+        let mut c = vec![name.to_string(), unit.to_string()];
+        c.extend(cells);
+        c.resize(self.n + 2, "-".to_string());
+        self.rows.push(c);
+    }
+
+    /// One row of numbers, `scale` dividing SI values into the display unit.
+    pub fn nums(&mut self, name: &str, unit: &str, vals: &[Option<f64>], scale: f64) {
+        let cells = vals
+            .iter()
+            .map(|v| v.map_or_else(|| "-".to_string(), |v| sig(v / scale, 6)))
+            .collect();
+        self.row(name, unit, cells);
+    }
+
+    /// A compared value: the model's, the ideal gas's, and the ideal-gas error in percent.
+    pub fn compared(&mut self, name: &str, unit: &str, vals: &[Option<Compared>], scale: f64) {
+        let f = |g: &dyn Fn(&Compared) -> String| -> Vec<String> {
+            vals.iter()
+                .map(|v| v.as_ref().map_or_else(|| "-".to_string(), g))
+                .collect()
+        };
+        self.row(name, unit, f(&|c| sig(c.value / scale, 6)));
+        self.row("  ideal gas", unit, f(&|c| sig(c.ideal / scale, 6)));
+        self.row("  ideal-gas error", "%", f(&|c| opt(c.ideal_error_pct, 3)));
+    }
+
+    /// The table as text: models side by side, at most [`MAX_SIDE_BY_SIDE`] and no more than
+    /// fit in [`WIDTH`] columns, in parts of nearly equal numbers of models one under the
+    /// other, each with the row labels.
+    pub fn finish(self) -> String {
+        let most = self.n.clamp(1, MAX_SIDE_BY_SIDE);
+        let fits = (1..=most)
+            .rev()
+            .find(|&k| self.parts(k).iter().all(|p| widest(p) <= WIDTH))
+            .unwrap_or(1);
+        self.parts(fits).concat()
+    }
+
+    /// The parts with at most `k` models each, as text.
+    fn parts(&self, k: usize) -> Vec<String> {
+        let parts = self.n.div_ceil(k).max(1);
+        let per_part = self.n.div_ceil(parts).max(1);
+        (0..parts)
+            .map(|part| {
+                let cols = 2 + part * per_part..(2 + (part + 1) * per_part).min(self.n + 2);
+                let pick = |r: &[String]| -> Vec<String> {
+                    r[..2].iter().chain(&r[cols.clone()]).cloned().collect()
+                };
+                let mut table = Table::new();
+                table
+                    .load_style(STYLE)
+                    .set_content_arrangement(ContentArrangement::Disabled)
+                    .set_header(pick(&self.head));
+                for r in &self.rows {
+                    table.add_row(pick(r));
+                }
+                for (i, col) in table.column_iter_mut().enumerate() {
+                    if i >= 2 {
+                        col.set_cell_alignment(CellAlignment::Right);
+                    }
+                }
+                format!("{table}\n")
+            })
+            .collect()
+    }
+}
+
+/// The longest line of a text, in characters.
+fn widest(text: &str) -> usize {
+    text.lines().map(|l| l.chars().count()).max().unwrap_or(0)
+}
