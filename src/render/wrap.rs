@@ -1,18 +1,26 @@
 //! Prose lines of terminal output (notes, cautions, basis lines) folded at word boundaries so
 //! that they stay within the width of the tables ([`crate::render::model_grid::WIDTH`]); a
-//! folded line continues indented under its start. Data formats are never folded.
+//! folded line continues indented under its start. Tables are left whole: a table of the
+//! house style is a rule of dashes, its header, a rule, its rows and a closing rule. Data
+//! formats are never folded.
 
 use crate::render::model_grid::WIDTH;
 
 /// `text` with every line longer than [`WIDTH`] folded at spaces.
 pub fn fold(text: &str) -> String {
     let mut out = String::with_capacity(text.len() + text.len() / 50);
+    // Rules seen in the current table (0: outside a table).
+    let mut rules = 0;
     for line in text.split_inclusive('\n') {
         let (body, end) = match line.strip_suffix('\n') {
             Some(b) => (b, "\n"),
             None => (line, ""),
         };
-        if body.chars().count() <= WIDTH {
+        let rule = !body.is_empty() && body.chars().all(|c| c == '-');
+        if rule {
+            rules = (rules + 1) % 3;
+        }
+        if rule || rules > 0 || body.chars().count() <= WIDTH {
             out.push_str(line);
             continue;
         }
@@ -58,5 +66,16 @@ mod tests {
         // A word longer than the width stays whole on its own line.
         let unbroken = "x".repeat(WIDTH + 20);
         assert_eq!(fold(&unbroken), unbroken);
+    }
+
+    #[test]
+    fn tables_are_left_whole() {
+        let rule = "-".repeat(WIDTH + 10);
+        let row = format!(" {} ", "12.5     ".repeat(12));
+        let table = format!("{rule}\n head  a  b\n{rule}\n{row}\n{row}\n{rule}\n");
+        let note = format!("note: {}", "word ".repeat(30));
+        let folded = fold(&format!("{table}{note}\n"));
+        assert!(folded.starts_with(&table), "{folded}");
+        assert!(folded[table.len()..].lines().count() > 1);
     }
 }
