@@ -325,7 +325,7 @@ impl<'a> TableWriter<'a> {
                 let l = layout();
                 let mut head = String::new();
                 for (k, v) in basis_lines(basis) {
-                    head.push_str(&format!("{k}: {v}\n"));
+                    head.push_str(&crate::render::wrap::fold(&format!("{k}: {v}\n")));
                 }
                 head.push('\n');
                 head.push_str(&l.rule());
