@@ -5,10 +5,17 @@
 //! JSON. Nothing here does physics.
 //!
 //! - [`cli`]: the clap definitions of every command and option.
-//! - [`units`], [`feed`]: quantities with units and compositions, read once into SI.
-//! - [`models`]: model ids to models; [`phase_screen`]: which states of a grid are flashed.
+//! - [`units`], [`feed`], [`feed_input`]: quantities with units and compositions, read once
+//!   into SI; [`mix_file`], [`sheet_rows`], [`xlsx_rows`]: gas analyses and sheets from files.
+//! - [`models`]: model ids to models; [`phase_screen`]: which states of a grid are flashed;
+//!   [`state_arrays`]: one model at many states (the table's per-state path and the Python
+//!   binding's).
 //! - [`commands`]: one function per command, returning a report.
 //! - [`report`]: the report structs; [`render`]: one file per output format.
+//! - [`error`]: the typed error and its exit code.
+//!
+//! The library is also what the Python binding (`python/`) calls; see DEVELOPERS.md for the
+//! map of the house.
 
 // User input must never panic: no unwrap or expect outside tests.
 #![cfg_attr(not(test), deny(clippy::unwrap_used, clippy::expect_used))]
