@@ -12,6 +12,7 @@ pub mod grid_args;
 pub mod process_args;
 pub mod relief_args;
 pub mod saturation_args;
+pub mod serve_args;
 pub mod shared_args;
 pub mod vessel_args;
 pub use equilibrium_args::{EnvelopeArgs, FlashArgs};
@@ -72,6 +73,9 @@ pub enum Command {
     /// The phase envelope of a mixture (or the vapour-pressure curve of a pure fluid) with
     /// its critical point, cricondenbar and cricondentherm, and a chart.
     Envelope(EnvelopeArgs),
+    /// A local web page (and its JSON API) for states, model comparisons, envelopes and
+    /// tables, served on this machine at the address printed.
+    Serve(serve_args::ServeArgs),
 }
 
 /// Arguments of `zfactor models`.

@@ -13,6 +13,7 @@
 //! - [`commands`]: one function per command, returning a report.
 //! - [`report`]: the report structs; [`render`]: one file per output format.
 //! - [`error`]: the typed error and its exit code.
+//! - [`serve`]: `zfactor serve`, the local web page and its JSON API over the same commands.
 //!
 //! The library is also what the Python binding (`python/`) calls; see DEVELOPERS.md for the
 //! map of the house.
@@ -40,6 +41,7 @@ pub mod progress;
 pub mod range;
 pub mod render;
 pub mod report;
+pub mod serve;
 pub mod sheet_rows;
 pub mod solid_check;
 pub mod state_arrays;
@@ -78,6 +80,9 @@ where
     output_file::clean_up_on_interrupt();
     if let Some(path) = &cli.components {
         components_file::load(path)?;
+    }
+    if let cli::Command::Serve(args) = &cli.command {
+        return serve::server::run(args);
     }
     let code = commands::dispatch(&cli)?;
     let notes = input_notes::take();

@@ -66,6 +66,10 @@ pub fn dispatch(cli: &Cli) -> Result<Exit, CliError> {
         Command::Vessel(args) => job(&vessel::run(args)?, args.shared.format),
         Command::Flash(args) => flash::dispatch(args),
         Command::Envelope(args) => envelope::dispatch(args),
+        // Started by `crate::run` before any command (it serves the commands).
+        Command::Serve(_) => Err(CliError::BadInput(
+            "serve is started by zfactor::run".to_string(),
+        )),
     }
 }
 

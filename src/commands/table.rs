@@ -79,7 +79,40 @@ const CHUNK: usize = 1 << 16;
 /// and writes it in the chosen format as it goes, so that memory does not grow with the
 /// grid.
 fn stream(args: &TableArgs) -> Result<Exit, CliError> {
-    use std::io::Write;
+    let warnings = match &args.output {
+        Some(path) => {
+            // The table reads no file, so there is no input it could overwrite.
+            let mut warnings = Vec::new();
+            crate::output_file::write_with(Path::new(path), args.force, &[], |f, tmp| {
+                let mut w = std::io::BufWriter::with_capacity(1 << 20, f);
+                warnings = write(args, &mut w, Some(tmp))?;
+                Ok(())
+            })?;
+            eprintln!("wrote {path}");
+            warnings
+        }
+        None => {
+            let stdout = std::io::stdout();
+            let mut w = std::io::BufWriter::with_capacity(1 << 20, stdout.lock());
+            write(args, &mut w, None)?
+        }
+    };
+    for w in &warnings {
+        eprintln!("warning: {w}");
+    }
+    if args.format != TableFormat::Table {
+        eprintln!("caution: {}", crate::CAUTION);
+    }
+    Ok(super::exit_for(&warnings))
+}
+
+/// Computes the table of `args` and writes it to `out` in `args.format` (an .xlsx workbook
+/// to the file `xlsx`); returns the warnings of the run. The web API writes its tables here.
+pub fn write(
+    args: &TableArgs,
+    out: &mut dyn std::io::Write,
+    xlsx: Option<&Path>,
+) -> Result<Vec<String>, CliError> {
     let plan = Plan::new(args)?;
     let total = plan.total();
     if args.format == TableFormat::Xlsx && total >= XLSX_MAX_ROWS {
@@ -93,57 +126,33 @@ fn stream(args: &TableArgs) -> Result<Exit, CliError> {
     let columns = plan.columns();
     let bar = crate::progress::bar(total, "computing");
     let mut tally = Tally::default();
-    let mut write_all = |out: &mut dyn Write, xlsx: Option<&Path>| -> Result<(), CliError> {
-        let first_end = CHUNK.min(total);
-        let first = plan.rows(0..first_end, &bar);
-        tally.add(&first);
-        let mut w = crate::render::grid_table::TableWriter::new(
-            args.format,
-            &plan.basis,
-            &columns,
-            phase,
-            &first,
-            first_end == total,
-            out,
-        )?;
-        w.rows(&first, out)?;
-        drop(first);
-        let mut start = first_end;
-        while start < total {
-            let end = (start + CHUNK).min(total);
-            let rows = plan.rows(start..end, &bar);
-            tally.add(&rows);
-            w.rows(&rows, out)?;
-            start = end;
-        }
-        w.finish(&tally.warnings(total), out, xlsx)?;
-        out.flush().map_err(|e| CliError::Output(e.to_string()))
-    };
-    match &args.output {
-        Some(path) => {
-            // The table reads no file, so there is no input it could overwrite.
-            crate::output_file::write_with(Path::new(path), args.force, &[], |f, tmp| {
-                let mut w = std::io::BufWriter::with_capacity(1 << 20, f);
-                write_all(&mut w, Some(tmp))
-            })?;
-            crate::progress::finish(bar);
-            eprintln!("wrote {path}");
-        }
-        None => {
-            let stdout = std::io::stdout();
-            let mut w = std::io::BufWriter::with_capacity(1 << 20, stdout.lock());
-            write_all(&mut w, None)?;
-            crate::progress::finish(bar);
-        }
+    let first_end = CHUNK.min(total);
+    let first = plan.rows(0..first_end, &bar);
+    tally.add(&first);
+    let mut w = crate::render::grid_table::TableWriter::new(
+        args.format,
+        &plan.basis,
+        &columns,
+        phase,
+        &first,
+        first_end == total,
+        out,
+    )?;
+    w.rows(&first, out)?;
+    drop(first);
+    let mut start = first_end;
+    while start < total {
+        let end = (start + CHUNK).min(total);
+        let rows = plan.rows(start..end, &bar);
+        tally.add(&rows);
+        w.rows(&rows, out)?;
+        start = end;
     }
     let warnings = tally.warnings(total);
-    for w in &warnings {
-        eprintln!("warning: {w}");
-    }
-    if args.format != TableFormat::Table {
-        eprintln!("caution: {}", crate::CAUTION);
-    }
-    Ok(super::exit_for(&warnings))
+    w.finish(&warnings, out, xlsx)?;
+    out.flush().map_err(|e| CliError::Output(e.to_string()))?;
+    crate::progress::finish(bar);
+    Ok(warnings)
 }
 
 /// Counts of the rows that need a warning.
