@@ -43,6 +43,7 @@ pub mod render;
 pub mod report;
 pub mod serve;
 pub mod sheet_rows;
+pub mod shown_units;
 pub mod solid_check;
 pub mod state_arrays;
 pub mod table_property;

@@ -367,8 +367,8 @@ pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
             })?;
             let form = f.formulation();
             let name = format!("{} ({})", form.title, form.fluid);
-            let citation =
-                eos::catalogue::find(id).map_or_else(String::new, |m| m.citation.to_string());
+            // The equation of this fluid, not the catalogue's list of every fluid's.
+            let citation = form.citation.clone();
             return Ok(BuiltModel {
                 engine: Engine::Helmholtz(Box::new(f.clone())),
                 id: id.to_string(),

@@ -230,3 +230,156 @@ fn terminal_output_fits_a_hundred_columns_with_every_model() {
         assert!(out.contains("pr78") && out.contains("ideal"), "{args:?}");
     }
 }
+
+/// A comparison cites the reference equation it used, not the catalogue's list of every
+/// fluid's (nitrogen: Span et al., J. Phys. Chem. Ref. Data 29 (2000) 1361-1433), and the
+/// 12-term equation its own paper (Span and Wagner, Int. J. Thermophys. 24 (2003)).
+#[test]
+fn a_comparison_cites_only_the_reference_equation_it_used() {
+    let (code, out, err) = run(&[
+        "compare", "--fluid", "nitrogen", "-t", "200 K", "-p", "10 bar", "-m", "pr,sw12", "-f",
+        "json",
+    ]);
+    assert_eq!(code, 0, "{err}");
+    let v: Value = serde_json::from_str(&out).unwrap();
+    let cited = v["reference"]["citation"].as_str().unwrap();
+    assert!(
+        cited.contains("Span, E.W. Lemmon") && cited.contains("(2000)"),
+        "{cited}"
+    );
+    for other in ["Setzmann", "IAPWS", "Leachman", "Tegeler", "(1996)"] {
+        assert!(!cited.contains(other), "{cited}");
+    }
+    let sw12 = v["models"][1]["citation"].as_str().unwrap();
+    assert!(sw12.contains("Int. J. Thermophys. 24 (2003)"), "{sw12}");
+    let (_, text, _) = run(&[
+        "compare", "--fluid", "methane", "-t", "200 K", "-p", "10 bar",
+    ]);
+    let source = text
+        .lines()
+        .find(|l| l.starts_with("reference source:"))
+        .unwrap();
+    assert!(
+        source.contains("Setzmann") && !source.contains("Span"),
+        "{source}"
+    );
+}
+
+/// A row of a terminal table: its cells split on runs of spaces.
+fn row<'a>(text: &'a str, label: &str) -> Vec<&'a str> {
+    let line = text
+        .lines()
+        .find(|l| l.trim_start().starts_with(label))
+        .unwrap_or_else(|| panic!("no row {label:?} in\n{text}"));
+    line[line.find(label).unwrap() + label.len()..]
+        .split_whitespace()
+        .collect()
+}
+
+/// Results come back in the temperature scale the user typed, a temperature's ideal-gas
+/// error is a difference in K (a percentage of an absolute temperature means nothing on
+/// the Celsius scale), inputs are echoed as typed, and standard volumes say their base
+/// unit (Sm3 at 15 degC, ISO 13443; Nm3 at 0 degC; scf at 60 degF; common practice).
+#[test]
+fn job_tables_speak_the_users_units() {
+    let (code, out, err) = run(&[
+        "vessel",
+        "--fluid",
+        "nitrogen",
+        "--volume",
+        "50 L",
+        "-p",
+        "200 barg",
+        "-t",
+        "15 degC",
+        "--vent-to",
+        "1 atm",
+        "-m",
+        "pr",
+    ]);
+    assert!(code == 0 || code == 3, "{err}");
+    assert!(
+        out.contains("vessel 50 L at 15 degC, 200 barg (201.013 bar abs)"),
+        "{out}"
+    );
+    let vented = row(&out, "vented: final gas temperature");
+    assert_eq!(vented[0], "degC");
+    let t: f64 = vented[1].parse().unwrap();
+    assert!((-200.0..-190.0).contains(&t), "{t}");
+    // The first "ideal-gas error" row after the vented temperature and its ideal-gas row.
+    let after = &out[out.find("vented: final gas temperature").unwrap()..];
+    let error = row(after, "ideal-gas error");
+    assert_eq!(error[0], "K", "{after}");
+    assert_eq!(row(&out, "standard volume")[0], "Sm3");
+
+    let (code, out, err) = run(&[
+        &COMPRESS[..],
+        &["--polytropic-efficiency", "78%", "-m", "pr"],
+    ]
+    .concat());
+    assert_eq!(code, 0, "{err}");
+    assert!(
+        out.contains("suction 30 barg, 25 degC (31.0132 bar abs)"),
+        "{out}"
+    );
+    assert_eq!(row(&out, "discharge temperature")[0], "degC");
+    assert_eq!(row(&out, "T2 shortcut, cp0/cv0")[0], "degC");
+    let after = &out[out.find("discharge temperature").unwrap()..];
+    assert_eq!(row(after, "ideal-gas error")[0], "K");
+
+    let (code, out, err) = run(&[
+        "flow",
+        "--fluid",
+        "methane",
+        "--flow",
+        "10 MMscfd",
+        "-p",
+        "50 barg",
+        "-t",
+        "40 degF",
+        "-m",
+        "pr",
+    ]);
+    assert!(code == 0 || code == 3, "{err}");
+    assert_eq!(row(&out, "volume flow at base 0degC")[0], "Nm3/h");
+    assert_eq!(row(&out, "volume flow at base 15degC")[0], "Sm3/h");
+    assert_eq!(
+        row(&out, "volume flow at base 60degF-14.696psia")[0],
+        "scf/h"
+    );
+    // 10 MMscfd at its own base is 10 MMscfd, 416,667 scf/h.
+    assert_eq!(row(&out, "in MMscfd"), ["MMscf/d", "10.0000"]);
+    assert_eq!(
+        row(&out, "volume flow at base 60degF-14.696psia")[1],
+        "416667"
+    );
+    assert!(
+        out.contains("actual volume flow at 40 degF, 50 barg"),
+        "{out}"
+    );
+    assert!(out.contains("(60.00 degF, 101.325 kPa)"), "{out}");
+
+    let (_, out, _) = run(&[
+        "relief", "--fluid", "methane", "-p", "50 barg", "-t", "40 degC", "-m", "pr",
+    ]);
+    assert!(
+        out.contains("relieving conditions 40 degC, 50 barg (51.0132 bar abs)"),
+        "{out}"
+    );
+    let (_, out, _) = run(&[
+        "process",
+        "--fluid",
+        "methane",
+        "--path",
+        "isentropic",
+        "-t",
+        "25 degC",
+        "-p",
+        "50 barg",
+        "--to-pressure",
+        "10 barg",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(row(&out, "end temperature")[0], "degC");
+}

@@ -69,6 +69,9 @@ pub fn run(args: &CompressArgs) -> Result<CompressReport, CliError> {
         tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
         fluid: jc::fluid_report(&feed),
         input: CompressInput {
+            suction_pressure: args.suction_pressure.clone(),
+            suction_temperature: args.suction_temperature.clone(),
+            discharge_pressure: args.discharge_pressure.clone(),
             suction_pressure_pa: p1,
             suction_temperature_k: t1,
             discharge_pressure_pa: p2,

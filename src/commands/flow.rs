@@ -52,6 +52,8 @@ pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
         fluid: jc::fluid_report(&feed),
         input: FlowInput {
             flow: args.flow.clone(),
+            temperature: args.temperature.clone(),
+            pressure: args.pressure.clone(),
             kind,
             value_si,
             base: b,

@@ -71,6 +71,10 @@ pub fn run(args: &ProcessArgs) -> Result<ProcessReport, CliError> {
         fluid: jc::fluid_report(&feed),
         input: ProcessInput {
             path: path.as_str(),
+            temperature: args.temperature.clone(),
+            pressure: args.pressure.clone(),
+            to_temperature: args.to_temperature.clone(),
+            to_pressure: args.to_pressure.clone(),
             temperature_k: t1,
             pressure_pa: p1,
             end_temperature_k: et,

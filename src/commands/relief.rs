@@ -37,6 +37,8 @@ pub fn run(args: &ReliefArgs) -> Result<ReliefReport, CliError> {
         tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
         fluid: jc::fluid_report(&feed),
         input: ReliefInput {
+            temperature: args.temperature.clone(),
+            pressure: args.pressure.clone(),
             temperature_k: t,
             pressure_pa: p,
             ambient_pressure_pa: amb,

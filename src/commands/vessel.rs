@@ -93,6 +93,9 @@ pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
         tool: format!("zfactor {}", env!("CARGO_PKG_VERSION")),
         fluid: jc::fluid_report(&feed),
         input: VesselInput {
+            volume: args.volume.clone(),
+            temperature: args.temperature.clone(),
+            pressure: args.pressure.clone(),
             volume_m3: input.v,
             temperature_k: input.t,
             pressure_pa: input.p,

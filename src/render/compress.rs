@@ -4,16 +4,20 @@ use crate::render::model_grid::Grid;
 use crate::render::number::sig;
 use crate::report::compress::CompressReport;
 use crate::report::jobs_common::Compared;
-use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
+use crate::shown_units::TemperatureScale;
+use crate::units::PA_PER_BAR;
 
 /// The compressor report as text.
 pub fn table(r: &CompressReport) -> String {
     let i = &r.input;
     let mut out = format!("{}\n", r.fluid.label);
+    let scale = TemperatureScale::of_input(&i.suction_temperature);
     out.push_str(&format!(
-        "suction {} bar abs, {} degC; discharge {} bar abs (ratio {}); {} efficiency {}\n",
+        "suction {}, {} ({} bar abs); discharge {} ({} bar abs, ratio {}); {} efficiency {}\n",
+        i.suction_pressure.trim(),
+        i.suction_temperature.trim(),
         sig(i.suction_pressure_pa / PA_PER_BAR, 6),
-        sig(i.suction_temperature_k - KELVIN_AT_0_DEGC, 5),
+        i.discharge_pressure.trim(),
         sig(i.discharge_pressure_pa / PA_PER_BAR, 6),
         sig(i.pressure_ratio, 4),
         i.efficiency_kind,
@@ -40,11 +44,10 @@ pub fn table(r: &CompressReport) -> String {
     let num = |f: &dyn Fn(&crate::report::compress::CompressResult) -> f64| {
         res.iter().map(|m| Some(f(m))).collect::<Vec<_>>()
     };
-    g.compared(
+    g.compared_temperature(
         "discharge temperature",
-        "K",
+        scale,
         &col(&|m| Compared::new(m.discharge_temperature_k, m.discharge_temperature_ideal_k)),
-        1.0,
     );
     g.row(
         "  discharge phase",
@@ -82,11 +85,10 @@ pub fn table(r: &CompressReport) -> String {
         1.0,
     );
     g.nums("Schultz f", "-", &num(&|m| m.schultz_f), 1.0);
-    g.nums(
+    g.temperatures(
         "Schultz discharge T",
-        "K",
+        scale,
         &num(&|m| m.schultz_discharge_temperature_k),
-        1.0,
     );
     g.nums(
         "isentropic efficiency",
@@ -132,17 +134,15 @@ pub fn table(r: &CompressReport) -> String {
         &num(&|m| m.exponents_discharge.isentropic_temperature_exponent),
         1.0,
     );
-    g.nums(
+    g.temperatures(
         "T2 shortcut, cp0/cv0",
-        "K",
+        scale,
         &num(&|m| m.shortcuts[0].discharge_temperature_k),
-        1.0,
     );
-    g.nums(
+    g.temperatures(
         "T2 shortcut, mean k_T",
-        "K",
+        scale,
         &num(&|m| m.shortcuts[1].discharge_temperature_k),
-        1.0,
     );
     if res.iter().any(|m| m.power_w.is_some()) {
         let opt = |f: &dyn Fn(&crate::report::compress::CompressResult) -> Option<Compared>| {
@@ -167,6 +167,6 @@ pub fn table(r: &CompressReport) -> String {
     if let Some(m) = res.first() {
         out.push_str(&format!("method: {}\n", m.method));
     }
-    out.push_str("ideal-gas error = (ideal-gas answer - model answer) / model answer.\n");
+    out.push_str(crate::render::model_grid::IDEAL_ERROR_NOTE);
     out
 }

@@ -1,18 +1,21 @@
 //! Terminal table of `zfactor flow`.
 
 use crate::render::model_grid::Grid;
-use crate::render::number::sig;
+use crate::render::number::{fixed, sig};
 use crate::report::flow::FlowReport;
+use crate::shown_units::{is_field_base, standard_volume_unit, TemperatureScale};
 
 /// The flow report as text.
 pub fn table(r: &FlowReport) -> String {
     let mut out = format!("{}\n", r.fluid.label);
     out.push_str(&format!("flow {} ({})", r.input.flow, r.input.kind));
+    let scale = TemperatureScale::of_option(r.input.temperature.as_deref());
     if let Some(b) = &r.input.base {
         out.push_str(&format!(
-            ", base {} ({} K, {} kPa)",
+            ", base {} ({} {}, {} kPa)",
             b.id,
-            sig(b.temperature_k, 6),
+            fixed(scale.from_kelvin(b.temperature_k), 2),
+            scale.label(),
             sig(b.pressure_pa / 1e3, 6)
         ));
     }
@@ -36,23 +39,37 @@ pub fn table(r: &FlowReport) -> String {
     );
     if let Some(first) = res.first() {
         for (k, v) in first.volumes.iter().enumerate() {
-            let name = if v.base == "actual" {
-                format!(
-                    "actual volume flow at {} K, {} kPa",
-                    sig(v.temperature_k, 5),
-                    sig(v.pressure_pa / 1e3, 6)
-                )
+            let flows = res
+                .iter()
+                .map(|m| m.volumes.get(k).map(|x| x.volume_flow_m3_s))
+                .collect::<Vec<_>>();
+            if v.base == "actual" {
+                let at = match (&r.input.temperature, &r.input.pressure) {
+                    (Some(t), Some(p)) => format!("{}, {}", t.trim(), p.trim()),
+                    _ => format!(
+                        "{} {}, {} kPa",
+                        fixed(scale.from_kelvin(v.temperature_k), 2),
+                        scale.label(),
+                        sig(v.pressure_pa / 1e3, 6)
+                    ),
+                };
+                let name = format!("actual volume flow at {at}");
+                g.compared(&name, "m3/h", &flows, 1.0 / 3600.0);
             } else {
-                format!("volume flow at base {}", v.base)
-            };
-            g.compared(
-                &name,
-                "m3/h",
-                &res.iter()
-                    .map(|m| m.volumes.get(k).map(|x| x.volume_flow_m3_s))
-                    .collect::<Vec<_>>(),
-                1.0 / 3600.0,
-            );
+                let (unit, m3) = standard_volume_unit(&v.base);
+                let name = format!("volume flow at base {}", v.base);
+                g.compared(&name, &format!("{unit}/h"), &flows, m3 / 3600.0);
+                if is_field_base(&v.base) {
+                    g.nums(
+                        "  in MMscfd",
+                        "MMscf/d",
+                        &res.iter()
+                            .map(|m| m.volumes.get(k).map(|x| x.volume_flow_m3_s.value))
+                            .collect::<Vec<_>>(),
+                        1e6 * m3 / 86_400.0,
+                    );
+                }
+            }
             g.nums(
                 "  Z there",
                 "-",
@@ -94,6 +111,6 @@ pub fn table(r: &FlowReport) -> String {
     out.push_str(
         "every volume states its base; Z at each base is the model's own (ideal gas: 1).\n",
     );
-    out.push_str("ideal-gas error = (ideal-gas answer - model answer) / model answer.\n");
+    out.push_str(crate::render::model_grid::IDEAL_ERROR_NOTE);
     out
 }

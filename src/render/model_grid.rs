@@ -2,12 +2,17 @@
 //! [`MAX_SIDE_BY_SIDE`] models are shown in parts one under the other, so that a line stays
 //! within about 100 columns (common practice for terminal output).
 
-use crate::render::number::{opt, sig};
+use crate::render::number::{fixed, opt, sig};
 use crate::report::jobs_common::Compared;
+use crate::shown_units::TemperatureScale;
 use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
 
 /// Models shown side by side in one part of a table.
 pub const MAX_SIDE_BY_SIDE: usize = 4;
+
+/// The note under a table of compared values.
+pub const IDEAL_ERROR_NOTE: &str = "ideal-gas error = (ideal-gas answer - model answer) / model \
+answer; for a temperature, the difference in K.\n";
 
 /// The widest a table line should be, in characters (a terminal of 100 columns).
 pub const WIDTH: usize = 100;
@@ -68,6 +73,36 @@ impl Grid {
         self.row(name, unit, f(&|c| sig(c.value / scale, 6)));
         self.row("  ideal gas", unit, f(&|c| sig(c.ideal / scale, 6)));
         self.row("  ideal-gas error", "%", f(&|c| opt(c.ideal_error_pct, 3)));
+    }
+
+    /// Temperatures on the user's scale, to 0.01 degree.
+    pub fn temperatures(&mut self, name: &str, scale: TemperatureScale, vals: &[Option<f64>]) {
+        let cells = vals
+            .iter()
+            .map(|v| v.map_or_else(|| "-".to_string(), |k| fixed(scale.from_kelvin(k), 2)))
+            .collect();
+        self.row(name, scale.label(), cells);
+    }
+
+    /// A compared temperature: the model's and the ideal gas's on the user's scale, and the
+    /// ideal-gas error as a difference in kelvin (a percentage of an absolute temperature
+    /// means nothing on the Celsius scale and little on any).
+    pub fn compared_temperature(
+        &mut self,
+        name: &str,
+        scale: TemperatureScale,
+        vals: &[Option<Compared>],
+    ) {
+        let pick = |f: &dyn Fn(&Compared) -> f64| -> Vec<Option<f64>> {
+            vals.iter().map(|v| v.as_ref().map(f)).collect()
+        };
+        self.temperatures(name, scale, &pick(&|c| c.value));
+        self.temperatures("  ideal gas", scale, &pick(&|c| c.ideal));
+        let cells = pick(&|c| c.ideal - c.value)
+            .iter()
+            .map(|d| d.map_or_else(|| "-".to_string(), |d| fixed(d, 2)))
+            .collect();
+        self.row("  ideal-gas error", "K", cells);
     }
 
     /// The table as text: models side by side, at most [`MAX_SIDE_BY_SIDE`] and no more than

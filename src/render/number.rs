@@ -21,9 +21,28 @@ pub fn opt(v: Option<f64>, s: usize) -> String {
     v.map_or_else(|| "-".to_string(), |v| sig(v, s))
 }
 
+/// `v` with `decimals` decimals; a value that rounds to zero prints without a sign.
+pub fn fixed(v: f64, decimals: usize) -> String {
+    if !v.is_finite() {
+        return "-".to_string();
+    }
+    let text = format!("{v:.decimals$}");
+    match text.strip_prefix('-') {
+        Some(rest) if rest.chars().all(|c| c == '0' || c == '.') => rest.to_string(),
+        _ => text,
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn fixed_decimals_without_a_negative_zero() {
+        assert_eq!(fixed(-195.904, 2), "-195.90");
+        assert_eq!(fixed(-0.0004, 2), "0.00");
+        assert_eq!(fixed(13.735, 1), "13.7");
+    }
 
     #[test]
     fn significant_figures() {

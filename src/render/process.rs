@@ -5,20 +5,23 @@ use crate::render::number::sig;
 use crate::report::jobs_common::Compared;
 use crate::report::process::{ProcessReport, ProcessResult};
 use crate::report::relief::ReliefReport;
+use crate::shown_units::TemperatureScale;
 use crate::units::PA_PER_BAR;
 
 /// The process report as text.
 pub fn table(r: &ProcessReport) -> String {
     let i = &r.input;
     let mut out = format!("{}\n", r.fluid.label);
+    let scale = TemperatureScale::of_input(&i.temperature);
     out.push_str(&format!(
-        "{} path from {} K, {} bar abs to {}\n",
+        "{} path from {}, {} ({} bar abs) to {}\n",
         i.path,
-        sig(i.temperature_k, 6),
+        i.temperature.trim(),
+        i.pressure.trim(),
         sig(i.pressure_pa / PA_PER_BAR, 6),
-        match (i.end_temperature_k, i.end_pressure_pa) {
-            (Some(t), _) => format!("{} K", sig(t, 6)),
-            (_, Some(p)) => format!("{} bar abs", sig(p / PA_PER_BAR, 6)),
+        match (&i.to_temperature, &i.to_pressure, i.end_pressure_pa) {
+            (Some(t), _, _) => t.trim().to_string(),
+            (_, Some(p), Some(pa)) => format!("{} ({} bar abs)", p.trim(), sig(pa / PA_PER_BAR, 6)),
             _ => "-".to_string(),
         }
     ));
@@ -37,7 +40,7 @@ pub fn table(r: &ProcessReport) -> String {
         "",
         res.iter().map(|m| m.end.phase.clone()).collect(),
     );
-    g.compared("end temperature", "K", &col(&|m| m.end_temperature_k), 1.0);
+    g.compared_temperature("end temperature", scale, &col(&|m| m.end_temperature_k));
     g.compared(
         "end pressure",
         "bar abs",
@@ -71,7 +74,7 @@ pub fn table(r: &ProcessReport) -> String {
     );
     out.push_str(&g.finish());
     out.push_str(&format!("sign convention: {}.\n", i.convention));
-    out.push_str("ideal-gas error = (ideal-gas answer - model answer) / model answer.\n");
+    out.push_str(crate::render::model_grid::IDEAL_ERROR_NOTE);
     out
 }
 
@@ -80,8 +83,9 @@ pub fn relief(r: &ReliefReport) -> String {
     let i = &r.input;
     let mut out = format!("{}\n", r.fluid.label);
     out.push_str(&format!(
-        "relieving conditions {} K, {} bar abs\n",
-        sig(i.temperature_k, 6),
+        "relieving conditions {}, {} ({} bar abs)\n",
+        i.temperature.trim(),
+        i.pressure.trim(),
         sig(i.pressure_pa / PA_PER_BAR, 6)
     ));
     let res = &r.results;

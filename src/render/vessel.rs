@@ -1,22 +1,26 @@
 //! Terminal table of `zfactor vessel`.
 
 use crate::render::model_grid::Grid;
-use crate::render::number::sig;
+use crate::render::number::{fixed, sig};
 use crate::report::vessel::VesselReport;
-use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
+use crate::shown_units::{standard_volume_unit, TemperatureScale};
+use crate::units::PA_PER_BAR;
 
 /// The vessel report as text.
 pub fn table(r: &VesselReport) -> String {
     let mut out = format!("{}\n", r.fluid.label);
     let i = &r.input;
+    let scale = TemperatureScale::of_input(&i.temperature);
+    let (sv, m3_per_sv) = standard_volume_unit(&r.base.id);
     out.push_str(&format!(
-        "vessel {} m3 at {} K ({} degC), {} bar abs; standard volume at {} ({} K, {} kPa)\n",
-        sig(i.volume_m3, 6),
-        sig(i.temperature_k, 6),
-        sig(i.temperature_k - KELVIN_AT_0_DEGC, 5),
+        "vessel {} at {}, {} ({} bar abs); {sv} at {} ({} {}, {} kPa)\n",
+        i.volume.trim(),
+        i.temperature.trim(),
+        i.pressure.trim(),
         sig(i.pressure_pa / PA_PER_BAR, 6),
         r.base.id,
-        sig(r.base.temperature_k, 6),
+        fixed(scale.from_kelvin(r.base.temperature_k), 2),
+        scale.label(),
         sig(r.base.pressure_pa / 1e3, 6)
     ));
     let res = &r.results;
@@ -44,11 +48,11 @@ pub fn table(r: &VesselReport) -> String {
     );
     g.compared(
         "standard volume",
-        "m3",
+        sv,
         &res.iter()
             .map(|m| c(m.standard_volume_m3, m.standard_volume_ideal_m3))
             .collect::<Vec<_>>(),
-        1.0,
+        m3_per_sv,
     );
     if res.iter().any(|m| m.heating.is_some()) {
         let t2 = res
@@ -56,7 +60,11 @@ pub fn table(r: &VesselReport) -> String {
             .find_map(|m| m.heating.as_ref())
             .map_or(0.0, |h| h.temperature_k);
         g.compared(
-            &format!("pressure at {} degC", sig(t2 - KELVIN_AT_0_DEGC, 4)),
+            &format!(
+                "pressure at {} {}",
+                fixed(scale.from_kelvin(t2), 2),
+                scale.label()
+            ),
             "bar abs",
             &res.iter()
                 .map(|m| m.heating.as_ref().map(|h| h.pressure_pa))
@@ -98,11 +106,11 @@ pub fn table(r: &VesselReport) -> String {
         );
         g.compared(
             "usable gas, standard volume",
-            "m3",
+            sv,
             &res.iter()
                 .map(|m| m.usable.as_ref().map(|u| u.standard_volume_m3))
                 .collect::<Vec<_>>(),
-            1.0,
+            m3_per_sv,
         );
     }
     if res.iter().any(|m| m.fill.is_some()) {
@@ -133,17 +141,15 @@ pub fn table(r: &VesselReport) -> String {
                 .map(|m| m.venting.as_ref().map(f))
                 .collect::<Vec<_>>()
         };
-        g.compared(
+        g.compared_temperature(
             "vented: final gas temperature",
-            "K",
+            scale,
             &v(&|x| x.final_temperature_k),
-            1.0,
         );
-        g.compared(
+        g.compared_temperature(
             "vented: lowest temperature",
-            "K",
+            scale,
             &v(&|x| x.min_temperature_k),
-            1.0,
         );
         g.compared("vented: mass left", "kg", &v(&|x| x.mass_left_kg), 1.0);
         g.row(
@@ -169,6 +175,6 @@ pub fn table(r: &VesselReport) -> String {
     ) {
         out.push_str(&format!("{line}\n"));
     }
-    out.push_str("ideal-gas error = (ideal-gas answer - model answer) / model answer.\n");
+    out.push_str(crate::render::model_grid::IDEAL_ERROR_NOTE);
     out
 }

@@ -17,6 +17,10 @@ pub struct CompressReport {
 /// The stage as given, SI.
 #[derive(Debug, Clone, Serialize)]
 pub struct CompressInput {
+    /// The suction and discharge states as typed.
+    pub suction_pressure: String,
+    pub suction_temperature: String,
+    pub discharge_pressure: String,
     pub suction_pressure_pa: f64,
     pub suction_temperature_k: f64,
     pub discharge_pressure_pa: f64,

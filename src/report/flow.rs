@@ -41,6 +41,9 @@ pub struct SummationZ {
 #[derive(Debug, Clone, Serialize)]
 pub struct FlowInput {
     pub flow: String,
+    /// The flowing temperature and pressure as typed.
+    pub temperature: Option<String>,
+    pub pressure: Option<String>,
     /// "mass", "molar", "standard volume" or "actual volume".
     pub kind: &'static str,
     /// The flow in SI per second (kg/s, mol/s or m3/s).

@@ -18,6 +18,11 @@ pub struct ProcessReport {
 #[derive(Debug, Clone, Serialize)]
 pub struct ProcessInput {
     pub path: &'static str,
+    /// The start state and the end condition as typed.
+    pub temperature: String,
+    pub pressure: String,
+    pub to_temperature: Option<String>,
+    pub to_pressure: Option<String>,
     pub temperature_k: f64,
     pub pressure_pa: f64,
     pub end_temperature_k: Option<f64>,

@@ -17,6 +17,9 @@ pub struct ReliefReport {
 /// Relieving conditions as given.
 #[derive(Debug, Clone, Serialize)]
 pub struct ReliefInput {
+    /// The relieving temperature and pressure as typed.
+    pub temperature: String,
+    pub pressure: String,
     pub temperature_k: f64,
     pub pressure_pa: f64,
     pub ambient_pressure_pa: f64,

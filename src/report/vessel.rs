@@ -25,6 +25,10 @@ pub struct VesselReport {
 /// The vessel as given.
 #[derive(Debug, Clone, Serialize)]
 pub struct VesselInput {
+    /// The volume, temperature and pressure as typed.
+    pub volume: String,
+    pub temperature: String,
+    pub pressure: String,
     pub volume_m3: f64,
     pub temperature_k: f64,
     pub pressure_pa: f64,

@@ -44,6 +44,20 @@ fn number(s: &str) -> Option<f64> {
 }
 
 /// Parses one data file.
+/// The citation a data file opens with: its first comment lines (up to the one that starts
+/// "Coefficients"), joined, without the fluid's name before the first colon.
+fn citation(text: &str) -> String {
+    let lines: Vec<&str> = text
+        .lines()
+        .map_while(|l| l.strip_prefix('#'))
+        .map(str::trim)
+        .take_while(|l| !l.is_empty() && !l.starts_with("Coefficients"))
+        .collect();
+    let joined = lines.join(" ");
+    let cited = joined.split_once(": ").map_or(joined.as_str(), |(_, c)| c);
+    cited.trim().trim_end_matches('.').to_string()
+}
+
 pub fn parse(text: &str, meta: Meta) -> Result<Formulation> {
     let mut consts: Vec<(String, f64, String)> = Vec::new();
     let mut ideal = IdealPart::default();
@@ -203,6 +217,7 @@ pub fn parse(text: &str, meta: Meta) -> Result<Formulation> {
         key: meta.key,
         fluid: meta.fluid,
         title: meta.title,
+        citation: citation(text),
         tier: meta.tier,
         tc: kelvin("tc")?,
         rhoc,

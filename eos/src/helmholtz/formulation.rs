@@ -40,6 +40,8 @@ pub struct Formulation {
     pub fluid: &'static str,
     /// Short name of the equation and its source, e.g. `IAPWS-95`.
     pub title: &'static str,
+    /// The full citation of the equation, from the first comment lines of its data file.
+    pub citation: String,
     /// Reference or technical.
     pub tier: Tier,
     /// Critical (reducing) temperature, K.
