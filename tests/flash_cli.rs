@@ -396,3 +396,63 @@ fn bubble_and_dew_pressures_lie_on_the_traced_envelope() {
     }
     assert!(checked >= 8, "{checked} points");
 }
+
+/// Both dew pressures of a retrograde isotherm (between the critical temperature and the
+/// cricondentherm), each labelled by its branch, each lying between the envelope's own
+/// critical pressure and cricondenbar or below them as a dew curve must.
+#[test]
+fn dew_pressure_offers_both_branches_of_a_retrograde_isotherm() {
+    let mix = "methane=0.9,propane=0.1";
+    let v = json(&[
+        "flash",
+        "--mix",
+        mix,
+        "-t",
+        "250 K",
+        "--dew-pressure",
+        "-m",
+        "pr",
+    ]);
+    let r = v["results"].as_array().unwrap();
+    assert_eq!(r.len(), 2, "{v}");
+    assert_eq!(r[0]["branch"], "lower");
+    assert_eq!(r[1]["branch"], "upper");
+    let env = json(&["envelope", "--mix", mix, "-m", "pr"]);
+    let cricondenbar = f(&env["cricondenbar"]["pressure_pa"]);
+    let (lower, upper) = (f(&r[0]["pressure_pa"]), f(&r[1]["pressure_pa"]));
+    assert!(
+        lower < upper && upper < cricondenbar,
+        "{lower} {upper} {cricondenbar}"
+    );
+    let out = zf()
+        .args([
+            "flash",
+            "--mix",
+            mix,
+            "-t",
+            "250 K",
+            "--dew-pressure",
+            "-m",
+            "pr",
+        ])
+        .output()
+        .unwrap();
+    let text = String::from_utf8_lossy(&out.stdout);
+    assert!(
+        text.contains("upper branch (retrograde dew point)"),
+        "{text}"
+    );
+    // One dew pressure where the isotherm crosses the dew curve once: no branch label.
+    let v = json(&[
+        "flash",
+        "--mix",
+        mix,
+        "-t",
+        "200 K",
+        "--dew-pressure",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(v["results"].as_array().unwrap().len(), 1);
+    assert!(v["results"][0]["branch"].is_null());
+}

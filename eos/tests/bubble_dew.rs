@@ -109,3 +109,41 @@ fn no_dew_point_above_the_cricondenbar() {
         Err(Error::InvalidInput { .. })
     ));
 }
+
+/// Where the dew curve is retrograde (between the critical temperature and the
+/// cricondentherm) one isotherm crosses it twice (common practice: retrograde condensation):
+/// both dew pressures are found, each meets the equilibrium conditions, and flashes just
+/// beside each (no code shared with the dew-point solver beyond the model) change between one
+/// phase and two there: two phases between the two points, one phase outside. Below the
+/// critical temperature there is one dew pressure. No published values for this binary with
+/// this model are at hand; the checks are the conditions themselves.
+#[test]
+fn both_dew_pressures_of_a_retrograde_isotherm() {
+    let m = pr_model(&["methane", "propane"]);
+    let z = [0.9, 0.1];
+    let both = dew::pressures(&m, 250.0, &z).unwrap();
+    assert_eq!(both.len(), 2, "{both:?}");
+    let (lower, upper) = (&both[0], &both[1]);
+    assert!(upper.p > 1.5 * lower.p, "{} {}", lower.p, upper.p);
+    let two_phase = |p: f64| flash::tp(&m, 250.0, p, &z).unwrap().is_two_phase();
+    for d in [lower, upper] {
+        check_point(&m, d);
+        assert!((d.t - 250.0).abs() < 1e-9);
+    }
+    assert!(!two_phase(lower.p * 0.999) && two_phase(lower.p * 1.001));
+    assert!(two_phase(upper.p * 0.999) && !two_phase(upper.p * 1.001));
+    // The single-point solver finds one of the two.
+    let one = dew::pressure(&m, 250.0, &z).unwrap();
+    assert!(both.iter().any(|d| (d.p / one.p - 1.0).abs() < 1e-8));
+    // Below the critical temperature, one dew pressure.
+    assert_eq!(dew::pressures(&m, 200.0, &z).unwrap().len(), 1);
+    // Between the critical pressure and the cricondenbar, two dew temperatures.
+    let temps = dew::temperatures(&m, 80e5, &z).unwrap();
+    assert_eq!(temps.len(), 2, "{temps:?}");
+    for d in &temps {
+        check_point(&m, d);
+    }
+    assert!(temps[0].t < temps[1].t);
+    // Beyond the cricondentherm, none.
+    assert!(dew::pressures(&m, 260.0, &z).is_err());
+}

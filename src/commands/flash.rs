@@ -177,7 +177,7 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
         }
     }
     let Answers {
-        mut results,
+        results,
         mut warnings,
     } = each_model::run(&ids, |id| {
         let b = models::build(id, &feed)?;
@@ -189,10 +189,14 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
                 b.name
             )));
         }
-        let r = compute(&b, &feed, spec)?;
-        check_triple_points(&feed, r.temperature_k, "the state found lies at")?;
-        Ok(r)
+        let found = compute(&b, &feed, spec)?;
+        for r in &found {
+            check_triple_points(&feed, r.temperature_k, "the state found lies at")?;
+        }
+        Ok(found)
     })?;
+    // A model may give two bubble or dew points (both branches of a retrograde curve).
+    let mut results: Vec<FlashResultReport> = results.into_iter().flatten().collect();
     // The split at (T, P) and the bubble and dew points do not depend on the ideal-gas heat
     // capacity; only the (P, h) and (P, s) flashes do. Elsewhere its extrapolation is a
     // note on the printed h and s, not a warning about the answer.
@@ -245,8 +249,13 @@ pub fn run(args: &FlashArgs) -> Result<FlashReport, CliError> {
     })
 }
 
-/// One model's answer.
-fn compute(built: &BuiltModel, feed: &Feed, spec: Spec) -> Result<FlashResultReport, CliError> {
+/// One model's answer: one state, or every bubble or dew point at the given T or P (two
+/// where the curve is retrograde, labelled by branch).
+fn compute(
+    built: &BuiltModel,
+    feed: &Feed,
+    spec: Spec,
+) -> Result<Vec<FlashResultReport>, CliError> {
     let Some(m) = built.helmholtz() else {
         return Err(CliError::BadInput(format!(
             "model {} has no Helmholtz energy",
@@ -271,27 +280,48 @@ fn compute(built: &BuiltModel, feed: &Feed, spec: Spec) -> Result<FlashResultRep
         }
         Spec::PointAtT(side, t) => {
             let r = match side {
-                Side::Bubble => bubble::pressure(m, t, z),
-                Side::Dew => dew::pressure(m, t, z),
+                Side::Bubble => bubble::pressures(m, t, z),
+                Side::Dew => dew::pressures(m, t, z),
             };
-            match r {
-                Ok(sp) => from_point(built, m, feed, &sp),
-                Err(e) => return Err(diagnose(built, m, z, spec, e)),
-            }
+            return points(built, m, feed, spec, r);
         }
         Spec::PointAtP(side, p) => {
             let r = match side {
-                Side::Bubble => bubble::temperature(m, p, z),
-                Side::Dew => dew::temperature(m, p, z),
+                Side::Bubble => bubble::temperatures(m, p, z),
+                Side::Dew => dew::temperatures(m, p, z),
             };
-            match r {
-                Ok(sp) => from_point(built, m, feed, &sp),
-                Err(e) => return Err(diagnose(built, m, z, spec, e)),
-            }
+            return points(built, m, feed, spec, r);
         }
     };
     check_finite(&result)?;
-    Ok(result)
+    Ok(vec![result])
+}
+
+/// The bubble or dew points found at the given T or P, each labelled by its branch when
+/// there are two ("lower" and "upper" in the free variable), or why there is none.
+fn points(
+    built: &BuiltModel,
+    m: &dyn Model,
+    feed: &Feed,
+    spec: Spec,
+    found: eos::Result<Vec<SaturationPoint>>,
+) -> Result<Vec<FlashResultReport>, CliError> {
+    let found = found.map_err(|e| diagnose(built, m, &feed.mole, spec, e))?;
+    let n = found.len();
+    let mut out = Vec::with_capacity(n);
+    for (k, sp) in found.iter().enumerate() {
+        let mut r = from_point(built, m, feed, sp);
+        if n > 1 {
+            r.branch = Some(match (k, n) {
+                (0, _) => "lower".to_string(),
+                (k, n) if k + 1 == n => "upper".to_string(),
+                (k, _) => format!("middle {k}"),
+            });
+        }
+        check_finite(&r)?;
+        out.push(r);
+    }
+    Ok(out)
 }
 
 /// Why a bubble or dew point was not found: beyond the extent of its branch of the envelope
@@ -411,6 +441,7 @@ fn base(built: &BuiltModel, phase: String, t: f64, p: f64, mm: f64) -> FlashResu
         model_name: built.name.clone(),
         citation: built.citation.clone(),
         phase,
+        branch: None,
         temperature_k: t,
         pressure_pa: p,
         vapor_fraction: None,

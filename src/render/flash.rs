@@ -79,7 +79,15 @@ pub fn text(r: &FlashReport) -> String {
 }
 
 fn model_text(m: &FlashResultReport) -> String {
-    let mut out = format!("\n{} ({}): {}\n", m.model, m.model_name, m.phase);
+    let mut out = format!("\n{} ({}): {}", m.model, m.model_name, m.phase);
+    match m.branch.as_deref() {
+        Some("upper") if m.phase == "dew-point" => {
+            out.push_str(", upper branch (retrograde dew point)")
+        }
+        Some(b) => out.push_str(&format!(", {b} branch")),
+        None => {}
+    }
+    out.push('\n');
     let mut s = new_table();
     s.set_header(vec!["quantity", "value", "unit"]);
     let mut row = |q: &str, v: String, u: &str| {

@@ -65,6 +65,9 @@ pub struct FlashResultReport {
     /// "two-phase", a single-phase name ("gas", "liquid", "vapor", "supercritical"),
     /// "bubble-point" or "dew-point".
     pub phase: String,
+    /// Of two bubble or dew points at the given T or P (both branches of a retrograde
+    /// curve): "lower" or "upper" in the pressure (or temperature) found; null for one.
+    pub branch: Option<String>,
     /// Temperature, K (found by the (P, h), (P, s) and bubble/dew-temperature modes).
     pub temperature_k: f64,
     /// Pressure, Pa (found by the bubble/dew-pressure modes).

@@ -220,7 +220,23 @@ pub(crate) struct Unsolved<'a> {
     first_err: Option<Error>,
 }
 
-impl Unsolved<'_> {
+impl<'a> Unsolved<'a> {
+    /// The equations of a bubble or dew point, with no start tried yet.
+    pub fn new(model: &'a dyn Model, z: &'a [f64], side: Side, given: Given) -> Unsolved<'a> {
+        let n = z.len();
+        let (spec, value) = match given {
+            Given::T(t) => (n, t.ln()),
+            Given::P(p) => (n + 1, p.ln()),
+        };
+        Unsolved {
+            sys: System::new(model, z, side),
+            given,
+            spec,
+            value,
+            first_err: None,
+        }
+    }
+
     /// Newton's method from the unknowns `x` (ln K, ln T, ln P).
     pub fn attempt(&self, x: &mut [f64]) -> Option<SaturationPoint> {
         attempt(&self.sys, x, self.spec, self.value).ok()
