@@ -383,3 +383,50 @@ fn job_tables_speak_the_users_units() {
     ]);
     assert_eq!(row(&out, "end temperature")[0], "degC");
 }
+
+/// The catalogues, the component data, the k_ij table, the envelope table, the flash and the
+/// demo also fit a terminal of 100 columns (common practice), citations folded under their
+/// start rather than running on.
+#[test]
+fn catalogues_and_the_other_commands_fit_a_hundred_columns() {
+    let runs: [&[&str]; 12] = [
+        &["models"],
+        &["models", "pr"],
+        &["models", "reference"],
+        &["fluids"],
+        &["fluids", "methane"],
+        &["kij"],
+        &["kij", "methane"],
+        &["envelope", "--mix", "methane=0.9,propane=0.1"],
+        &["envelope", "--fluid", "co2", "-m", "reference"],
+        &[
+            "flash",
+            "--mix",
+            "methane=0.9,propane=0.1",
+            "-t",
+            "250 K",
+            "--dew-pressure",
+            "-m",
+            "pr,srk",
+        ],
+        &[
+            "compare",
+            "--fluid",
+            "nitrogen",
+            "-t",
+            "150..300 K n 4",
+            "-p",
+            "1..300 bar n 5",
+        ],
+        &["demo"],
+    ];
+    for args in runs {
+        let (code, out, err) = run(args);
+        assert!(code == 0 || code == 3, "{args:?}: {err}");
+        let widest = out.lines().map(|l| l.chars().count()).max().unwrap_or(0);
+        assert!(
+            widest <= 100,
+            "{args:?}: a line of {widest} columns:\n{out}"
+        );
+    }
+}

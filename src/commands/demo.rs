@@ -40,7 +40,7 @@ pub fn run(args: &DemoArgs) -> Result<Exit, CliError> {
     };
     if args.format == crate::cli::Format::Table {
         crate::render::emit(
-            "Demo: fuel-gas skid of the fictional Ashgrove compressor station, \
+            "Demo: fuel-gas skid of the fictional Ashgrove compressor station,\n\
              pipeline gas at 70 barg and 40 degC.\n\n",
         )?;
     }

@@ -45,6 +45,49 @@ fn opt(v: Option<f64>, n: usize) -> String {
     v.map_or_else(|| "-".to_string(), |v| sig(v, n))
 }
 
+/// A table whose first `lead` columns are the state and whose other columns come in pairs,
+/// one pair per model: as many models side by side as fit in
+/// [`crate::render::model_grid::WIDTH`] columns, the rest in further parts one under the
+/// other, each with the state's columns.
+fn in_parts(header: &[String], rows: &[Vec<String>], lead: usize) -> String {
+    let models = header.len().saturating_sub(lead) / 2;
+    let part = |from: usize, to: usize| -> String {
+        let pick = |r: &[String]| -> Vec<String> {
+            r[..lead]
+                .iter()
+                .chain(&r[lead + 2 * from..(lead + 2 * to).min(r.len())])
+                .cloned()
+                .collect()
+        };
+        let mut t = new_table(pick(header));
+        for r in rows {
+            t.add_row(pick(r));
+        }
+        right_align(&mut t, 0);
+        // One space between right-aligned numbers reads as well as two and fits a model more.
+        for c in t.column_iter_mut() {
+            c.set_padding((1, 0));
+        }
+        format!("{t}\n")
+    };
+    let split = |k: usize| -> Vec<String> {
+        let k = k.max(1);
+        (0..models.div_ceil(k).max(1))
+            .map(|i| part(i * k, ((i + 1) * k).min(models)))
+            .collect()
+    };
+    let fits = (1..=models.max(1))
+        .rev()
+        .find(|&k| {
+            split(k).iter().all(|p| {
+                p.lines()
+                    .all(|l| l.chars().count() <= crate::render::model_grid::WIDTH)
+            })
+        })
+        .unwrap_or(1);
+    split(fits).concat()
+}
+
 /// The report for the terminal.
 pub fn text(r: &CompareReport) -> String {
     let mut out = String::new();
@@ -189,7 +232,7 @@ pub fn text(r: &CompareReport) -> String {
                 header.push(format!("{} density", v.model));
             }
         }
-        let mut t = new_table(header);
+        let mut rows = Vec::new();
         for p in r.points.held() {
             let mut row = vec![
                 sig(p.temperature_k, 5),
@@ -208,10 +251,10 @@ pub fn text(r: &CompareReport) -> String {
                     row.push(opt(v.mass_density_kg_m3, 5));
                 }
             }
-            t.add_row(row);
+            rows.push(row);
         }
-        right_align(&mut t, 0);
-        out.push_str(&format!("{t}\n"));
+        let lead = if r.reference.kind != "none" { 5 } else { 3 };
+        out.push_str(&in_parts(&header, &rows, lead));
     } else {
         out.push_str(&format!(
             "\n({} points: use --format csv or json for every point)\n",
@@ -301,7 +344,7 @@ pub fn csv(r: &CompareReport, out: &mut dyn Write) -> Result<(), CliError> {
 pub fn render(r: &CompareReport, format: crate::cli::Format) -> Result<(), CliError> {
     use crate::cli::Format;
     match format {
-        Format::Table => crate::render::emit(&text(r))?,
+        Format::Table => crate::render::emit(&crate::render::wrap::fold(&text(r)))?,
         Format::Csv => {
             let stdout = std::io::stdout();
             let mut w = std::io::BufWriter::with_capacity(1 << 20, stdout.lock());

@@ -44,7 +44,8 @@ pub fn text(r: &EnvelopeReport) -> String {
     }
     let mut t = Table::new();
     t.load_style(STYLE)
-        .set_content_arrangement(ContentArrangement::Disabled);
+        .set_content_arrangement(ContentArrangement::Dynamic)
+        .set_width(crate::render::model_grid::WIDTH as u16);
     t.set_header(vec![
         "T [K]",
         "P [bar abs]",

@@ -93,7 +93,7 @@ pub fn csv(r: &KijReport) -> Result<String, CliError> {
 /// Prints the report.
 pub fn render(r: &KijReport, format: Format) -> Result<(), CliError> {
     let text = match format {
-        Format::Table => text(r),
+        Format::Table => crate::render::wrap::fold(&text(r)),
         Format::Csv => csv(r)?,
         Format::Json => crate::render::json::to_string(r)?,
     };

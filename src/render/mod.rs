@@ -55,7 +55,7 @@ pub fn models(
     format: Format,
 ) -> Result<(), CliError> {
     let text = match format {
-        Format::Table => table::models(report),
+        Format::Table => wrap::fold(&table::models(report)),
         Format::Csv => csv::models(report)?,
         Format::Json => json::to_string(report)?,
     };
@@ -65,7 +65,7 @@ pub fn models(
 /// Renders a fluids report.
 pub fn fluids(report: &FluidsReport, format: Format) -> Result<(), CliError> {
     let text = match format {
-        Format::Table => table::fluids(report),
+        Format::Table => wrap::fold(&table::fluids(report)),
         Format::Csv => csv::fluids(report)?,
         Format::Json => {
             if report.components.len() == 1 && report.query.is_some() {

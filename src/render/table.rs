@@ -1,7 +1,7 @@
 //! Terminal tables. State results put the models side by side, one column each, so the
 //! ideal-gas answer and every real-gas model can be read across one row.
 
-use crate::render::model_grid::Grid;
+use crate::render::model_grid::{Grid, WIDTH};
 use crate::render::number::{opt, sig};
 use crate::report::fluids::FluidsReport;
 use crate::report::state::StateReport;
@@ -192,6 +192,8 @@ pub fn fluids(r: &FluidsReport) -> String {
         ]);
     }
     right_align(&mut t, 3);
+    t.set_content_arrangement(ContentArrangement::Dynamic);
+    t.set_width(WIDTH as u16);
     format!(
         "{t}\n{} components; `zfactor fluids NAME` shows one with its sources.\n",
         r.components.len()
@@ -246,7 +248,7 @@ fn one_fluid(c: &fluids::ComponentRecord) -> String {
         t.add_row(vec![k.to_string(), v]);
     }
     t.set_content_arrangement(ContentArrangement::Dynamic);
-    t.set_width(110);
+    t.set_width(WIDTH as u16);
     format!("{t}\n")
 }
 
@@ -298,7 +300,7 @@ pub fn models(r: &crate::report::models::ModelsReport) -> String {
             t.add_row(vec!["poor at".to_string(), p.to_string()]);
         }
         t.set_content_arrangement(ContentArrangement::Dynamic);
-        t.set_width(110);
+        t.set_width(WIDTH as u16);
         return format!("{t}\n");
     }
     t.set_header(vec!["id", "model", "validity"]);
@@ -306,7 +308,7 @@ pub fn models(r: &crate::report::models::ModelsReport) -> String {
         t.add_row(vec![m.id, m.name, m.validity]);
     }
     t.set_content_arrangement(ContentArrangement::Dynamic);
-    t.set_width(120);
+    t.set_width(WIDTH as u16);
     format!(
         "{t}\n`zfactor models ID` shows one model with its source, its range for each fluid, \
          strengths and weaknesses. A state outside a model's range is still computed, with a \
