@@ -233,6 +233,21 @@ fn compute(
             return two_phase(built, m, feed, &split, asked);
         }
     }
+    // IF97 is explicit in (T, P): (P, h), (P, s) and a quality are found by inverting its
+    // forward equations (eos::if97::ph_ps); wet steam is reported by the lever rule.
+    let given = if built.id == eos::if97::ID {
+        match if97_state(given).map_err(|e| from_eos(&ctx, e))? {
+            If97Given::State(Given::Tp(t, p)) if !matches!(given, Given::Tp(..)) => {
+                Given::Tp(if97_refined(built, x, t, p, given), p)
+            }
+            If97Given::State(g) => g,
+            If97Given::Wet { t, p, quality } => {
+                return if97_wet(built, feed, t, p, quality, asked);
+            }
+        }
+    } else {
+        given
+    };
     let mut named = None;
     let pure_spec = match given {
         Given::Tp(..) => None,
@@ -258,7 +273,7 @@ fn compute(
             return Err(CliError::BadInput(format!(
                 "model {} takes temperature, pressure and density only; enthalpy, entropy and \
                  quality need a model with its own saturation solver: vdw, rk, srk, pr, pr78, \
-                 reference, sw12",
+                 reference, sw12, or IAPWS-IF97 for water (if97)",
                 built.id
             )))
         }
@@ -374,9 +389,21 @@ fn two_phase(
     split: &eos::equilibrium::flash::TwoPhase,
     asked: Given,
 ) -> Result<ModelResult, CliError> {
+    let vap = eos::properties::evaluate(m, split.t, split.rho_v, &split.y);
+    let liq = eos::properties::evaluate(m, split.t, split.rho_l, &split.x);
+    two_phase_of(built, feed, split, &vap, &liq, asked)
+}
+
+/// The two-phase result of `split` from the properties of its vapour and liquid.
+fn two_phase_of(
+    built: &BuiltModel,
+    feed: &Feed,
+    split: &eos::equilibrium::flash::TwoPhase,
+    vap: &eos::properties::Properties,
+    liq: &eos::properties::Properties,
+    asked: Given,
+) -> Result<ModelResult, CliError> {
     let (t, p, beta) = (split.t, split.p, split.vapor_fraction);
-    let vap = eos::properties::evaluate(m, t, split.rho_v, &split.y);
-    let liq = eos::properties::evaluate(m, t, split.rho_l, &split.x);
     let bulk = |v: f64, l: f64| beta * v + (1.0 - beta) * l;
     let v_molar = bulk(1.0 / vap.rho, 1.0 / liq.rho);
     let rho = 1.0 / v_molar;
@@ -435,8 +462,8 @@ fn two_phase(
         residual_gibbs_j_mol: None,
         vapor_fraction: Some(beta),
         phases: vec![
-            phase("vapor", beta, &vap, &split.y),
-            phase("liquid", 1.0 - beta, &liq, &split.x),
+            phase("vapor", beta, vap, &split.y),
+            phase("liquid", 1.0 - beta, liq, &split.x),
         ],
         fugacity: fugacities(feed, &vap.ln_phi, &split.y, p),
         notes,
@@ -444,6 +471,115 @@ fn two_phase(
     };
     check_finite(&result)?;
     Ok(result)
+}
+
+/// What an IF97 request becomes: a state the model answers directly, or wet steam.
+enum If97Given {
+    State(Given),
+    Wet { t: f64, p: f64, quality: f64 },
+}
+
+/// The (T, P) of an IF97 request given by (P, h), (P, s) or a quality, or the request as it
+/// is. Enthalpy and entropy are per mole with IF97's molar mass, the factor the model's own
+/// results are converted with, so a state given in kJ/kg comes back with that value.
+fn if97_state(given: Given) -> eos::Result<If97Given> {
+    use eos::if97::ph_ps::{self, PhaseState};
+    use eos::tp_explicit::if97::M_WATER;
+    let found = |p: f64, st: PhaseState| match st {
+        PhaseState::Single(s) => If97Given::State(Given::Tp(s.t, p)),
+        PhaseState::Wet {
+            quality, liquid, ..
+        } => If97Given::Wet {
+            t: liquid.t,
+            p,
+            quality,
+        },
+    };
+    Ok(match given {
+        Given::Ph(p, h) => found(p, ph_ps::ph(p, h / M_WATER)?),
+        Given::Ps(p, s) => found(p, ph_ps::ps(p, s / M_WATER)?),
+        Given::Tx(t, quality) => If97Given::Wet {
+            t,
+            p: eos::if97::psat(t)?,
+            quality,
+        },
+        Given::Px(p, quality) => If97Given::Wet {
+            t: eos::if97::tsat(p)?,
+            p,
+            quality,
+        },
+        other => If97Given::State(other),
+    })
+}
+
+/// The temperature at which the model's own molar h or s (what the output prints) equals the
+/// given one, by Newton steps from IF97's T(p, h) or T(p, s) (dh/dT = cp, ds/dT = cp/T at
+/// fixed P): the IF97 molar conversion differs from the output's by a few parts in 1e6, and
+/// an input should come back as it was typed.
+fn if97_refined(built: &BuiltModel, x: &[f64], mut t: f64, p: f64, given: Given) -> f64 {
+    for _ in 0..3 {
+        let Ok(st) = built.at_tp(t, p, x, RootChoice::LowestGibbs) else {
+            return t;
+        };
+        let Some(cp) = st.props.cp.filter(|c| *c > 0.0) else {
+            return t;
+        };
+        let step = match given {
+            Given::Ph(_, h) => (st.props.h - h) / cp,
+            Given::Ps(_, s) => (st.props.s - s) * t / cp,
+            _ => return t,
+        };
+        t -= step;
+        if step.abs() < 1e-12 * t {
+            break;
+        }
+    }
+    t
+}
+
+/// Wet steam from IF97: the saturated liquid and vapour at (T, P) by the lever rule.
+fn if97_wet(
+    built: &BuiltModel,
+    feed: &Feed,
+    t: f64,
+    p: f64,
+    quality: f64,
+    asked: Given,
+) -> Result<ModelResult, CliError> {
+    let ctx = format!("model {}", built.id);
+    let x = &feed.mole;
+    let side = |root| {
+        built
+            .at_tp(t, p, x, root)
+            .map(|s| s.props)
+            .map_err(|e| from_eos(&ctx, e))
+    };
+    let (liq, vap) = (side(RootChoice::Liquid)?, side(RootChoice::Vapor)?);
+    let split = eos::equilibrium::flash::TwoPhase {
+        t,
+        p,
+        vapor_fraction: quality,
+        x: vec![1.0],
+        y: vec![1.0],
+        rho_l: liq.rho,
+        rho_v: vap.rho,
+        iterations: 0,
+        fugacity_residual: 0.0,
+    };
+    let mut r = two_phase_of(built, feed, &split, &vap, &liq, asked)?;
+    r.phase = if quality <= 0.0 {
+        "saturated liquid".to_string()
+    } else if quality >= 1.0 {
+        "saturated vapor".to_string()
+    } else {
+        eos::phase::Phase::TwoPhase.to_string()
+    };
+    if let Some(n) = r.notes.last_mut() {
+        *n = format!(
+            "wet steam (IAPWS-IF97 region 4) at {t:.6} K and {p:.6e} Pa with quality              {quality:.6}: Z and density are bulk values of both phases together"
+        );
+    }
+    Ok(r)
 }
 
 /// A result's own warning in the solid region (the report says why, once).

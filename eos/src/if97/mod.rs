@@ -23,6 +23,7 @@ pub mod data;
 mod gibbs;
 
 pub mod b23;
+pub mod ph_ps;
 pub mod region1;
 pub mod region2;
 pub mod region3;

@@ -52,6 +52,11 @@ fn ideal(t: f64, p: f64) -> Result<(f64, f64, f64)> {
     Ok((rt * tg_t, if97::R * (tg_t - g0), -if97::R * s[4]))
 }
 
+/// Whether (T, p) lies on IF97's saturation line, below the critical pressure.
+fn on_saturation(t: f64, p: f64) -> bool {
+    p < if97::PC && if97::tsat(p).is_ok_and(|ts| (t - ts).abs() <= 1e-9 * ts)
+}
+
 impl TpModel for If97Model {
     fn id(&self) -> &str {
         if97::ID
@@ -61,8 +66,21 @@ impl TpModel for If97Model {
         &self.comps
     }
 
-    fn point(&self, t: f64, p: f64, _x: &[f64], _root: RootChoice) -> Result<TpPoint> {
-        let st = if97::props_tp(t, p)?;
+    /// The state at (T, p); on the saturation line (T within 1e-9 of Ts(p)) a liquid or
+    /// vapour root choice picks that saturated phase (IF97 gives one value of each property
+    /// per (T, p) elsewhere).
+    fn point(&self, t: f64, p: f64, _x: &[f64], root: RootChoice) -> Result<TpPoint> {
+        let st = match root {
+            RootChoice::Liquid | RootChoice::Vapor if on_saturation(t, p) => {
+                let (liquid, vapor) = if97::ph_ps::saturated(p)?;
+                if root == RootChoice::Liquid {
+                    liquid
+                } else {
+                    vapor
+                }
+            }
+            _ => if97::props_tp(t, p)?,
+        };
         let (h_ig, s_ig, cp_ig) = ideal(t, p)?;
         let (_, s_ig_ref_p, _) = ideal(t, P_REF)?;
         Ok(TpPoint {
