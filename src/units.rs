@@ -124,6 +124,16 @@ fn too_large(input: &str, quantity: &'static str, accepted: &'static str) -> Uni
     }
 }
 
+/// `x` to 15 significant digits, the most a double holds for every decimal: a typed value
+/// converted to SI keeps its decimal form (-20 degC is 253.15 K, not 253.14999999999998 K;
+/// 70 barg with 101.325 kPa is 7101325 Pa) and loses nothing it was typed with.
+pub fn decimal(x: f64) -> f64 {
+    if !x.is_finite() || x == 0.0 {
+        return x;
+    }
+    format!("{x:.14e}").parse().unwrap_or(x)
+}
+
 /// Reads a temperature and returns it in kelvin (must be above absolute zero).
 pub fn temperature(input: &str) -> Result<f64, UnitError> {
     let (v, unit) = split(input, "temperature", TEMPERATURE_UNITS)?;
@@ -145,6 +155,7 @@ pub fn temperature(input: &str) -> Result<f64, UnitError> {
     if !k.is_finite() {
         return Err(too_large(input, "temperature", TEMPERATURE_UNITS));
     }
+    let k = decimal(k);
     if k <= 0.0 {
         return Err(UnitError {
             input: input.to_string(),
@@ -264,7 +275,7 @@ fn pressure_factor(unit: &str) -> Option<f64> {
 
 /// Absolute pressure in Pa of a reading, refusing gauge readings at or below a vacuum.
 pub fn absolute_pressure(input: &str, p: Pressure, ambient_pa: f64) -> Result<f64, UnitError> {
-    let abs = p.absolute(ambient_pa);
+    let abs = decimal(p.absolute(ambient_pa));
     if abs > 0.0 {
         Ok(abs)
     } else {

@@ -498,3 +498,43 @@ fn if97_takes_enthalpy_entropy_and_quality_with_pressure() {
     // Steam tables: 4.76 bar at 150 degC (common practice).
     assert!((r["pressure_pa"].as_f64().unwrap() / 1e5 - 4.76).abs() < 0.01);
 }
+
+/// No floating-point dust: a density typed in kg/m3 comes back as typed from every model,
+/// whatever molar mass its equation was published with (Span and Wagner 1996 give CO2
+/// 44.0098 g/mol); -20 degC is 253.15 K and 70 bar 7e6 Pa in the CSV; the ideal gas at the
+/// reference state (298.15 K, 101.325 kPa) has h = 0 and s = 0 exactly, by definition.
+#[test]
+fn inputs_come_back_as_typed_and_zero_is_zero() {
+    let (code, out, err) = run(&[
+        "state",
+        "--fluid",
+        "co2",
+        "-t",
+        "40 degC",
+        "-d",
+        "600 kg/m3",
+        "-m",
+        "pr,reference",
+        "-f",
+        "json",
+    ]);
+    assert!(code == 0 || code == 3, "{err}");
+    let v: Value = serde_json::from_str(&out).unwrap();
+    for r in v["results"].as_array().unwrap() {
+        let d = r["mass_density_kg_m3"].as_f64().unwrap();
+        assert!((d - 600.0).abs() < 1e-9, "{}: {d}", r["model"]);
+    }
+    let (code, out, err) = run(&[
+        "state", "--fluid", "methane", "-t", "-20 degC", "-p", "70 bar", "-m", "pr", "-f", "csv",
+    ]);
+    assert_eq!(code, 0, "{err}");
+    let row = out.lines().nth(1).unwrap();
+    assert!(row.starts_with("pr,supercritical,2.5315e2,7e6,"), "{row}");
+    let (code, out, err) = run(&[
+        "state", "--fluid", "nitrogen", "-t", "25 degC", "-p", "1 atm", "-m", "ideal", "-f", "json",
+    ]);
+    assert_eq!(code, 0, "{err}");
+    let v: Value = serde_json::from_str(&out).unwrap();
+    assert_eq!(v["results"][0]["enthalpy_j_mol"], serde_json::json!(0.0));
+    assert_eq!(v["results"][0]["entropy_j_mol_k"], serde_json::json!(0.0));
+}

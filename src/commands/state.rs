@@ -58,12 +58,8 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
         args.pressure.as_deref(),
         ambient,
     )?;
-    let rho = args
-        .density
-        .as_deref()
-        .map(units::density)
-        .transpose()?
-        .map(|d: Density| d.molar(feed.molar_mass()));
+    let density = args.density.as_deref().map(units::density).transpose()?;
+    let rho = density.map(|d: Density| d.molar(feed.molar_mass()));
     let m = feed.molar_mass();
     let energy = |e: crate::energy_units::EnergyUnitError| CliError::BadInput(e.to_string());
     let h = args
@@ -118,7 +114,19 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
         mut results,
         mut warnings,
     } = each_model::run(&ids, |id| {
-        compute(&models::build(id, &feed)?, &feed, given, root)
+        let built = models::build(id, &feed)?;
+        // A mass density is the same mass density for every model, whatever molar mass its
+        // equation was published with (IAPWS-95's water, Setzmann-Wagner's methane).
+        let given = match (given, density) {
+            (Given::TRho(t, _), Some(Density::Mass(d))) => {
+                Given::TRho(t, d / model_mass(&built, &feed))
+            }
+            (Given::PRho(p, _), Some(Density::Mass(d))) => {
+                Given::PRho(p, d / model_mass(&built, &feed))
+            }
+            (g, _) => g,
+        };
+        compute(&built, &feed, given, root)
     })?;
     let split: Vec<&str> = results
         .iter()
@@ -211,6 +219,33 @@ pub fn composition_rows(feed: &Feed) -> Vec<CompositionRow> {
             mass_fraction: feed.mass[i],
         })
         .collect()
+}
+
+/// The molar mass a model converts with (kg/mol): its equation's own where it has one.
+fn model_mass(built: &BuiltModel, feed: &Feed) -> f64 {
+    built
+        .helmholtz()
+        .map_or_else(|| feed.molar_mass(), |m| m.molar_mass(&feed.mole))
+}
+
+/// `v` as zero where it is zero within round-off of `scale` (an ideal gas's enthalpy and
+/// entropy at the reference state come out as 1e-17, not 0).
+fn snap(v: f64, scale: f64) -> f64 {
+    if v.abs() < 1e-9 * scale {
+        0.0
+    } else {
+        v
+    }
+}
+
+/// The temperature and pressure the user gave, where given: a result echoes them rather
+/// than the model's round trip (70 bar, not 7.000000000000001e6 Pa).
+fn given_tp(asked: Given) -> (Option<f64>, Option<f64>) {
+    match asked {
+        Given::Tp(t, p) => (Some(t), Some(p)),
+        Given::TRho(t, _) | Given::Tx(t, _) => (Some(t), None),
+        Given::PRho(p, _) | Given::Ph(p, _) | Given::Ps(p, _) | Given::Px(p, _) => (None, Some(p)),
+    }
 }
 
 /// One model's result. A mixture at (T, P) is flashed first: the state is reported as one
@@ -325,14 +360,17 @@ fn compute(
         }
     }
     let mm = pr.molar_mass;
+    let (t_given, p_given) = given_tp(asked);
+    let rt = eos::constants::R * pr.t;
+    let (h, s) = (snap(pr.h, rt), snap(pr.s, eos::constants::R));
     let result = ModelResult {
         model: built.id.clone(),
         model_name: built.name.clone(),
         citation: built.citation.clone(),
         phase: state.phase.to_string(),
         roots: state.roots,
-        temperature_k: pr.t,
-        pressure_pa: pr.p,
+        temperature_k: t_given.unwrap_or(pr.t),
+        pressure_pa: p_given.unwrap_or(pr.p),
         z: pr.z,
         molar_density_mol_m3: pr.rho,
         mass_density_kg_m3: pr.mass_density(),
@@ -340,11 +378,11 @@ fn compute(
         specific_volume_m3_kg: pr.molar_volume() / mm,
         ideal_gas_deviation_pct: 100.0 * dev,
         ideal_gas_deviation_of: of,
-        enthalpy_j_mol: pr.h,
-        entropy_j_mol_k: pr.s,
+        enthalpy_j_mol: h,
+        entropy_j_mol_k: s,
         internal_energy_j_mol: pr.u,
-        enthalpy_j_kg: pr.h / mm,
-        entropy_j_kg_k: pr.s / mm,
+        enthalpy_j_kg: h / mm,
+        entropy_j_kg_k: s / mm,
         cv_j_mol_k: (!cv_withheld).then_some(pr.cv),
         cp_j_mol_k: pr.cp,
         speed_of_sound_m_s: pr.w,

@@ -144,7 +144,7 @@
       let envError = null;
       try {
         const pure = state.composition.length === 1;
-        const envModel = pure && ref ? ref : (models.find((m) => ["pr", "srk", "pr78"].includes(m)) || "pr");
+        const envModel = pure && ref ? ref : (["pr", "srk", "pr78"].find((m) => models.includes(m)) || "pr");
         env = await call("/api/envelope", { ...gas, model: envModel });
       } catch (e) {
         envError = e.message;
@@ -270,7 +270,8 @@
     const hasRef = points.some((p) => p.reference_z !== null && p.reference_z !== undefined);
     if (hasRef) {
       data.push(points.map((p) => p.reference_z ?? null));
-      series.push({ label: `reference (${s.ref})`, stroke: "#000", width: 3 });
+      const named = s.state.results.find((r) => r.model === s.ref);
+      series.push({ label: named ? named.model_name : "reference", stroke: "#000", width: 3 });
       labels.push("reference");
     }
     ids.forEach((id, k) => {
