@@ -120,7 +120,7 @@ pub enum RootArg {
 }
 
 /// A fluid or a mixture.
-#[derive(Debug, Args)]
+#[derive(Debug, Clone, Args)]
 pub struct FluidArgs {
     /// A pure fluid by name, alias, formula or CAS number (e.g. methane, CO2, 124-38-9).
     #[arg(

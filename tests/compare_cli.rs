@@ -423,3 +423,92 @@ fn a_fluid_with_a_reference_formulation_is_compared_with_it_by_default() {
     assert!(dev("if97") < 1e-2, "{}", dev("if97"));
     assert!(dev("pr") > 5.0, "{}", dev("pr"));
 }
+
+/// The texts of an SVG chart with their (x, y) anchors.
+fn svg_texts(svg: &str) -> Vec<(f64, f64, String)> {
+    let attr = |tag: &str, name: &str| -> f64 {
+        let key = format!(" {name}=\"");
+        tag.find(&key)
+            .and_then(|i| tag[i + key.len()..].split('"').next())
+            .and_then(|v| v.parse().ok())
+            .unwrap_or(f64::NAN)
+    };
+    svg.split("<text")
+        .skip(1)
+        .filter_map(|chunk| {
+            let (tag, rest) = chunk.split_once('>')?;
+            let body = rest.split("</text>").next()?.trim().to_string();
+            Some((attr(tag, "x"), attr(tag, "y"), body))
+        })
+        .collect()
+}
+
+/// The isotherm chart reads at a glance (nitrogen, 150-300 K, 1-300 bar, the case where
+/// labels overlapped and the reference curve was kinked): every curve is sampled at 200
+/// pressures whatever the user's grid (here 30), the pressure axis ends at the data (300 bar,
+/// not 350), the legend sits beside the plot and names the reference formulation (Span et
+/// al. 2000 for nitrogen), and the isotherm labels are at least a line apart.
+#[test]
+fn isotherm_chart_reads_at_a_glance() {
+    let dir = tempfile::tempdir().unwrap();
+    let charts = dir.path().join("charts");
+    let out = zf()
+        .args([
+            "compare",
+            "--fluid",
+            "nitrogen",
+            "-t",
+            "150..300 K n 4",
+            "-p",
+            "1..300 bar n 30",
+            "--charts",
+        ])
+        .arg(&charts)
+        .output()
+        .unwrap();
+    assert!(
+        out.status.success(),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let svg = std::fs::read_to_string(charts.join("isotherms.svg")).unwrap();
+    // The reference isotherms: solid polylines of 200 points each.
+    let long = svg
+        .split("<polyline")
+        .skip(1)
+        .filter(|p| {
+            p.split(" points=\"").nth(1).is_some_and(|pts| {
+                pts.split('"')
+                    .next()
+                    .unwrap_or("")
+                    .split_whitespace()
+                    .count()
+                    >= 200
+            })
+        })
+        .count();
+    assert_eq!(long, 4, "one 200-point reference curve per isotherm");
+    let texts = svg_texts(&svg);
+    let ticks: Vec<f64> = texts
+        .iter()
+        .filter(|t| t.1 > 600.0)
+        .filter_map(|t| t.2.parse::<f64>().ok())
+        .collect();
+    let top = ticks.iter().copied().fold(f64::MIN, f64::max);
+    assert!(
+        (250.0..=300.0).contains(&top),
+        "last pressure tick {top}: {ticks:?}"
+    );
+    let legend = texts.iter().find(|t| t.2.contains("Span et al.")).unwrap();
+    assert!(legend.0 > 700.0, "legend at x = {}", legend.0);
+    let mut labels: Vec<f64> = texts
+        .iter()
+        .filter(|t| t.2.ends_with(" K"))
+        .map(|t| t.1)
+        .collect();
+    assert_eq!(labels.len(), 4, "{texts:?}");
+    labels.sort_by(f64::total_cmp);
+    for w in labels.windows(2) {
+        assert!(w[1] - w[0] >= 14.0, "labels {labels:?}");
+    }
+}

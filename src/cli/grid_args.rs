@@ -5,7 +5,7 @@ use super::{FluidArgs, Format};
 use clap::{Args, ValueEnum};
 
 /// Arguments of `zfactor compare`.
-#[derive(Debug, Args)]
+#[derive(Debug, Clone, Args)]
 pub struct CompareArgs {
     #[command(flatten)]
     pub fluid: FluidArgs,

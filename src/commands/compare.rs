@@ -437,8 +437,10 @@ pub fn dispatch(args: &CompareArgs) -> Result<crate::exit::Exit, CliError> {
         for f in [&args.states, &args.reference_file].into_iter().flatten() {
             inputs.push(std::path::Path::new(f));
         }
+        let curves = chart_curves(args, &report)?;
         report.charts = crate::render::chart::write_all(
             &report,
+            curves.as_ref(),
             std::path::Path::new(dir),
             args.chart_format,
             args.force,
@@ -447,6 +449,46 @@ pub fn dispatch(args: &CompareArgs) -> Result<crate::exit::Exit, CliError> {
     }
     crate::render::compare::render(&report, args.format)?;
     Ok(super::exit_for(&report.warnings))
+}
+
+/// Points per isotherm of the charts, whatever grid the comparison used.
+pub const CHART_POINTS: usize = 200;
+
+/// The isotherms of the charts sampled on a grid of their own: the comparison's models (and
+/// its reference model) at [`CHART_POINTS`] pressures spanning the user's, on the chart's
+/// temperatures ([`crate::render::chart::chart_temperatures`]); `None` for a list of states
+/// (the chart then draws the states themselves).
+fn chart_curves(
+    args: &CompareArgs,
+    report: &CompareReport,
+) -> Result<Option<CompareReport>, CliError> {
+    let Some(grid) = &report.grid else {
+        return Ok(None);
+    };
+    let p = &grid.pressures_pa;
+    let (lo, hi) = p
+        .iter()
+        .fold((f64::MAX, f64::MIN), |(a, b), &x| (a.min(x), b.max(x)));
+    if lo >= hi || !lo.is_finite() || !hi.is_finite() {
+        return Ok(None);
+    }
+    let temps = crate::render::chart::chart_temperatures(&grid.temperatures_k);
+    let mut sampled = args.clone();
+    sampled.temperatures = Some(
+        temps
+            .iter()
+            .map(|t| format!("{t:e} K"))
+            .collect::<Vec<_>>()
+            .join(","),
+    );
+    sampled.pressures = Some(format!("{lo:e}..{hi:e} Pa n {CHART_POINTS}"));
+    sampled.states = None;
+    if report.reference.kind != "model" {
+        // Reference data are drawn as the points they are; the curves are the models'.
+        sampled.reference = None;
+        sampled.reference_file = None;
+    }
+    run(&sampled).map(Some)
 }
 
 /// What the points are kept for: the chosen output, and charts when asked.
@@ -838,16 +880,19 @@ pub fn run(args: &CompareArgs) -> Result<CompareReport, CliError> {
             kind: "model",
             id: Some(b.id.clone()),
             citation: Some(b.citation.clone()),
+            name: Some(b.name.clone()),
         },
         Reference::Data { id, citation } => ReferenceInfo {
             kind: "data",
             id: Some(id.clone()),
             citation: Some(citation.clone()),
+            name: None,
         },
         Reference::Nothing => ReferenceInfo {
             kind: "none",
             id: None,
             citation: None,
+            name: None,
         },
     };
     Ok(CompareReport {

@@ -2,7 +2,9 @@
 //! licence is in `fonts/DejaVuSans-LICENSE.txt`):
 //!
 //! - `isotherms`: Z against pressure on up to six isotherms, one line style per model, the
-//!   reference as a solid black line (a model) or black circles (data);
+//!   reference as a solid black line (a model) or black circles (data), each curve sampled
+//!   at 200 pressures (the comparison re-run on the chart's own grid), the legend beside the
+//!   plot;
 //! - `deviation-<model>`: the density deviation of each model from the reference over the
 //!   T-P grid, shaded by tolerance band, with the boundary of each tolerance;
 //! - `ideal-gas-map`: |Z - 1| over the grid, shaded and bounded the same way.
@@ -72,6 +74,7 @@ fn line_style(k: usize) -> (RGBColor, u32, u32) {
 /// Writes every chart the report allows into `dir`; returns the paths written.
 pub fn write_all(
     r: &CompareReport,
+    curves: Option<&CompareReport>,
     dir: &Path,
     format: ChartFormat,
     force: bool,
@@ -107,8 +110,8 @@ pub fn write_all(
         written.push(path.display().to_string());
         Ok(())
     };
-    emit("isotherms", &|root| isotherms(r, root), &|root| {
-        isotherms(r, root)
+    emit("isotherms", &|root| isotherms(r, curves, root), &|root| {
+        isotherms(r, curves, root)
     })?;
     if let Some(g) = &r.grid {
         let t = &g.temperatures_k;
@@ -166,14 +169,10 @@ pub fn write_all(
     Ok(written)
 }
 
-/// Z against P on up to six isotherms.
-fn isotherms<DB: DrawingBackend>(
-    r: &CompareReport,
-    root: DrawingArea<DB, Shift>,
-) -> Result<(), CliError> {
-    root.fill(&WHITE).map_err(draw_err)?;
-    // Temperatures present, in order, thinned evenly to MAX_ISOTHERMS.
-    let mut temps: Vec<f64> = r.points.held().iter().map(|p| p.temperature_k).collect();
+/// The temperatures the isotherm chart draws: those of the grid, in order, thinned evenly to
+/// [`MAX_ISOTHERMS`].
+pub fn chart_temperatures(t: &[f64]) -> Vec<f64> {
+    let mut temps: Vec<f64> = t.to_vec();
     temps.sort_by(f64::total_cmp);
     temps.dedup_by(|a, b| a.to_bits() == b.to_bits());
     if temps.len() > MAX_ISOTHERMS {
@@ -182,48 +181,73 @@ fn isotherms<DB: DrawingBackend>(
             .map(|k| temps[k * (n - 1) / (MAX_ISOTHERMS - 1)])
             .collect();
     }
-    let on = |t: f64| {
-        let mut pts: Vec<&crate::report::compare_points::PointReport> = r
+    temps
+}
+
+/// Width of the legend to the right of the plot, pixels.
+const LEGEND_WIDTH: u32 = 250;
+/// Least vertical distance between two isotherm labels, pixels.
+const LABEL_GAP: i32 = 17;
+
+/// Z against P on up to six isotherms: each model's curve sampled on `curves` (the
+/// comparison re-run on [`crate::commands::compare::CHART_POINTS`] pressures per isotherm)
+/// or, for a list of states, through the states; the reference as a solid black line (a
+/// model) or black circles (data). The axes end at the data; the legend, naming the
+/// reference formulation, sits beside the plot; the isotherms are labelled at their right
+/// ends, moved apart where they would overlap.
+fn isotherms<DB: DrawingBackend>(
+    r: &CompareReport,
+    curves: Option<&CompareReport>,
+    root: DrawingArea<DB, Shift>,
+) -> Result<(), CliError> {
+    root.fill(&WHITE).map_err(draw_err)?;
+    let src = curves.unwrap_or(r);
+    let all_t: Vec<f64> = src.points.held().iter().map(|p| p.temperature_k).collect();
+    let temps = chart_temperatures(&all_t);
+    fn on(from: &CompareReport, t: f64) -> Vec<&crate::report::compare_points::PointReport> {
+        let mut pts: Vec<&crate::report::compare_points::PointReport> = from
             .points
             .held()
             .iter()
-            .filter(|p| p.temperature_k.to_bits() == t.to_bits())
+            .filter(|p| (p.temperature_k - t).abs() <= 1e-9 * t)
             .collect();
         pts.sort_by(|a, b| a.pressure_pa.total_cmp(&b.pressure_pa));
         pts
-    };
+    }
     let mut zs: Vec<f64> = Vec::new();
     let mut ps: Vec<f64> = Vec::new();
     for &t in &temps {
-        for p in on(t) {
+        for p in on(src, t) {
             ps.push(p.pressure_pa / PA_PER_BAR);
             zs.extend(p.values.iter().filter_map(|v| v.z));
-            zs.extend(p.reference_z);
+            zs.extend(p.reference_z.filter(|_| r.reference.kind == "model"));
+        }
+        if r.reference.kind == "data" {
+            zs.extend(on(r, t).iter().filter_map(|p| p.reference_z));
         }
     }
     let fin = |v: &[f64], f: fn(f64, f64) -> f64, init: f64| {
         v.iter().copied().filter(|x| x.is_finite()).fold(init, f)
     };
-    let (pmin, pmax) = (fin(&ps, f64::min, f64::MAX), fin(&ps, f64::max, f64::MIN));
+    let (x0, x1) = (fin(&ps, f64::min, f64::MAX), fin(&ps, f64::max, f64::MIN));
     let (zmin, zmax) = (fin(&zs, f64::min, f64::MAX), fin(&zs, f64::max, f64::MIN));
-    if !(pmin.is_finite() && pmax.is_finite() && zmin.is_finite() && zmax.is_finite()) {
+    if !(x0.is_finite() && x1.is_finite() && zmin.is_finite() && zmax.is_finite()) {
         return Err(CliError::Output("no values to chart".to_string()));
     }
-    let pad = |lo: f64, hi: f64| {
-        let d = (hi - lo).abs().max(1e-6 * hi.abs().max(1.0));
-        (lo - 0.05 * d, hi + 0.05 * d)
-    };
-    let (x0, x1) = pad(pmin, pmax);
-    let (y0, y1) = pad(zmin, zmax);
-    let mut chart = ChartBuilder::on(&root)
+    let x1 = if x1 > x0 { x1 } else { x0 + 1.0 };
+    let dz = (zmax - zmin).abs().max(1e-6);
+    let (y0, y1) = (zmin - 0.04 * dz, zmax + 0.04 * dz);
+    let (plot, side) = root.split_horizontally(SIZE.0 - LEGEND_WIDTH);
+    let mut chart = ChartBuilder::on(&plot)
         .caption(
             format!("Z against pressure: {}", short(&r.fluid)),
             ("sans-serif", 22),
         )
         .margin(16)
+        .margin_right(72)
         .x_label_area_size(50)
         .y_label_area_size(70)
-        .build_cartesian_2d(x0..x1 + 0.12 * (x1 - x0), y0..y1)
+        .build_cartesian_2d(x0..x1, y0..y1)
         .map_err(draw_err)?;
     chart
         .configure_mesh()
@@ -234,91 +258,160 @@ fn isotherms<DB: DrawingBackend>(
         .light_line_style(RGBColor(235, 235, 235))
         .draw()
         .map_err(draw_err)?;
-    let model_count = r.points.held().first().map_or(0, |p| p.values.len());
-    for k in 0..model_count {
+    // The legend's entries: (name, how to draw its sample).
+    let mut legend: Vec<(String, Sample)> = Vec::new();
+    let models: Vec<String> = src
+        .points
+        .held()
+        .first()
+        .map(|p| p.values.iter().map(|v| v.model.clone()).collect())
+        .unwrap_or_default();
+    for (k, name) in models.iter().enumerate() {
         let (color, dash, gap) = line_style(k);
-        let name = r.points.held()[0].values[k].model.clone();
         let style = ShapeStyle::from(&color).stroke_width(2);
-        for (n, &t) in temps.iter().enumerate() {
-            let line: Vec<(f64, f64)> = on(t)
-                .iter()
-                .filter_map(|p| p.values[k].z.map(|z| (p.pressure_pa / PA_PER_BAR, z)))
-                .collect();
-            let series = chart
-                .draw_series(DashedLineSeries::new(line, dash, gap, style))
-                .map_err(draw_err)?;
-            if n == 0 {
-                series.label(name.clone()).legend(move |(x, y)| {
-                    DashedPathElement::new(vec![(x, y), (x + 20, y)], dash, gap, style)
-                });
+        for &t in &temps {
+            // A curve is broken where the model gives no value (a failed or two-phase state).
+            let mut run: Vec<(f64, f64)> = Vec::new();
+            let mut runs: Vec<Vec<(f64, f64)>> = Vec::new();
+            for p in on(src, t) {
+                match p.values.get(k).and_then(|v| v.z) {
+                    Some(z) if p.phase != "two-phase" => run.push((p.pressure_pa / PA_PER_BAR, z)),
+                    _ => runs.push(std::mem::take(&mut run)),
+                }
             }
-        }
-    }
-    let black = ShapeStyle::from(&BLACK).stroke_width(2);
-    let mut labelled = false;
-    for &t in &temps {
-        let refs: Vec<(f64, f64)> = on(t)
-            .iter()
-            .filter_map(|p| p.reference_z.map(|z| (p.pressure_pa / PA_PER_BAR, z)))
-            .collect();
-        if refs.is_empty() {
-            continue;
-        }
-        let label = format!(
-            "reference ({})",
-            r.reference.id.as_deref().unwrap_or("data")
-        );
-        if r.reference.kind == "model" {
-            let s = chart
-                .draw_series(LineSeries::new(refs.clone(), black))
-                .map_err(draw_err)?;
-            if !labelled {
-                s.label(label)
-                    .legend(move |(x, y)| PathElement::new(vec![(x, y), (x + 20, y)], black));
-                labelled = true;
-            }
-        } else {
-            let s = chart
-                .draw_series(refs.iter().map(|&(x, y)| {
-                    Circle::new((x, y), 4, ShapeStyle::from(&BLACK).stroke_width(2))
-                }))
-                .map_err(draw_err)?;
-            if !labelled {
-                s.label(label).legend(move |(x, y)| {
-                    Circle::new((x + 10, y), 4, ShapeStyle::from(&BLACK).stroke_width(2))
-                });
-                labelled = true;
-            }
-        }
-    }
-    // Label each isotherm at its highest pressure.
-    for &t in &temps {
-        let pts = on(t);
-        if let Some(last) = pts.last() {
-            let z = last
-                .reference_z
-                .or_else(|| last.values.iter().find_map(|v| v.z));
-            if let Some(z) = z {
+            runs.push(run);
+            for line in runs.into_iter().filter(|l| l.len() > 1) {
                 chart
-                    .draw_series(std::iter::once(Text::new(
-                        format!(" {} K", crate::render::number::sig(t, 4)),
-                        (last.pressure_pa / PA_PER_BAR, z),
-                        ("sans-serif", 14),
-                    )))
+                    .draw_series(DashedLineSeries::new(line, dash, gap, style))
                     .map_err(draw_err)?;
             }
         }
+        legend.push((name.clone(), Sample::Dashed(color, dash, gap)));
     }
-    chart
-        .configure_series_labels()
-        .background_style(WHITE.mix(0.9))
-        .border_style(BLACK)
-        .label_font(("sans-serif", 15))
-        .position(SeriesLabelPosition::LowerLeft)
-        .draw()
-        .map_err(draw_err)?;
+    let reference_name = r
+        .reference
+        .name
+        .clone()
+        .or_else(|| r.reference.id.clone())
+        .unwrap_or_else(|| "reference".to_string());
+    let black = ShapeStyle::from(&BLACK).stroke_width(2);
+    if r.reference.kind == "model" {
+        for &t in &temps {
+            let line: Vec<(f64, f64)> = on(src, t)
+                .iter()
+                .filter(|p| p.phase != "two-phase")
+                .filter_map(|p| p.reference_z.map(|z| (p.pressure_pa / PA_PER_BAR, z)))
+                .collect();
+            chart
+                .draw_series(LineSeries::new(line, black))
+                .map_err(draw_err)?;
+        }
+        legend.push((format!("reference: {reference_name}"), Sample::Solid));
+    } else if r.reference.kind == "data" {
+        for &t in &temps {
+            let dots: Vec<(f64, f64)> = on(r, t)
+                .iter()
+                .filter_map(|p| p.reference_z.map(|z| (p.pressure_pa / PA_PER_BAR, z)))
+                .collect();
+            chart
+                .draw_series(dots.into_iter().map(|(x, y)| Circle::new((x, y), 4, black)))
+                .map_err(draw_err)?;
+        }
+        legend.push((format!("reference data: {reference_name}"), Sample::Dot));
+    }
+    // Each isotherm labelled at its right end, in the margin beside the plot; labels that
+    // would overlap are pushed apart, keeping their order.
+    let mut labels: Vec<(i32, i32, String)> = Vec::new();
+    for &t in &temps {
+        let pts = on(src, t);
+        let last = pts.iter().rev().find_map(|p| {
+            let z = p
+                .reference_z
+                .filter(|_| r.reference.kind == "model")
+                .or_else(|| p.values.iter().find_map(|v| v.z))?;
+            Some((p.pressure_pa / PA_PER_BAR, z))
+        });
+        if let Some((x, z)) = last {
+            let (px, py) = chart.backend_coord(&(x, z));
+            labels.push((
+                px + 6,
+                py,
+                format!("{} K", crate::render::number::sig(t, 4)),
+            ));
+        }
+    }
+    labels.sort_by_key(|l| l.1);
+    for i in 1..labels.len() {
+        if labels[i].1 - labels[i - 1].1 < LABEL_GAP {
+            labels[i].1 = labels[i - 1].1 + LABEL_GAP;
+        }
+    }
+    for (x, y, text) in labels {
+        root.draw(&Text::new(text, (x, y - 7), ("sans-serif", 14)))
+            .map_err(draw_err)?;
+    }
+    // The legend, beside the plot: each name on up to two lines.
+    side.fill(&WHITE).map_err(draw_err)?;
+    let mut y = 70;
+    for (name, sample) in &legend {
+        let (a, b) = ((8, y), (40, y));
+        match *sample {
+            Sample::Dashed(color, dash, gap) => side
+                .draw(&DashedPathElement::new(
+                    vec![a, b],
+                    dash,
+                    gap,
+                    ShapeStyle::from(&color).stroke_width(2),
+                ))
+                .map_err(draw_err)?,
+            Sample::Solid => side
+                .draw(&PathElement::new(vec![a, b], black))
+                .map_err(draw_err)?,
+            Sample::Dot => side
+                .draw(&Circle::new((24, y), 4, black))
+                .map_err(draw_err)?,
+        }
+        for line in legend_lines(name, 26) {
+            side.draw(&Text::new(line, (48, y - 8), ("sans-serif", 15)))
+                .map_err(draw_err)?;
+            y += 18;
+        }
+        y += 8;
+    }
     root.present().map_err(draw_err)?;
     Ok(())
+}
+
+/// How a legend entry's sample is drawn.
+#[derive(Debug, Clone, Copy)]
+enum Sample {
+    Dashed(RGBColor, u32, u32),
+    Solid,
+    Dot,
+}
+
+/// `s` in lines of at most `n` characters, broken at spaces, two lines at most (the second
+/// ends in an ellipsis when more is left).
+fn legend_lines(s: &str, n: usize) -> Vec<String> {
+    let mut lines: Vec<String> = vec![String::new()];
+    for word in s.split_whitespace() {
+        let last = lines.len() - 1;
+        if !lines[last].is_empty() && lines[last].chars().count() + 1 + word.chars().count() > n {
+            lines.push(String::new());
+        }
+        let last = lines.len() - 1;
+        if !lines[last].is_empty() {
+            lines[last].push(' ');
+        }
+        lines[last].push_str(word);
+    }
+    if lines.len() > 2 {
+        let rest = lines[1..].join(" ");
+        let cut: String = rest.chars().take(n.saturating_sub(3)).collect();
+        lines.truncate(1);
+        lines.push(format!("{cut}..."));
+    }
+    lines
 }
 
 /// A fluid label short enough for a title.

@@ -61,6 +61,8 @@ pub struct ReferenceInfo {
     pub id: Option<String>,
     /// Where its values come from.
     pub citation: Option<String>,
+    /// A reference model's name, short enough for a chart legend.
+    pub name: Option<String>,
 }
 
 /// The axes of a grid.
