@@ -538,3 +538,56 @@ fn inputs_come_back_as_typed_and_zero_is_zero() {
     assert_eq!(v["results"][0]["enthalpy_j_mol"], serde_json::json!(0.0));
     assert_eq!(v["results"][0]["entropy_j_mol_k"], serde_json::json!(0.0));
 }
+
+/// Messages quote the input as typed and speak the user's units: venting below the minimum
+/// design metal temperature says "venting to 1 bar ... -141.57 degC ... -29 degC", not Pa
+/// and K; a compressor whose discharge is below its suction names both in bar.
+#[test]
+fn messages_quote_the_input_as_typed() {
+    let (code, _, err) = run(&[
+        "vessel",
+        "--mix",
+        "methane=0.9,ethane=0.1",
+        "--volume",
+        "2 m3",
+        "-t",
+        "20 degC",
+        "-p",
+        "70 barg",
+        "--vent-to",
+        "1 bar",
+        "--mdmt",
+        "-29 degC",
+        "-m",
+        "pr",
+    ]);
+    assert_eq!(code, 3, "{err}");
+    let line = err
+        .lines()
+        .find(|l| l.contains("minimum design metal"))
+        .unwrap();
+    assert!(
+        line.contains("venting to 1 bar cools the gas to -"),
+        "{line}"
+    );
+    assert!(
+        line.contains(" degC, below") && line.ends_with("of -29 degC"),
+        "{line}"
+    );
+    assert!(!line.contains(" Pa") && !line.contains(" K"), "{line}");
+    let (code, _, err) = run(&[
+        "compress",
+        "--fluid",
+        "methane",
+        "-p",
+        "90 barg",
+        "-t",
+        "25 degC",
+        "--discharge-pressure",
+        "30 barg",
+        "--isentropic-efficiency",
+        "0.8",
+    ]);
+    assert_eq!(code, 2);
+    assert!(err.contains("\"30 barg\" (31.01325 bar abs)"), "{err}");
+}

@@ -21,9 +21,12 @@ pub fn run(args: &CompressArgs) -> Result<CompressReport, CliError> {
     let p2 = jc::pressure(&args.discharge_pressure, amb)?;
     if p2 <= p1 {
         return Err(CliError::BadInput(format!(
-            "--discharge-pressure \"{}\" ({p2} Pa) is not above --suction-pressure \"{}\" \
-             ({p1} Pa): a compressor raises the pressure",
-            args.discharge_pressure, args.suction_pressure
+            "--discharge-pressure \"{}\" ({} bar abs) is not above --suction-pressure \"{}\" \
+             ({} bar abs): a compressor raises the pressure",
+            args.discharge_pressure,
+            p2 / crate::units::PA_PER_BAR,
+            args.suction_pressure,
+            p1 / crate::units::PA_PER_BAR
         )));
     }
     let (eff, kind, value) = match (args.isentropic_efficiency, args.polytropic_efficiency) {

@@ -35,9 +35,12 @@ pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
     for r in &results {
         for v in r.volumes.iter().filter(|v| v.phase == "two-phase") {
             warnings.push(format!(
-                "{}: the feed splits into vapour and liquid at the {} conditions ({} K, {} Pa): \
-                 the volume there is that of both phases together, not of a gas flow",
-                r.model, v.base, v.temperature_k, v.pressure_pa
+                "{}: the feed splits into vapour and liquid at the {} conditions ({} K, {} bar \
+                 abs): the volume there is that of both phases together, not of a gas flow",
+                r.model,
+                v.base,
+                v.temperature_k,
+                v.pressure_pa / crate::units::PA_PER_BAR
             ));
         }
     }

@@ -353,9 +353,13 @@ fn compute(
         if !st.stable {
             return Err(CliError::Computation(format!(
                 "model {}: the mixture at this state is not stable as one phase (it lies inside \
-                 the two-phase region at T = {:.3} K, P = {:.6e} Pa); a single-phase Z would be \
-                 meaningless. Give temperature and pressure to see the phase split.",
-                built.id, pr.t, pr.p
+                 the two-phase region at T = {:.3} K ({:.2} degC), P = {:.6} bar abs); a \
+                 single-phase Z would be meaningless. Give temperature and pressure to see the \
+                 phase split.",
+                built.id,
+                pr.t,
+                pr.t - crate::units::KELVIN_AT_0_DEGC,
+                pr.p / crate::units::PA_PER_BAR
             )));
         }
     }

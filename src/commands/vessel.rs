@@ -10,6 +10,7 @@ use crate::report::vessel::{
     Fill, Heating, TargetReport, UsableGas, VentPointReport, VentingReport, VesselInput,
     VesselReport, VesselResult,
 };
+use crate::shown_units::TemperatureScale;
 use crate::units;
 use eos::jobs::base_conditions::molar_volume;
 use eos::jobs::vessel::{self, Target};
@@ -31,6 +32,11 @@ struct Input {
     vent: Option<f64>,
     mdmt: Option<f64>,
     steps: usize,
+    /// The vent pressure and the MDMT as typed, and the temperature scale of the user, for
+    /// messages.
+    vent_text: String,
+    mdmt_text: String,
+    scale: TemperatureScale,
 }
 
 /// Computes the report.
@@ -65,6 +71,9 @@ pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
         vent: opt_p(&args.vent_to)?,
         mdmt: opt_t(&args.mdmt)?,
         steps: args.vent_steps,
+        vent_text: args.vent_to.clone().unwrap_or_default(),
+        mdmt_text: args.mdmt.clone().unwrap_or_default(),
+        scale: TemperatureScale::of_input(&args.temperature),
     };
     if input.vent.is_some_and(|p2| p2 >= input.p) {
         return Err(CliError::BadInput(format!(
@@ -229,10 +238,12 @@ fn one(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, CliError> {
             let end_i = &vi.path[vi.path.len() - 1];
             if v.below_mdmt == Some(true) {
                 notes.push(format!(
-                    "warning: venting to {p2:.0} Pa cools the gas to {:.2} K, below the minimum \
-                     design metal temperature of {:.2} K",
-                    v.t_min,
-                    inp.mdmt.unwrap_or(f64::NAN)
+                    "warning: venting to {} cools the gas to {:.2} {}, below the minimum design \
+                     metal temperature of {}",
+                    inp.vent_text.trim(),
+                    inp.scale.from_kelvin(v.t_min),
+                    inp.scale.label(),
+                    inp.mdmt_text.trim()
                 ));
             }
             if end.state.phase == Phase::TwoPhase {
