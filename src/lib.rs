@@ -88,7 +88,7 @@ where
     let code = commands::dispatch(&cli)?;
     let notes = input_notes::take();
     for n in &notes {
-        eprintln!("warning: {n}");
+        render::warn(n);
     }
     Ok(match code {
         Exit::Success if !notes.is_empty() => Exit::SuccessWithWarnings,

@@ -98,7 +98,7 @@ fn stream(args: &TableArgs) -> Result<Exit, CliError> {
         }
     };
     for w in &warnings {
-        eprintln!("warning: {w}");
+        crate::render::warn(w);
     }
     if args.format != TableFormat::Table {
         eprintln!("caution: {}", crate::CAUTION);

@@ -39,10 +39,15 @@ pub fn emit(text: &str) -> Result<(), CliError> {
         .map_err(|e| CliError::Output(e.to_string()))
 }
 
+/// Prints one warning on stderr, folded at the terminal width like every prose line.
+pub fn warn(w: &str) {
+    eprint!("{}", wrap::fold(&format!("warning: {w}\n")));
+}
+
 /// Prints warnings and the caution on stderr (for formats whose stdout must stay data only).
 pub fn side_notes(warnings: &[String], caution: Option<&str>) {
     for w in warnings {
-        eprintln!("warning: {w}");
+        warn(w);
     }
     if let Some(c) = caution {
         eprintln!("caution: {c}");
