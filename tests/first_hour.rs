@@ -593,3 +593,103 @@ fn messages_quote_the_input_as_typed() {
     assert_eq!(code, 2);
     assert!(err.contains("\"30 barg\" (31.01325 bar abs)"), "{err}");
 }
+
+/// The README's table of shared options says which commands take each option; every such
+/// claim holds in the commands' `--help` (the table is the user's map: it must not drift).
+#[test]
+fn the_readme_option_table_matches_help() {
+    let readme =
+        std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/README.md")).unwrap();
+    let table: Vec<&str> = readme
+        .lines()
+        .skip_while(|l| !l.starts_with("| option | meaning | taken by |"))
+        .skip(2)
+        .take_while(|l| l.starts_with('|'))
+        .collect();
+    assert!(
+        table.len() >= 8,
+        "the option table is missing from the README"
+    );
+    let computing = [
+        "state",
+        "saturation",
+        "flash",
+        "envelope",
+        "table",
+        "compare",
+        "vessel",
+        "compress",
+        "flow",
+        "process",
+        "relief",
+    ];
+    let jobs = ["vessel", "compress", "flow", "process", "relief"];
+    let help = |c: &str| {
+        let (_, out, _) = run(&[c, "--help"]);
+        out
+    };
+    for row in table {
+        let cells: Vec<&str> = row.split(" | ").collect();
+        let (options, taken_by) = (cells[0], cells[2]);
+        let longs: Vec<String> = options
+            .split('`')
+            .skip(1)
+            .step_by(2)
+            .flat_map(|code| code.split('/'))
+            .filter_map(|o| o.split_whitespace().next())
+            .filter(|o| o.starts_with("--"))
+            .map(str::to_string)
+            .collect();
+        // The commands the row names, by phrase and by name.
+        let mut commands: Vec<&str> = Vec::new();
+        if taken_by.starts_with("every command that") || taken_by.starts_with("every computing") {
+            commands.extend(computing);
+        } else if taken_by.starts_with("every command") {
+            commands.extend(computing);
+            commands.extend(["audit", "fluids", "kij", "models"]);
+        } else if taken_by.starts_with("the same") {
+            commands.extend(computing);
+        }
+        if taken_by.contains("the jobs") {
+            commands.extend(jobs);
+        }
+        for name in taken_by.split('`').skip(1).step_by(2) {
+            if computing.contains(&name) || ["audit", "fluids", "kij", "models"].contains(&name) {
+                commands.push(name);
+            }
+        }
+        commands.sort_unstable();
+        commands.dedup();
+        assert!(!commands.is_empty(), "row names no command: {row}");
+        for c in &commands {
+            let h = help(c);
+            // A row may restrict a named command to some of its options: "`audit` (`--basis`)".
+            let only: Vec<&str> = taken_by
+                .split(&format!("`{c}` (")[..])
+                .nth(1)
+                .map(|rest| rest.split(')').next().unwrap_or(""))
+                .map(|inside| inside.split('`').skip(1).step_by(2).collect())
+                .unwrap_or_default();
+            for o in &longs {
+                if !only.is_empty() && !only.contains(&o.as_str()) {
+                    continue;
+                }
+                if *c == "compress" && (o == "--temperature" || o == "--pressure") {
+                    // The suction state, also spelled --temperature/--pressure (an alias).
+                    assert!(
+                        h.contains("--suction-temperature") && h.contains("alias"),
+                        "{c}"
+                    );
+                    continue;
+                }
+                if matches!(o.as_str(), "--output" | "--force") && !["table", "audit"].contains(c) {
+                    continue;
+                }
+                assert!(
+                    h.contains(o.as_str()),
+                    "the README says {c} takes {o}, and its --help does not list it"
+                );
+            }
+        }
+    }
+}

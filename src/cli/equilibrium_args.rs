@@ -62,6 +62,9 @@ pub struct EnvelopeArgs {
     /// Pressure where the trace starts on the dew curve and ends on the bubble curve.
     #[arg(long, default_value = "1 bar")]
     pub start_pressure: String,
+    /// Ambient pressure that a gauge --start-pressure is referred to.
+    #[arg(long, default_value = "101.325 kPa")]
+    pub ambient: String,
     /// Write the P-T chart to this file; SVG or PNG by the extension (.svg, .png).
     #[arg(long)]
     pub chart: Option<String>,

@@ -160,9 +160,9 @@ pub fn run(args: &EnvelopeArgs) -> Result<EnvelopeReport, CliError> {
     if feed.is_pure() {
         pure_curve(&built, m, &feed, args.pv.is_some(), &mut report)?;
     } else {
-        let p = units::pressure(&args.start_pressure).and_then(|p| {
-            units::absolute_pressure(&args.start_pressure, p, units::DEFAULT_AMBIENT_PA)
-        })?;
+        let ambient = units::ambient_pressure(&args.ambient)?;
+        let p = units::pressure(&args.start_pressure)
+            .and_then(|p| units::absolute_pressure(&args.start_pressure, p, ambient))?;
         mixture(&built, m, &feed, p, &mut report)?;
     }
     let finite = report.points.iter().all(|r| {

@@ -72,7 +72,7 @@ pub const ENDPOINTS: [Endpoint; 6] = [
     },
     Endpoint {
         command: "envelope",
-        options: &["model", "start-pressure"],
+        options: &["model", "start-pressure", "ambient"],
     },
     Endpoint {
         command: "compare",
