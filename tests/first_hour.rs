@@ -693,3 +693,64 @@ fn the_readme_option_table_matches_help() {
         }
     }
 }
+
+/// The inventory of a vessel and the relief inputs need only Z (and, for k, the departure
+/// functions that `state` derives from Z): the gas-gravity correlations (dak, hy) and
+/// Lee-Kesler answer them, with n = P V / (Z R T) and Z from the same model as `state`
+/// gives (the real-gas law, common practice); what needs heat and work is refused.
+#[test]
+fn z_only_models_answer_inventory_and_relief() {
+    let gas = "methane=0.9,ethane=0.06,propane=0.04";
+    let json = |args: &[&str]| -> Value {
+        let (code, out, err) = run(&[args, &["-f", "json"]].concat());
+        assert!(code == 0 || code == 3, "{args:?}: {err}");
+        serde_json::from_str(&out).unwrap()
+    };
+    let state = json(&[
+        "state", "--mix", gas, "-t", "15 degC", "-p", "200 barg", "-m", "dak,hy",
+    ]);
+    let vessel = json(&[
+        "vessel", "--mix", gas, "--volume", "1 m3", "-t", "15 degC", "-p", "200 barg", "-m",
+        "dak,hy",
+    ]);
+    for k in 0..2 {
+        let z = state["results"][k]["z"].as_f64().unwrap();
+        let r = &vessel["results"][k];
+        assert_eq!(r["model"], state["results"][k]["model"]);
+        let m = r["mass_kg"].as_f64().unwrap();
+        let mm = state["results"][k]["mass_density_kg_m3"].as_f64().unwrap()
+            / state["results"][k]["molar_density_mol_m3"]
+                .as_f64()
+                .unwrap();
+        let p = 200e5 + 101_325.0;
+        let want = p * 1.0 * mm / (z * 8.314_462_618 * 288.15);
+        assert!((m / want - 1.0).abs() < 1e-6, "{m} {want}");
+    }
+    let relief = json(&[
+        "relief", "--mix", gas, "-t", "60 degC", "-p", "110 bar", "-m", "dak,lk",
+    ]);
+    for r in relief["results"].as_array().unwrap() {
+        let k = r["isentropic_exponent"]["value"].as_f64().unwrap();
+        assert!((1.2..1.7).contains(&k), "{}: k = {k}", r["model"]);
+    }
+    let (code, _, err) = run(&[
+        "vessel",
+        "--fluid",
+        "methane",
+        "--volume",
+        "1 m3",
+        "-t",
+        "15 degC",
+        "-p",
+        "200 barg",
+        "--vent-to",
+        "1 bar",
+        "-m",
+        "dak",
+    ]);
+    assert_eq!(code, 2);
+    assert!(
+        err.contains("--vent-to needs a model with a Helmholtz energy"),
+        "{err}"
+    );
+}

@@ -272,3 +272,24 @@ fn flow_si(v: f64, key: &str, std: &dyn Fn(f64, &str) -> Flow) -> Option<Flow> {
         _ => return None,
     })
 }
+
+/// The job state of a model explicit in (T, P) (one phase: these models do not split a
+/// feed), from its properties at (T, P).
+pub fn explicit_state(st: &crate::models::ModelState, t: f64, p: f64) -> StateReport {
+    let pr = &st.props;
+    let m = pr.molar_mass;
+    StateReport {
+        temperature_k: t,
+        pressure_pa: p,
+        phase: st.phase.to_string(),
+        z: pr.z,
+        mass_density_kg_m3: pr.rho * m,
+        enthalpy_j_kg: pr.h / m,
+        entropy_j_kg_k: pr.s / m,
+        internal_energy_j_kg: pr.u / m,
+        vapor_mass_fraction: None,
+        vapor_mole_fraction: None,
+        liquid_composition: None,
+        vapor_composition: None,
+    }
+}

@@ -52,7 +52,10 @@ pub fn run(args: &ReliefArgs) -> Result<ReliefReport, CliError> {
 
 fn one(pair: &Pair, t: f64, p: f64, x: &[f64]) -> Result<ReliefResult, CliError> {
     let e = ctx(&pair.built.id);
-    let r = relief::at(pair.built.model()?, t, p, x).map_err(&e)?;
+    let Some(model) = pair.built.helmholtz() else {
+        return explicit(pair, t, p, x);
+    };
+    let r = relief::at(model, t, p, x).map_err(&e)?;
     let ri = relief::at(&pair.ideal, t, p, x).map_err(&e)?;
     Ok(ReliefResult {
         model: pair.built.id.clone(),
@@ -70,6 +73,50 @@ fn one(pair: &Pair, t: f64, p: f64, x: &[f64]) -> Result<ReliefResult, CliError>
         molar_mass_kg_mol: r.molar_mass,
         z_outside_range: r.z_outside_range,
         state: StateReport::from(&r.state),
+        notes: pair.built.notes.clone(),
+    })
+}
+
+/// Relief inputs from a model explicit in (T, P) (Lee-Kesler, the gas-gravity correlations,
+/// IF97): Z from the model, k = -(v/P)(dP/dv)_s from its properties (for the gas-gravity
+/// correlations, derived from Z and the components' ideal-gas cp, as `state` does).
+fn explicit(pair: &Pair, t: f64, p: f64, x: &[f64]) -> Result<ReliefResult, CliError> {
+    let e = ctx(&pair.built.id);
+    let id = pair.built.id.as_str();
+    let st = pair
+        .built
+        .at_tp(t, p, x, eos::state::RootChoice::LowestGibbs)
+        .map_err(&e)?;
+    let pr = &st.props;
+    if matches!(st.phase, eos::phase::Phase::Liquid) {
+        return Err(CliError::BadInput(format!(
+            "model {id}: the fluid is liquid at the relieving conditions: gas relief inputs do \
+             not apply"
+        )));
+    }
+    let k = pr.isentropic_exponent.ok_or_else(|| {
+        CliError::Computation(format!(
+            "model {id} gives no isentropic exponent at the relieving conditions"
+        ))
+    })?;
+    let ri = relief::at(&pair.ideal, t, p, x).map_err(&e)?;
+    let m = pr.molar_mass;
+    Ok(ReliefResult {
+        model: pair.built.id.clone(),
+        model_name: pair.built.name.clone(),
+        z: Compared::new(pr.z, ri.z),
+        isentropic_exponent: Compared::new(k, ri.k_ideal),
+        critical_pressure_ratio: Compared::new(
+            relief::critical_pressure_ratio(k).map_err(&e)?,
+            relief::critical_pressure_ratio(ri.k_ideal).map_err(&e)?,
+        ),
+        sizing_coefficient_c: Compared::new(
+            relief::sizing_coefficient(k).map_err(&e)?,
+            relief::sizing_coefficient(ri.k_ideal).map_err(&e)?,
+        ),
+        molar_mass_kg_mol: m,
+        z_outside_range: pr.z < Z_RANGE.0 || pr.z > Z_RANGE.1,
+        state: jc::explicit_state(&st, t, p),
         notes: pair.built.notes.clone(),
     })
 }

@@ -117,12 +117,74 @@ pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
     })
 }
 
+/// The inventory from a model explicit in (T, P) (Lee-Kesler, the gas-gravity correlations,
+/// IF97): what the vessel holds needs only Z, n = P V / (Z R T), and its standard volume Z at
+/// the base. The other operations follow the contents through heat and work, or solve for a
+/// state, and are refused for these models.
+fn inventory_only(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, CliError> {
+    let id = pair.built.id.as_str();
+    let asked: Vec<&str> = [
+        (inp.to_t.is_some(), "--to-temperature"),
+        (inp.draw.is_some(), "--draw-to-pressure"),
+        (inp.rated.is_some(), "--rated-pressure"),
+        (inp.target.is_some(), "--target-pressure/--target-mass"),
+        (inp.vent.is_some(), "--vent-to"),
+    ]
+    .into_iter()
+    .filter_map(|(on, name)| on.then_some(name))
+    .collect();
+    if !asked.is_empty() {
+        return Err(CliError::BadInput(format!(
+            "model {id} gives Z at (T, P) only: it answers the inventory (mass, standard \
+             volume), but {} needs a model with a Helmholtz energy (ideal, the cubic family, \
+             their Peneloux forms, virial, reference, sw12)",
+            asked.join(", ")
+        )));
+    }
+    let e = ctx(id);
+    let root = eos::state::RootChoice::LowestGibbs;
+    let st = pair.built.at_tp(inp.t, inp.p, x, root).map_err(&e)?;
+    let at_base = pair
+        .built
+        .at_tp_need(inp.base.t, inp.base.p, x, root, eos::need::Need::Volumetric)
+        .map_err(&e)?;
+    let inv_i = vessel::inventory(&pair.ideal, inp.v, inp.t, inp.p, x).map_err(&e)?;
+    let (vb_i, _) = molar_volume(&pair.ideal, inp.base.t, inp.base.p, x).map_err(&e)?;
+    let moles = inp.v * st.props.rho;
+    let mass = moles * st.props.molar_mass;
+    let standard = moles / at_base.props.rho;
+    let mut notes = pair.built.notes.clone();
+    notes.extend(st.warnings.iter().map(|w| format!("warning: {w}")));
+    Ok(VesselResult {
+        model: id.to_string(),
+        model_name: pair.built.name.clone(),
+        state: jc::explicit_state(&st, inp.t, inp.p),
+        mass_kg: mass,
+        mass_ideal_kg: inv_i.mass,
+        mass_ideal_error_pct: Compared::new(mass, inv_i.mass).ideal_error_pct,
+        moles_mol: moles,
+        moles_ideal_mol: inv_i.moles,
+        standard_volume_m3: standard,
+        standard_volume_ideal_m3: inv_i.moles * vb_i,
+        standard_volume_ideal_error_pct: Compared::new(standard, inv_i.moles * vb_i)
+            .ideal_error_pct,
+        heating: None,
+        usable: None,
+        fill: None,
+        target: None,
+        venting: None,
+        notes,
+    })
+}
+
 fn cmp(a: f64, b: f64) -> Compared {
     Compared::new(a, b)
 }
 
 fn one(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, CliError> {
-    let m: &dyn Model = pair.built.model()?;
+    let Some(m) = pair.built.helmholtz() else {
+        return inventory_only(pair, inp, x);
+    };
     let ig: &dyn Model = &pair.ideal;
     let id = pair.built.id.as_str();
     let e = ctx(id);
