@@ -511,4 +511,17 @@ fn isotherm_chart_reads_at_a_glance() {
     for w in labels.windows(2) {
         assert!(w[1] - w[0] >= 14.0, "labels {labels:?}");
     }
+    // The maps shade a 200 x 200 sampling of their own (not 4 blocks one isotherm wide) and
+    // draw each tolerance as a contour of the same field (every crossing: the unit test of
+    // render::chart::contour), with the legend beside the plot.
+    let map = std::fs::read_to_string(charts.join("ideal-gas-map.svg")).unwrap();
+    let columns = map.matches("<rect").count();
+    assert!(columns >= 200, "{columns} shaded cells");
+    let contour_pieces = map.matches("<polyline").count();
+    assert!(contour_pieces >= 200, "{contour_pieces} contour segments");
+    let legend = svg_texts(&map);
+    assert!(
+        legend.iter().any(|t| t.2 == "1 % contour" && t.0 > 700.0),
+        "{legend:?}"
+    );
 }

@@ -438,9 +438,11 @@ pub fn dispatch(args: &CompareArgs) -> Result<crate::exit::Exit, CliError> {
             inputs.push(std::path::Path::new(f));
         }
         let curves = chart_curves(args, &report)?;
+        let maps = chart_maps(args, &report)?;
         report.charts = crate::render::chart::write_all(
             &report,
             curves.as_ref(),
+            maps.as_ref(),
             std::path::Path::new(dir),
             args.chart_format,
             args.force,
@@ -485,6 +487,38 @@ fn chart_curves(
     sampled.states = None;
     if report.reference.kind != "model" {
         // Reference data are drawn as the points they are; the curves are the models'.
+        sampled.reference = None;
+        sampled.reference_file = None;
+    }
+    run(&sampled).map(Some)
+}
+
+/// Points per axis of the charts' maps.
+pub const MAP_POINTS: usize = 200;
+
+/// The deviation and ideal-gas maps sampled on a grid of their own: [`MAP_POINTS`] x
+/// [`MAP_POINTS`] states over the user's temperatures and pressures, with the comparison's
+/// models and reference; `None` for a list of states or a grid of one row or column.
+fn chart_maps(
+    args: &CompareArgs,
+    report: &CompareReport,
+) -> Result<Option<CompareReport>, CliError> {
+    let Some(grid) = &report.grid else {
+        return Ok(None);
+    };
+    let span = |v: &[f64]| {
+        v.iter()
+            .fold((f64::MAX, f64::MIN), |(a, b), &x| (a.min(x), b.max(x)))
+    };
+    let ((t0, t1), (p0, p1)) = (span(&grid.temperatures_k), span(&grid.pressures_pa));
+    if t0 >= t1 || p0 >= p1 || !(t0.is_finite() && p1.is_finite()) {
+        return Ok(None);
+    }
+    let mut sampled = args.clone();
+    sampled.temperatures = Some(format!("{t0:e}..{t1:e} K n {MAP_POINTS}"));
+    sampled.pressures = Some(format!("{p0:e}..{p1:e} Pa n {MAP_POINTS}"));
+    sampled.states = None;
+    if report.reference.kind != "model" {
         sampled.reference = None;
         sampled.reference_file = None;
     }

@@ -5,16 +5,16 @@
 //!   reference as a solid black line (a model) or black circles (data), each curve sampled
 //!   at 200 pressures (the comparison re-run on the chart's own grid), the legend beside the
 //!   plot;
-//! - `deviation-<model>`: the density deviation of each model from the reference over the
-//!   T-P grid, shaded by tolerance band, with the boundary of each tolerance;
-//! - `ideal-gas-map`: |Z - 1| over the grid, shaded and bounded the same way.
+//! - `deviation-<model>`: the density deviation of each model from the reference over a
+//!   200 x 200 sampling of the envelope, shaded by tolerance band, with each tolerance's
+//!   contour in the same field ([`contour`]);
+//! - `ideal-gas-map`: |Z - 1| over the same sampling, shaded and contoured the same way.
 //!
 //! Every series differs by dash pattern or marker as well as by colour, and the shading is
 //! grey, so the charts stay readable in black and white. Files are written atomically and
 //! never over an existing file without `--force`.
 
 use crate::cli::ChartFormat;
-use crate::compare::ideal_map::boundary_pressure;
 use crate::error::CliError;
 use crate::report::compare::CompareReport;
 use crate::units::PA_PER_BAR;
@@ -75,6 +75,7 @@ fn line_style(k: usize) -> (RGBColor, u32, u32) {
 pub fn write_all(
     r: &CompareReport,
     curves: Option<&CompareReport>,
+    maps: Option<&CompareReport>,
     dir: &Path,
     format: ChartFormat,
     force: bool,
@@ -113,7 +114,10 @@ pub fn write_all(
     emit("isotherms", &|root| isotherms(r, curves, root), &|root| {
         isotherms(r, curves, root)
     })?;
-    if let Some(g) = &r.grid {
+    // The maps shade, and draw the tolerance contours of, the field sampled on their own
+    // grid; without one (a list of states), the comparison's own grid.
+    let m = maps.unwrap_or(r);
+    if let Some(g) = &m.grid {
         let t = &g.temperatures_k;
         let p = &g.pressures_pa;
         let tolerances: Vec<f64> = r
@@ -121,13 +125,18 @@ pub fn write_all(
             .as_ref()
             .map(|m| m.tolerances.iter().map(|t| t.tolerance_pct).collect())
             .unwrap_or_else(|| r.advice.iter().map(|a| a.tolerance_pct).collect());
-        if r.reference.kind != "none" && t.len() >= 2 && p.len() >= 2 {
-            for (k, m) in r.models.iter().enumerate() {
+        let held = m.points.held();
+        if m.reference.kind != "none"
+            && t.len() >= 2
+            && p.len() >= 2
+            && held.len() == t.len() * p.len()
+        {
+            for (k, model) in m.models.iter().enumerate() {
                 let err: Vec<Vec<f64>> = (0..t.len())
                     .map(|i| {
                         (0..p.len())
                             .map(|j| {
-                                let pt = &r.points.held()[i * p.len() + j];
+                                let pt = &held[i * p.len() + j];
                                 if pt.phase == "two-phase" {
                                     f64::NAN
                                 } else {
@@ -139,10 +148,14 @@ pub fn write_all(
                     .collect();
                 let title = format!(
                     "|density deviation| of {} from {}",
-                    m.model,
-                    r.reference.id.as_deref().unwrap_or("the reference")
+                    model.model,
+                    m.reference
+                        .name
+                        .as_deref()
+                        .or(m.reference.id.as_deref())
+                        .unwrap_or("the reference")
                 );
-                let name = format!("deviation-{}", m.model);
+                let name = format!("deviation-{}", model.model);
                 emit(
                     &name,
                     &|root| band_map(root, &title, t, p, &err, &tolerances),
@@ -150,14 +163,14 @@ pub fn write_all(
                 )?;
             }
         }
-        if let Some(m) = &r.ideal_gas_map {
+        if let Some(im) = &m.ideal_gas_map {
             if t.len() >= 2 && p.len() >= 2 {
-                let err: Vec<Vec<f64>> = m
+                let err: Vec<Vec<f64>> = im
                     .error_pct
                     .iter()
                     .map(|row| row.iter().map(|e| e.unwrap_or(f64::NAN)).collect())
                     .collect();
-                let title = format!("ideal-gas error |Z - 1| (Z from {})", m.basis_model);
+                let title = format!("ideal-gas error |Z - 1| (Z from {})", im.basis_model);
                 emit(
                     "ideal-gas-map",
                     &|root| band_map(root, &title, t, p, &err, &tolerances),
@@ -450,8 +463,54 @@ fn edges(v: &[f64]) -> Vec<(f64, f64)> {
         .collect()
 }
 
-/// A map of `err[i][j]` (percent, at t[i], p[j]) shaded by tolerance band, with the boundary
-/// of each tolerance drawn across the temperatures.
+/// The segments where the field `f[i][j]` (at x[i], y[j]) crosses `level`, by marching
+/// squares: every crossing, in every cell whose four corners have values (a saddle cell is
+/// split by the mean of its corners).
+pub fn contour(x: &[f64], y: &[f64], f: &[Vec<f64>], level: f64) -> Vec<[(f64, f64); 2]> {
+    let mut out = Vec::new();
+    let cross = |a: (f64, f64, f64), b: (f64, f64, f64)| {
+        let s = (level - a.2) / (b.2 - a.2);
+        (a.0 + s * (b.0 - a.0), a.1 + s * (b.1 - a.1))
+    };
+    for i in 0..x.len().saturating_sub(1) {
+        for j in 0..y.len().saturating_sub(1) {
+            // Corners counter-clockwise: (i,j), (i+1,j), (i+1,j+1), (i,j+1).
+            let c = [
+                (x[i], y[j], f[i][j]),
+                (x[i + 1], y[j], f[i + 1][j]),
+                (x[i + 1], y[j + 1], f[i + 1][j + 1]),
+                (x[i], y[j + 1], f[i][j + 1]),
+            ];
+            if c.iter().any(|k| !k.2.is_finite()) {
+                continue;
+            }
+            let above: Vec<bool> = c.iter().map(|k| k.2 > level).collect();
+            let edges: Vec<(f64, f64)> = (0..4)
+                .filter(|&e| above[e] != above[(e + 1) % 4])
+                .map(|e| cross(c[e], c[(e + 1) % 4]))
+                .collect();
+            match edges.len() {
+                2 => out.push([edges[0], edges[1]]),
+                4 => {
+                    let mean = c.iter().map(|k| k.2).sum::<f64>() / 4.0;
+                    // Edges 0-1-2-3 in order; pair them so the centre's side is respected.
+                    if (mean > level) == above[0] {
+                        out.push([edges[0], edges[1]]);
+                        out.push([edges[2], edges[3]]);
+                    } else {
+                        out.push([edges[3], edges[0]]);
+                        out.push([edges[1], edges[2]]);
+                    }
+                }
+                _ => {}
+            }
+        }
+    }
+    out
+}
+
+/// A map of `err[i][j]` (percent, at t[i], p[j]) shaded by tolerance band, with the contour
+/// of each tolerance in the same field (every crossing), and the legend beside the plot.
 fn band_map<DB: DrawingBackend>(
     root: DrawingArea<DB, Shift>,
     title: &str,
@@ -468,39 +527,52 @@ fn band_map<DB: DrawingBackend>(
     let x1 = te.iter().map(|e| e.1).fold(f64::MIN, f64::max);
     let y0 = pe.iter().map(|e| e.0).fold(f64::MAX, f64::min).max(0.0);
     let y1 = pe.iter().map(|e| e.1).fold(f64::MIN, f64::max);
-    let mut chart = ChartBuilder::on(&root)
-        .caption(title, ("sans-serif", 22))
+    let (plot, side) = root.split_horizontally(SIZE.0 - LEGEND_WIDTH);
+    let mut chart = ChartBuilder::on(&plot)
+        .caption(short(title), ("sans-serif", 20))
         .margin(16)
         .x_label_area_size(50)
         .y_label_area_size(70)
         .build_cartesian_2d(x0..x1, y0..y1)
         .map_err(draw_err)?;
     let n = tolerances.len();
-    let band = |e: f64| tolerances.iter().filter(|&&tol| e > tol).count();
+    let band = |e: f64| -> Option<usize> {
+        e.is_finite()
+            .then(|| tolerances.iter().filter(|&&tol| e > tol).count())
+    };
+    // Cells of one band in a column are one rectangle.
+    let mut cells: Vec<Rectangle<(f64, f64)>> = Vec::new();
+    for i in 0..t.len() {
+        let mut j = 0;
+        while j < p.len() {
+            let b = band(err[i][j]);
+            let mut k = j;
+            while k + 1 < p.len() && band(err[i][k + 1]) == b {
+                k += 1;
+            }
+            let fill = match b {
+                Some(b) => grey(b, n).filled(),
+                None => WHITE.filled(),
+            };
+            cells.push(Rectangle::new(
+                [(te[i].0, pe[j].0.max(y0)), (te[i].1, pe[k].1)],
+                fill,
+            ));
+            j = k + 1;
+        }
+    }
+    chart.draw_series(cells).map_err(draw_err)?;
+    // States without a value (two-phase, or not computed): a sparse pattern of crosses, which
+    // reads in black and white where a shade could be mistaken for a band.
+    let stride = (t.len().max(p.len()) / 25).max(1);
     chart
-        .draw_series(t.iter().enumerate().flat_map(|(i, _)| {
-            let te = &te;
-            let pe = &pe;
-            p.iter().enumerate().filter_map(move |(j, _)| {
-                let e = err[i][j];
-                e.is_finite().then(|| {
-                    Rectangle::new(
-                        [(te[i].0, pe[j].0.max(y0)), (te[i].1, pe[j].1)],
-                        grey(band(e), n).filled(),
-                    )
-                })
-            })
-        }))
-        .map_err(draw_err)?;
-    // States without a value (two-phase or not computed): a small cross.
-    chart
-        .draw_series(t.iter().enumerate().flat_map(|(i, &ti)| {
+        .draw_series((0..t.len()).step_by(stride).flat_map(|i| {
             let pb = &pb;
-            p.iter()
-                .enumerate()
-                .filter(move |&(j, _)| !err[i][j].is_finite())
-                .map(move |(j, _)| {
-                    Cross::new((ti, pb[j]), 4, ShapeStyle::from(&BLACK).stroke_width(1))
+            (0..p.len())
+                .step_by(stride)
+                .filter(move |&j| !err[i][j].is_finite())
+                .map(move |j| {
+                    Cross::new((t[i], pb[j]), 3, ShapeStyle::from(&BLACK).stroke_width(1))
                 })
         }))
         .map_err(draw_err)?;
@@ -513,46 +585,103 @@ fn band_map<DB: DrawingBackend>(
         .disable_mesh()
         .draw()
         .map_err(draw_err)?;
+    let widths = [1u32, 2, 4, 5, 6];
     for (k, &tol) in tolerances.iter().enumerate() {
-        let line: Vec<(f64, f64)> = t
-            .iter()
-            .zip(err)
-            .filter_map(|(&ti, row)| boundary_pressure(&pb, row, tol).map(|pbar| (ti, pbar)))
-            .collect();
-        let (_, dash, gap) = line_style(k);
-        let style = ShapeStyle::from(&BLACK).stroke_width(2);
-        let s = chart
-            .draw_series(DashedLineSeries::new(line, dash, gap, style))
+        let style = ShapeStyle::from(&BLACK).stroke_width(widths[k.min(widths.len() - 1)]);
+        let segments = contour(t, &pb, err, tol);
+        chart
+            .draw_series(
+                segments
+                    .into_iter()
+                    .map(|s| PathElement::new(s.to_vec(), style)),
+            )
             .map_err(draw_err)?;
-        s.label(format!("{tol} % boundary")).legend(move |(x, y)| {
-            DashedPathElement::new(vec![(x, y), (x + 20, y)], dash, gap, style)
-        });
     }
+    // The legend, beside the plot: the bands, then the contours.
+    side.fill(&WHITE).map_err(draw_err)?;
+    let mut y = 70;
+    let text = |side: &DrawingArea<DB, Shift>, s: String, y: i32| {
+        side.draw(&Text::new(s, (48, y - 8), ("sans-serif", 15)))
+            .map_err(draw_err)
+    };
     for b in 0..=n {
         let label = match b {
             0 => format!("<= {} %", tolerances.first().copied().unwrap_or(0.0)),
             b if b == n => format!("> {} %", tolerances[n - 1]),
             b => format!("{} to {} %", tolerances[b - 1], tolerances[b]),
         };
-        let color = grey(b, n);
-        chart
-            .draw_series(std::iter::empty::<Rectangle<(f64, f64)>>())
-            .map_err(draw_err)?
-            .label(label)
-            .legend(move |(x, y)| {
-                EmptyElement::at((x, y))
-                    + Rectangle::new([(0, -6), (20, 6)], ShapeStyle::from(&color).filled())
-                    + Rectangle::new([(0, -6), (20, 6)], ShapeStyle::from(&BLACK))
-            });
-    }
-    chart
-        .configure_series_labels()
-        .background_style(WHITE.mix(0.95))
-        .border_style(BLACK)
-        .label_font(("sans-serif", 15))
-        .position(SeriesLabelPosition::UpperLeft)
-        .draw()
+        side.draw(&Rectangle::new(
+            [(8, y - 7), (40, y + 7)],
+            grey(b, n).filled(),
+        ))
         .map_err(draw_err)?;
+        side.draw(&Rectangle::new([(8, y - 7), (40, y + 7)], BLACK))
+            .map_err(draw_err)?;
+        text(&side, label, y)?;
+        y += 26;
+    }
+    side.draw(&Rectangle::new([(8, y - 7), (40, y + 7)], BLACK))
+        .map_err(draw_err)?;
+    side.draw(&Cross::new(
+        (24, y),
+        3,
+        ShapeStyle::from(&BLACK).stroke_width(1),
+    ))
+    .map_err(draw_err)?;
+    text(&side, "no value (two-phase)".to_string(), y)?;
+    y += 34;
+    for (k, &tol) in tolerances.iter().enumerate() {
+        let style = ShapeStyle::from(&BLACK).stroke_width(widths[k.min(widths.len() - 1)]);
+        side.draw(&PathElement::new(vec![(8, y), (40, y)], style))
+            .map_err(draw_err)?;
+        text(&side, format!("{tol} % contour"), y)?;
+        y += 26;
+    }
     root.present().map_err(draw_err)?;
     Ok(())
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// Every crossing of the level is found, on both sides of a maximum: a field that rises
+    /// and falls again along each column (as |Z - 1| does along an isotherm, coming back
+    /// towards 0 at high pressure) gives two crossings per column.
+    #[test]
+    fn contours_follow_every_crossing() {
+        let x: Vec<f64> = (0..11).map(|i| i as f64).collect();
+        let y: Vec<f64> = (0..41)
+            .map(|j| j as f64 * std::f64::consts::PI / 40.0)
+            .collect();
+        let f: Vec<Vec<f64>> = x
+            .iter()
+            .map(|_| y.iter().map(|v| v.sin()).collect())
+            .collect();
+        let segs = contour(&x, &y, &f, 0.5);
+        // Two horizontal lines, at y = pi/6 and 5 pi/6, each across the ten cells.
+        assert_eq!(segs.len(), 20);
+        for s in &segs {
+            for &(_, yy) in s {
+                let near = [std::f64::consts::PI / 6.0, 5.0 * std::f64::consts::PI / 6.0]
+                    .iter()
+                    .any(|c| (yy - c).abs() < 0.01);
+                assert!(near, "{yy}");
+            }
+        }
+        // A plane crosses each level along a straight line x + y = level.
+        let g: Vec<Vec<f64>> = x
+            .iter()
+            .map(|a| y.iter().map(|b| a + b).collect())
+            .collect();
+        for s in contour(&x, &y, &g, 5.0) {
+            for (a, b) in s {
+                assert!((a + b - 5.0).abs() < 1e-12);
+            }
+        }
+        // Cells with a corner without a value give no segment.
+        let mut h = g.clone();
+        h[5][5] = f64::NAN;
+        assert!(contour(&x, &y, &h, 5.0).len() < contour(&x, &y, &g, 5.0).len());
+    }
 }
