@@ -13,7 +13,8 @@
 //! - [`commands`]: one function per command, returning a report.
 //! - [`report`]: the report structs; [`render`]: one file per output format.
 //! - [`error`]: the typed error and its exit code.
-//! - [`serve`]: `zfactor serve`, the local web page and its JSON API over the same commands.
+//! - [`json_call`]: a command run from a JSON object of its options (the web API and Python);
+//!   [`serve`]: `zfactor serve`, the local web page and its JSON API.
 //!
 //! The library is also what the Python binding (`python/`) calls; see DEVELOPERS.md for the
 //! map of the house.
@@ -32,6 +33,7 @@ pub mod feed;
 pub mod feed_input;
 pub mod file_header;
 pub mod input_notes;
+pub mod json_call;
 pub mod kij_input;
 pub mod mix_file;
 pub mod models;

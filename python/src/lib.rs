@@ -291,6 +291,21 @@ fn ambient_pressure(text: &str) -> PyResult<f64> {
 }
 
 /// The model ids, as `zfactor models` lists them.
+/// Runs a command (state, saturation, flash, envelope, compare, table) from a JSON object of
+/// its long options, as the web API does (`zfactor::json_call`): the command line's JSON
+/// report and exit code (0, or 3 with warnings). Refused input is a `ValueError`, a failed
+/// computation a `RuntimeError`, each with the command line's message.
+#[pyfunction]
+fn call(py: Python<'_>, command: &str, options_json: &str) -> PyResult<(String, u8)> {
+    let (command, body) = (command.to_string(), options_json.as_bytes().to_vec());
+    let out = py.detach(move || zfactor::json_call::call(&command, &body));
+    match out {
+        Ok(a) => Ok((a.json, a.exit as u8)),
+        Err(f) if f.exit == zfactor::exit::Exit::BadInput => Err(PyValueError::new_err(f.message)),
+        Err(f) => Err(pyo3::exceptions::PyRuntimeError::new_err(f.message)),
+    }
+}
+
 #[pyfunction]
 fn model_ids() -> Vec<&'static str> {
     zfactor::models::ALL_IDS.to_vec()
@@ -304,6 +319,7 @@ fn _zfactor(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(unit_map, m)?)?;
     m.add_function(wrap_pyfunction!(ambient_pressure, m)?)?;
     m.add_function(wrap_pyfunction!(model_ids, m)?)?;
+    m.add_function(wrap_pyfunction!(call, m)?)?;
     m.add("__version__", env!("CARGO_PKG_VERSION"))?;
     Ok(())
 }

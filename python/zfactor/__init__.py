@@ -22,7 +22,8 @@ engineer.
 from __future__ import annotations
 
 import warnings
-from typing import Any, Dict, Optional
+import json
+from typing import Any, Dict, List, Optional
 
 import numpy as np
 
@@ -36,6 +37,12 @@ __all__ = [
     "frame",
     "pressure",
     "model_ids",
+    "report",
+    "state",
+    "saturation",
+    "flash",
+    "envelope",
+    "compare",
 ]
 
 __version__ = _zfactor.__version__
@@ -258,3 +265,109 @@ def frame(t: Any, p: Any, **kwargs: Any):
     for key in ("model", "model_name", "citation", "fluid", "components", "notes", "caution"):
         df.attrs[key] = r[key]
     return df
+
+
+# --- the commands, as frames -------------------------------------------------------------
+
+
+def report(command: str, **options: Any) -> Dict[str, Any]:
+    """The JSON report of a command of the command line (``state``, ``saturation``,
+    ``flash``, ``envelope``, ``compare``, ``table``) as a dict, for the options given as
+    keyword arguments named like the command's long options (``_`` for ``-``; a flag is
+    ``True``): the same validation, units, messages and warnings as the command line, whose
+    ``--format json`` output this is. Its warnings are also issued as
+    :class:`ZFactorWarning`. Options that name files are not taken.
+
+    >>> r = zfactor.report("state", fluid="methane", temperature="25 degC",
+    ...                    pressure="70 barg", model="pr,srk")          # doctest: +SKIP
+    >>> [x["z"] for x in r["results"]]                                  # doctest: +SKIP
+    [0.886..., 0.905...]
+
+    Refused input raises ``ValueError`` and a failed computation ``RuntimeError``, with the
+    command line's message.
+    """
+    opts = {k.replace("_", "-"): v for k, v in options.items() if v is not None}
+    text, _exit = _zfactor.call(command, json.dumps(opts))
+    rep = json.loads(text)
+    for w in rep.get("warnings", []):
+        warnings.warn(w, ZFactorWarning, stacklevel=3)
+    return rep
+
+
+def _table(rows: List[Dict[str, Any]], rep: Dict[str, Any], rows_key: str):
+    """A pandas DataFrame of ``rows`` with the rest of the report (the basis: models,
+    citations, k_ij notes, warnings, caution) in ``attrs``; without pandas, a dict of
+    columns (NumPy arrays where numeric) with the basis under ``"attrs"``."""
+    basis = {k: v for k, v in rep.items() if k != rows_key}
+    try:
+        import pandas as pd
+    except ImportError:
+        keys: List[str] = []
+        for r in rows:
+            keys.extend(k for k in r if k not in keys)
+        cols: Dict[str, Any] = {}
+        for k in keys:
+            col = [r.get(k) for r in rows]
+            numeric = all(isinstance(v, (int, float)) or v is None for v in col)
+            cols[k] = np.array([np.nan if v is None else v for v in col]) if numeric else col
+        cols["attrs"] = basis
+        return cols
+    df = pd.DataFrame(rows)
+    df.attrs.update(basis)
+    return df
+
+
+def state(**options: Any):
+    """One state of a fluid or mixture for one model or several (``zfactor state``): one
+    row per model (Z, densities, h, s, cp, cv, speed of sound, phase, a split's phases and
+    vapour fraction, warnings), the basis in ``attrs``. Options as :func:`report`.
+
+    >>> df = zfactor.state(mix="methane=0.9,ethane=0.1", temperature="15 degC",
+    ...                    pressure="70 barg", model="pr,srk,lk")       # doctest: +SKIP
+    >>> df[["model", "z", "mass_density_kg_m3", "phase"]]               # doctest: +SKIP
+    """
+    rep = report("state", **options)
+    return _table(rep["results"], rep, "results")
+
+
+def saturation(**options: Any):
+    """The saturation state of a pure fluid at a temperature or a pressure
+    (``zfactor saturation``): one row per model. Options as :func:`report`."""
+    rep = report("saturation", **options)
+    return _table(rep["results"], rep, "results")
+
+
+def flash(**options: Any):
+    """A mixture's phase equilibrium (``zfactor flash``): at (T, P), (P, h) or (P, s), or
+    its bubble or dew points (``dew_pressure=True`` and the like; both branches of a
+    retrograde curve, labelled by ``branch``): one row per model and point. Options as
+    :func:`report`."""
+    rep = report("flash", **options)
+    return _table(rep["results"], rep, "results")
+
+
+def envelope(**options: Any):
+    """The phase envelope of a mixture, or the vapour-pressure curve of a pure fluid
+    (``zfactor envelope``): one row per point (T, P, branch, densities); the critical point,
+    cricondenbar and cricondentherm in ``attrs``. Options as :func:`report`."""
+    rep = report("envelope", **options)
+    return _table(rep["points"], rep, "points")
+
+
+def compare(**options: Any):
+    """Models against a reference over a grid or list of states (``zfactor compare``, at
+    most 10,000 states a call): one row per state and model (T, P, phase, the reference's Z
+    and density, the model's Z, density and deviation); the statistics per model, the advice
+    and the ideal-gas map in ``attrs``. Options as :func:`report`.
+
+    >>> df = zfactor.compare(fluid="nitrogen", temperatures="150..300 K n 4",
+    ...                      pressures="1..300 bar n 5", model="pr,srk")  # doctest: +SKIP
+    >>> df.groupby("model")["deviation_pct"].abs().max()               # doctest: +SKIP
+    """
+    rep = report("compare", **options)
+    rows = []
+    for p in rep["points"]:
+        base = {k: v for k, v in p.items() if k != "values"}
+        for v in p["values"]:
+            rows.append({**base, **v})
+    return _table(rows, rep, "points")

@@ -3,12 +3,11 @@
 //!
 //! - [`server`]: the listening socket and its worker threads (tiny_http);
 //! - [`api`]: a request in, a reply out (routes, statuses, limits), no socket;
-//! - [`request`]: an API body read as the command line it stands for;
+//! - the commands run from JSON options: [`crate::json_call`];
 //! - [`workbook`]: the page's .xlsx download, built in memory;
 //! - [`assets`]: the page's files, embedded.
 
 pub mod api;
 pub mod assets;
-pub mod request;
 pub mod server;
 pub mod workbook;

@@ -2,7 +2,7 @@
 //! written on the server). The body: `{"sheets": [{"name": "state", "rows": [["model", "Z"],
 //! ["pr", 0.8995]]}]}`; a cell is a text, a number or null (empty).
 
-use super::request::Refusal;
+use crate::json_call::request::Refusal;
 use rust_xlsxwriter::Workbook;
 use serde::Deserialize;
 use serde_json::Value;
