@@ -754,3 +754,35 @@ fn z_only_models_answer_inventory_and_relief() {
         "{err}"
     );
 }
+
+/// The audit's annotated copy writes a zero deviation as 0, not -0.000000 (a row that agrees
+/// with the recomputation to round-off; the density recomputed by the same command).
+#[test]
+fn an_audit_writes_no_negative_zero() {
+    let (_, out, _) = run(&[
+        "state",
+        "--fluid",
+        "methane",
+        "-t",
+        "15 degC",
+        "-p",
+        "70 barg",
+        "-m",
+        "reference",
+        "-f",
+        "json",
+    ]);
+    let v: Value = serde_json::from_str(&out).unwrap();
+    let d = v["results"][0]["mass_density_kg_m3"].as_f64().unwrap();
+    let dir = tempfile::tempdir().unwrap();
+    let sheet = dir.path().join("sheet.csv");
+    std::fs::write(
+        &sheet,
+        format!("fluid,T [degC],P [barg],density [kg/m3]\nmethane,15,70,{d}\n"),
+    )
+    .unwrap();
+    let (code, _, err) = run(&["audit", sheet.to_str().unwrap()]);
+    assert_eq!(code, 0, "{err}");
+    let copy = std::fs::read_to_string(dir.path().join("sheet.audit.csv")).unwrap();
+    assert!(!copy.contains("-0.000000"), "{copy}");
+}

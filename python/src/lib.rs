@@ -306,6 +306,23 @@ fn call(py: Python<'_>, command: &str, options_json: &str) -> PyResult<(String, 
     }
 }
 
+/// Audits the sheet at `file` with the options of `options_json` and writes the annotated
+/// copy to `output` (`zfactor::json_call::audit`): the audit's JSON summary and exit code.
+#[pyfunction]
+fn audit(py: Python<'_>, file: &str, output: &str, options_json: &str) -> PyResult<(String, u8)> {
+    let (file, output, body) = (
+        std::path::PathBuf::from(file),
+        std::path::PathBuf::from(output),
+        options_json.as_bytes().to_vec(),
+    );
+    let out = py.detach(move || zfactor::json_call::audit(&file, &output, &body));
+    match out {
+        Ok(a) => Ok((a.json, a.exit as u8)),
+        Err(f) if f.exit == zfactor::exit::Exit::BadInput => Err(PyValueError::new_err(f.message)),
+        Err(f) => Err(pyo3::exceptions::PyRuntimeError::new_err(f.message)),
+    }
+}
+
 #[pyfunction]
 fn model_ids() -> Vec<&'static str> {
     zfactor::models::ALL_IDS.to_vec()
@@ -320,6 +337,7 @@ fn _zfactor(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(ambient_pressure, m)?)?;
     m.add_function(wrap_pyfunction!(model_ids, m)?)?;
     m.add_function(wrap_pyfunction!(call, m)?)?;
+    m.add_function(wrap_pyfunction!(audit, m)?)?;
     m.add("__version__", env!("CARGO_PKG_VERSION"))?;
     Ok(())
 }

@@ -43,6 +43,7 @@ __all__ = [
     "flash",
     "envelope",
     "compare",
+    "audit",
 ]
 
 __version__ = _zfactor.__version__
@@ -371,3 +372,42 @@ def compare(**options: Any):
         for v in p["values"]:
             rows.append({**base, **v})
     return _table(rows, rep, "points")
+
+
+def audit(data: Any, **options: Any):
+    """Audit a sheet of gas calculations (``zfactor audit``): every row recomputed, flagged
+    where it departs from the recomputation by more than the tolerance, with the likely
+    cause named. ``data`` is a pandas DataFrame (its columns headed as the command line
+    reads them, units in brackets: ``T [degC]``, ``P [barg]``, ``density [kg/m3]``, and a
+    ``fluid`` column) or the path of a CSV or .xlsx file; the options are the audit's
+    (``model``, ``tolerance``, ``quantity``, ``columns``, ``sheet``, ``base``, ``ambient``).
+
+    Returns the annotated copy as a DataFrame (the sheet's columns, then ``zfactor_model``,
+    ``zfactor_value``, ``ideal_gas_value``, ``deviation_pct``, ``status``,
+    ``reconciling_causes``, ``message``) with the audit's summary in ``attrs``; the files
+    it works on are temporary.
+
+    >>> sheet = pd.DataFrame({"fluid": ["methane"], "T [degC]": [15], "P [barg]": [70],
+    ...                       "density [kg/m3]": [55.0]})                 # doctest: +SKIP
+    >>> zfactor.audit(sheet, tolerance="1%")[["status", "deviation_pct"]]  # doctest: +SKIP
+    """
+    import os
+    import tempfile
+
+    import pandas as pd
+
+    opts = {k.replace("_", "-"): v for k, v in options.items() if v is not None}
+    with tempfile.TemporaryDirectory() as tmp:
+        if isinstance(data, pd.DataFrame):
+            path = os.path.join(tmp, "sheet.csv")
+            data.to_csv(path, index=False)
+        else:
+            path = os.fspath(data)
+        out = os.path.join(tmp, "annotated.csv")
+        text, _exit = _zfactor.audit(path, out, json.dumps(opts))
+        summary = json.loads(text)
+        annotated = pd.read_csv(out)
+    for w in summary.get("warnings", []):
+        warnings.warn(w, ZFactorWarning, stacklevel=2)
+    annotated.attrs.update(summary)
+    return annotated

@@ -356,12 +356,15 @@ fn annotate(mut out: csv::StringRecord, width: usize, outcome: &Outcome) -> csv:
             out.push_field(&format!("{value:e}"));
             if ideal.is_finite() {
                 out.push_field(&format!("{ideal:e}"));
-                out.push_field(&format!("{:.6}", 100.0 * (ideal - value) / value));
+                out.push_field(&crate::render::number::fixed(
+                    100.0 * (ideal - value) / value,
+                    6,
+                ));
             } else {
                 out.push_field("");
                 out.push_field("");
             }
-            out.push_field(&format!("{:.6}", 100.0 * deviation));
+            out.push_field(&crate::render::number::fixed(100.0 * deviation, 6));
             out.push_field(if *flagged { "FLAG" } else { "ok" });
             out.push_field(&causes.join("; "));
             out.push_field(note.as_deref().unwrap_or(""));

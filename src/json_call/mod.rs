@@ -81,6 +81,14 @@ pub fn call(command: &str, body: &[u8]) -> Result<Answer, Failure> {
         check_size(&cli.command).map_err(Failure::from)?;
         report(&cli.command).map_err(|e| Failure::from(&e))
     });
+    finish(outcome, &notes)
+}
+
+/// The answer of a report and its warnings, with the input notes gathered meanwhile.
+fn finish(
+    outcome: Result<(String, Vec<String>), Failure>,
+    notes: &[String],
+) -> Result<Answer, Failure> {
     let (text, warnings) = outcome?;
     let exit = if warnings.is_empty() && notes.is_empty() {
         Exit::Success
@@ -88,9 +96,37 @@ pub fn call(command: &str, body: &[u8]) -> Result<Answer, Failure> {
         Exit::SuccessWithWarnings
     };
     Ok(Answer {
-        json: with_notes(text, &notes),
+        json: with_notes(text, notes),
         exit,
     })
+}
+
+/// Audits the sheet `file` (CSV or .xlsx) with the options of the JSON object `body` (those of
+/// [`request::AUDIT`]) and writes its annotated copy to `output` (replacing a file there):
+/// the Python binding's audit of a data frame, which it writes to `file` first. The answer
+/// is the audit's JSON summary.
+pub fn audit(
+    file: &std::path::Path,
+    output: &std::path::Path,
+    body: &[u8],
+) -> Result<Answer, Failure> {
+    let leading = [
+        file.display().to_string(),
+        format!("--output={}", output.display()),
+        "--force".to_string(),
+    ];
+    let words = request::argv_with(request::AUDIT, &leading, body)?;
+    let cli = Cli::try_parse_from(&words)
+        .map_err(|e| Refusal::new(422, e.to_string().trim_end().to_string()))?;
+    let Command::Audit(args) = &cli.command else {
+        return Err(Refusal::new(500, "not an audit").into());
+    };
+    let (outcome, notes) = input_notes::scoped(|| {
+        let r = crate::commands::audit::run(args).map_err(|e| Failure::from(&e))?;
+        let text = json::to_string(&r).map_err(|e| Failure::from(&e))?;
+        Ok::<_, Failure>((text, r.warnings.clone()))
+    });
+    finish(outcome, &notes)
 }
 
 /// The report's JSON with the input notes added to its `warnings` (the command line prints

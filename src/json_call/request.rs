@@ -97,6 +97,21 @@ pub const ENDPOINTS: [Endpoint; 6] = [
     },
 ];
 
+/// The audit's options besides its file and its annotated copy, for the Python binding, which
+/// passes the two file names itself (the web API runs no audit: it reads and writes no file).
+pub const AUDIT: Endpoint = Endpoint {
+    command: "audit",
+    options: &[
+        "sheet",
+        "columns",
+        "quantity",
+        "model",
+        "tolerance",
+        "base",
+        "ambient",
+    ],
+};
+
 impl Endpoint {
     /// The endpoint of `command`, if the API runs it.
     pub fn named(command: &str) -> Option<Endpoint> {
@@ -118,6 +133,15 @@ impl Endpoint {
 /// `--name=value` (a flag as `--name` when true, left out when false or null), then
 /// `--format json`.
 pub fn argv(endpoint: Endpoint, body: &[u8]) -> Result<Vec<String>, Refusal> {
+    argv_with(endpoint, &[], body)
+}
+
+/// [`argv`] with `leading` words (an audit's file) after the command.
+pub fn argv_with(
+    endpoint: Endpoint,
+    leading: &[String],
+    body: &[u8],
+) -> Result<Vec<String>, Refusal> {
     let value: Value = serde_json::from_slice(body)
         .map_err(|e| Refusal::new(400, format!("the request body is not JSON: {e}")))?;
     let Value::Object(fields) = value else {
@@ -127,6 +151,7 @@ pub fn argv(endpoint: Endpoint, body: &[u8]) -> Result<Vec<String>, Refusal> {
         ));
     };
     let mut words = vec!["zfactor".to_string(), endpoint.command.to_string()];
+    words.extend(leading.iter().cloned());
     words.extend(option_words(endpoint, &fields)?);
     words.extend(["--format".to_string(), "json".to_string()]);
     Ok(words)

@@ -74,3 +74,28 @@ def test_without_pandas_a_dict_of_columns(monkeypatch):
     assert cols["model"] == ["pr", "srk"]
     assert cols["z"].dtype.kind == "f" and len(cols["z"]) == 2
     assert "caution" in cols["attrs"]
+
+
+def test_audit_of_a_data_frame(cli):
+    import pandas as pd
+
+    # The sheet's densities: one as the reference equation gives it (Setzmann and Wagner
+    # 1991, through the command line), one computed at 70 bar absolute for 70 barg, the
+    # gauge-read-as-absolute mistake the audit names.
+    right = cli_json(cli, "state", "--fluid", "methane", "-t", "15 degC", "-p", "70 barg", "-m", "reference")
+    wrong = cli_json(cli, "state", "--fluid", "methane", "-t", "15 degC", "-p", "70 bar", "-m", "reference")
+    sheet = pd.DataFrame(
+        {
+            "fluid": ["methane", "methane"],
+            "T [degC]": [15, 15],
+            "P [barg]": [70, 70],
+            "density [kg/m3]": [r["results"][0]["mass_density_kg_m3"] for r in (right, wrong)],
+        }
+    )
+    with pytest.warns(zfactor.ZFactorWarning):
+        out = zfactor.audit(sheet, tolerance="1%")
+    assert list(out["status"]) == ["ok", "FLAG"]
+    assert out["reconciling_causes"].iloc[1] == "gauge pressure read as absolute"
+    assert out.attrs["rows_flagged"] == 1
+    with pytest.raises(ValueError, match="tolerance"):
+        zfactor.audit(sheet, tolerance="lots")
