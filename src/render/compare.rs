@@ -5,20 +5,15 @@ use crate::render::number::sig;
 use crate::report::compare::{CompareReport, StateAt};
 use crate::report::compare_points::PointReport;
 use crate::units::PA_PER_BAR;
-use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
+use comfy_table::{CellAlignment, ContentArrangement, Table};
 use std::io::Write;
 
 /// Points printed in the terminal table; more go to CSV or JSON.
 pub const MAX_TABLE_POINTS: usize = 60;
 
-const STYLE: TableStyle = TableStyle::new()
-    .top_border(LineStyle::none().fill('-').junction('-'))
-    .header_separator(LineStyle::none().fill('-').junction('-'))
-    .bottom_border(LineStyle::none().fill('-').junction('-'));
-
 fn new_table(header: Vec<String>) -> Table {
     let mut t = Table::new();
-    t.load_style(STYLE)
+    t.load_style(crate::render::house_table::STYLE)
         .set_content_arrangement(ContentArrangement::Disabled)
         .set_header(header);
     t

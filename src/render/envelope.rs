@@ -4,12 +4,7 @@ use crate::error::CliError;
 use crate::render::number::sig;
 use crate::report::envelope::{EnvelopeReport, TpPoint};
 use crate::units::PA_PER_BAR;
-use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
-
-const STYLE: TableStyle = TableStyle::new()
-    .top_border(LineStyle::none().fill('-').junction('-'))
-    .header_separator(LineStyle::none().fill('-').junction('-'))
-    .bottom_border(LineStyle::none().fill('-').junction('-'));
+use comfy_table::{CellAlignment, ContentArrangement, Table};
 
 fn point(name: &str, p: Option<TpPoint>) -> Option<String> {
     p.map(|p| {
@@ -43,7 +38,7 @@ pub fn text(r: &EnvelopeReport) -> String {
         out.push_str(&s);
     }
     let mut t = Table::new();
-    t.load_style(STYLE)
+    t.load_style(crate::render::house_table::STYLE)
         .set_content_arrangement(ContentArrangement::Dynamic)
         .set_width(crate::render::model_grid::WIDTH as u16);
     t.set_header(vec![

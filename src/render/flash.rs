@@ -2,22 +2,11 @@
 //! JSON (the report struct as it is).
 
 use crate::error::CliError;
+use crate::render::house_table;
 use crate::render::number::{opt, sig};
 use crate::report::flash::{FlashReport, FlashResultReport};
 use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
-use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
-
-const STYLE: TableStyle = TableStyle::new()
-    .top_border(LineStyle::none().fill('-').junction('-'))
-    .header_separator(LineStyle::none().fill('-').junction('-'))
-    .bottom_border(LineStyle::none().fill('-').junction('-'));
-
-fn new_table() -> Table {
-    let mut t = Table::new();
-    t.load_style(STYLE)
-        .set_content_arrangement(ContentArrangement::Disabled);
-    t
-}
+use comfy_table::{CellAlignment, Table};
 
 fn right(t: &mut Table, from: usize) {
     let n = t.column_count();
@@ -60,7 +49,7 @@ fn mode_line(r: &FlashReport) -> String {
 /// The report as text.
 pub fn text(r: &FlashReport) -> String {
     let mut out = format!("{}\n{}", r.fluid, mode_line(r));
-    let mut c = new_table();
+    let mut c = house_table::new();
     c.set_header(vec!["component", "mole fraction", "mass fraction"]);
     for row in &r.composition {
         c.add_row(vec![
@@ -88,7 +77,7 @@ fn model_text(m: &FlashResultReport) -> String {
         None => {}
     }
     out.push('\n');
-    let mut s = new_table();
+    let mut s = house_table::new();
     s.set_header(vec!["quantity", "value", "unit"]);
     let mut row = |q: &str, v: String, u: &str| {
         s.add_row(vec![q.to_string(), v, u.to_string()]);
@@ -133,7 +122,7 @@ fn model_text(m: &FlashResultReport) -> String {
     }
     right(&mut s, 1);
     out.push_str(&format!("{s}\n"));
-    let mut p = new_table();
+    let mut p = house_table::new();
     let mut header = vec!["phase".to_string()];
     // Mole fractions of a vapour are written y, of a liquid x (common practice).
     header.extend(m.phases.iter().map(|ph| match ph.phase.as_str() {

@@ -3,26 +3,21 @@
 use crate::cli::Format;
 use crate::error::CliError;
 use crate::report::kij::KijReport;
-use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
+use comfy_table::{CellAlignment, ContentArrangement, Table};
 
 /// The rows with their source keys, then each source in full.
 pub fn text(r: &KijReport) -> String {
     let mut t = Table::new();
-    t.load_style(
-        TableStyle::new()
-            .top_border(LineStyle::none().fill('-').junction('-'))
-            .header_separator(LineStyle::none().fill('-').junction('-'))
-            .bottom_border(LineStyle::none().fill('-').junction('-')),
-    )
-    .set_content_arrangement(ContentArrangement::Disabled)
-    .set_header(vec![
-        "pair",
-        "family",
-        "k_ij",
-        "confidence",
-        "published range",
-        "source",
-    ]);
+    t.load_style(crate::render::house_table::STYLE)
+        .set_content_arrangement(ContentArrangement::Disabled)
+        .set_header(vec![
+            "pair",
+            "family",
+            "k_ij",
+            "confidence",
+            "published range",
+            "source",
+        ]);
     for k in &r.rows {
         t.add_row(vec![
             format!("{}-{}", k.a, k.b),

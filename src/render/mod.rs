@@ -11,6 +11,7 @@ pub mod envelope_chart;
 pub mod flash;
 pub mod flow;
 pub mod grid_table;
+pub mod house_table;
 pub mod jobs;
 pub mod json;
 pub mod kij;

@@ -5,7 +5,7 @@
 use crate::render::number::{fixed, opt, sig};
 use crate::report::jobs_common::Compared;
 use crate::shown_units::TemperatureScale;
-use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
+use comfy_table::{CellAlignment, ContentArrangement, Table};
 
 /// Models shown side by side in one part of a table.
 pub const MAX_SIDE_BY_SIDE: usize = 4;
@@ -16,11 +16,6 @@ answer; for a temperature, the difference in K.\n";
 
 /// The widest a table line should be, in characters (a terminal of 100 columns).
 pub const WIDTH: usize = 100;
-
-const STYLE: TableStyle = TableStyle::new()
-    .top_border(LineStyle::none().fill('-').junction('-'))
-    .header_separator(LineStyle::none().fill('-').junction('-'))
-    .bottom_border(LineStyle::none().fill('-').junction('-'));
 
 /// A table with one column per model.
 pub struct Grid {
@@ -129,7 +124,7 @@ impl Grid {
                 };
                 let mut table = Table::new();
                 table
-                    .load_style(STYLE)
+                    .load_style(crate::render::house_table::STYLE)
                     .set_content_arrangement(ContentArrangement::Disabled)
                     .set_header(pick(&self.head));
                 for r in &self.rows {

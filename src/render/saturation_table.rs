@@ -3,12 +3,7 @@
 use crate::render::number::sig;
 use crate::report::saturation::SaturationReport;
 use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
-use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
-
-const STYLE: TableStyle = TableStyle::new()
-    .top_border(LineStyle::none().fill('-').junction('-'))
-    .header_separator(LineStyle::none().fill('-').junction('-'))
-    .bottom_border(LineStyle::none().fill('-').junction('-'));
+use comfy_table::{CellAlignment, ContentArrangement, Table};
 
 /// The report as text.
 pub fn render(r: &SaturationReport) -> String {
@@ -34,7 +29,7 @@ pub fn render(r: &SaturationReport) -> String {
         out.push('\n');
     }
     let mut t = Table::new();
-    t.load_style(STYLE)
+    t.load_style(crate::render::house_table::STYLE)
         .set_content_arrangement(ContentArrangement::Disabled);
     let mut header = vec!["property".to_string(), "unit".to_string()];
     header.extend(r.results.iter().map(|m| m.model.clone()));

@@ -1,26 +1,13 @@
 //! Terminal tables. State results put the models side by side, one column each, so the
 //! ideal-gas answer and every real-gas model can be read across one row.
 
+use crate::render::house_table;
 use crate::render::model_grid::{Grid, WIDTH};
 use crate::render::number::{opt, sig};
 use crate::report::fluids::FluidsReport;
 use crate::report::state::StateReport;
 use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
-use comfy_table::{CellAlignment, ContentArrangement, LineStyle, Table, TableStyle};
-
-/// Rules above and below the table and under the header; no vertical lines, no rules between
-/// rows, so long property lists stay compact.
-const STYLE: TableStyle = TableStyle::new()
-    .top_border(LineStyle::none().fill('-').junction('-'))
-    .header_separator(LineStyle::none().fill('-').junction('-'))
-    .bottom_border(LineStyle::none().fill('-').junction('-'));
-
-fn new_table() -> Table {
-    let mut t = Table::new();
-    t.load_style(STYLE)
-        .set_content_arrangement(ContentArrangement::Disabled);
-    t
-}
+use comfy_table::{CellAlignment, ContentArrangement, Table};
 
 /// The state report as text.
 pub fn state(r: &StateReport) -> String {
@@ -58,7 +45,7 @@ pub fn state(r: &StateReport) -> String {
     }
     out.push_str(&format!("state: {}\n", given.join(", ")));
     if r.composition.len() > 1 {
-        let mut c = new_table();
+        let mut c = house_table::new();
         c.set_header(vec![
             "component",
             "entered",
@@ -175,7 +162,7 @@ pub fn fluids(r: &FluidsReport) -> String {
     if r.components.len() == 1 && r.query.is_some() {
         return one_fluid(r.components[0]);
     }
-    let mut t = new_table();
+    let mut t = house_table::new();
     t.set_header(vec![
         "id", "name", "formula", "M g/mol", "Tc K", "Pc bar", "omega", "Tb K",
     ]);
@@ -201,7 +188,7 @@ pub fn fluids(r: &FluidsReport) -> String {
 }
 
 fn one_fluid(c: &fluids::ComponentRecord) -> String {
-    let mut t = new_table();
+    let mut t = house_table::new();
     t.set_header(vec!["field", "value"]);
     let rows: Vec<(&str, String)> = vec![
         ("id", c.id.clone()),
@@ -262,7 +249,7 @@ fn right_align(t: &mut Table, from: usize) {
 
 /// The model catalogue as text: a short list, or one model in full.
 pub fn models(r: &crate::report::models::ModelsReport) -> String {
-    let mut t = new_table();
+    let mut t = house_table::new();
     if r.models.len() == 1 {
         let m = &r.models[0];
         t.set_header(vec!["field", "value"]);
