@@ -298,6 +298,24 @@
       ],
       series,
       cursor: { drag: { x: true, y: true } },
+      hooks: {
+        // The pressure asked for: a dotted vertical line across the plot.
+        draw: [(u) => {
+          const at = pressureIn(s.pUnit, s.state.input.pressure_pa, s.ambient);
+          const x = u.valToPos(at, "x", true);
+          if (!Number.isFinite(x) || x < u.bbox.left || x > u.bbox.left + u.bbox.width) return;
+          const ctx = u.ctx;
+          ctx.save();
+          ctx.setLineDash([2, 4]);
+          ctx.strokeStyle = "#1b2027";
+          ctx.lineWidth = 1.5;
+          ctx.beginPath();
+          ctx.moveTo(x, u.bbox.top);
+          ctx.lineTo(x, u.bbox.top + u.bbox.height);
+          ctx.stroke();
+          ctx.restore();
+        }],
+      },
     }, data, box);
     // The state asked for, marked on the chart's pressure axis in the legend's title.
     box.setAttribute("aria-label", `Z against pressure at ${s.t}; ${labels.length} curves`);
