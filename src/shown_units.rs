@@ -58,6 +58,24 @@ impl TemperatureScale {
     }
 }
 
+/// A pressure as typed, followed by its value in bar absolute unless it was typed so
+/// ("70 barg (71.0132 bar abs)", "110 bar").
+pub fn pressure_as_typed(typed: &str, pa: f64) -> String {
+    let typed = typed.trim();
+    let unit = typed
+        .trim_start_matches(|c: char| c.is_ascii_digit() || "+-.eE".contains(c))
+        .trim()
+        .to_ascii_lowercase();
+    if unit == "bar" || unit == "bara" || unit == "bar abs" {
+        typed.to_string()
+    } else {
+        format!(
+            "{typed} ({} bar abs)",
+            crate::render::number::sig(pa / crate::units::PA_PER_BAR, 6)
+        )
+    }
+}
+
 /// How standard volumes at base conditions `id` are labelled, and the cubic metres in one
 /// such unit: "Nm3" at 0 degC, "Sm3" at the other metric bases (15 degC is ISO 13443's),
 /// "scf" (cubic feet) at 60 degF, plain "m3" at a base of the user's own; the base is named
@@ -109,6 +127,16 @@ mod tests {
         assert!((f - 212.0).abs() < 1e-9);
         let r = TemperatureScale::Rankine.from_kelvin(300.0);
         assert!((r - 540.0).abs() < 1e-9);
+    }
+
+    #[test]
+    fn a_pressure_in_bar_absolute_is_not_repeated() {
+        assert_eq!(pressure_as_typed("110 bar", 110e5), "110 bar");
+        assert_eq!(
+            pressure_as_typed("70 barg", 7_101_325.0),
+            "70 barg (71.0132 bar abs)"
+        );
+        assert_eq!(pressure_as_typed("5 MPa", 5e6), "5 MPa (50.0000 bar abs)");
     }
 
     #[test]

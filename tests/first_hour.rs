@@ -319,7 +319,7 @@ fn job_tables_speak_the_users_units() {
     .concat());
     assert_eq!(code, 0, "{err}");
     assert!(
-        out.contains("suction 30 barg, 25 degC (31.0132 bar abs)"),
+        out.contains("suction 30 barg (31.0132 bar abs), 25 degC"),
         "{out}"
     );
     assert_eq!(row(&out, "discharge temperature")[0], "degC");

@@ -4,8 +4,7 @@ use crate::render::model_grid::Grid;
 use crate::render::number::sig;
 use crate::report::compress::CompressReport;
 use crate::report::jobs_common::Compared;
-use crate::shown_units::TemperatureScale;
-use crate::units::PA_PER_BAR;
+use crate::shown_units::{pressure_as_typed, TemperatureScale};
 
 /// The compressor report as text.
 pub fn table(r: &CompressReport) -> String {
@@ -13,12 +12,10 @@ pub fn table(r: &CompressReport) -> String {
     let mut out = format!("{}\n", r.fluid.label);
     let scale = TemperatureScale::of_input(&i.suction_temperature);
     out.push_str(&format!(
-        "suction {}, {} ({} bar abs); discharge {} ({} bar abs, ratio {}); {} efficiency {}\n",
-        i.suction_pressure.trim(),
+        "suction {}, {}; discharge {}, ratio {}; {} efficiency {}\n",
+        pressure_as_typed(&i.suction_pressure, i.suction_pressure_pa),
         i.suction_temperature.trim(),
-        sig(i.suction_pressure_pa / PA_PER_BAR, 6),
-        i.discharge_pressure.trim(),
-        sig(i.discharge_pressure_pa / PA_PER_BAR, 6),
+        pressure_as_typed(&i.discharge_pressure, i.discharge_pressure_pa),
         sig(i.pressure_ratio, 4),
         i.efficiency_kind,
         sig(i.efficiency, 4)

@@ -1,11 +1,10 @@
 //! Terminal tables of `zfactor process` and `zfactor relief`.
 
 use crate::render::model_grid::Grid;
-use crate::render::number::sig;
 use crate::report::jobs_common::Compared;
 use crate::report::process::{ProcessReport, ProcessResult};
 use crate::report::relief::ReliefReport;
-use crate::shown_units::TemperatureScale;
+use crate::shown_units::{pressure_as_typed, TemperatureScale};
 use crate::units::PA_PER_BAR;
 
 /// The process report as text.
@@ -14,14 +13,13 @@ pub fn table(r: &ProcessReport) -> String {
     let mut out = format!("{}\n", r.fluid.label);
     let scale = TemperatureScale::of_input(&i.temperature);
     out.push_str(&format!(
-        "{} path from {}, {} ({} bar abs) to {}\n",
+        "{} path from {}, {} to {}\n",
         i.path,
         i.temperature.trim(),
-        i.pressure.trim(),
-        sig(i.pressure_pa / PA_PER_BAR, 6),
+        pressure_as_typed(&i.pressure, i.pressure_pa),
         match (&i.to_temperature, &i.to_pressure, i.end_pressure_pa) {
             (Some(t), _, _) => t.trim().to_string(),
-            (_, Some(p), Some(pa)) => format!("{} ({} bar abs)", p.trim(), sig(pa / PA_PER_BAR, 6)),
+            (_, Some(p), Some(pa)) => pressure_as_typed(p, pa),
             _ => "-".to_string(),
         }
     ));
@@ -83,10 +81,9 @@ pub fn relief(r: &ReliefReport) -> String {
     let i = &r.input;
     let mut out = format!("{}\n", r.fluid.label);
     out.push_str(&format!(
-        "relieving conditions {}, {} ({} bar abs)\n",
+        "relieving conditions {}, {}\n",
         i.temperature.trim(),
-        i.pressure.trim(),
-        sig(i.pressure_pa / PA_PER_BAR, 6)
+        pressure_as_typed(&i.pressure, i.pressure_pa)
     ));
     let res = &r.results;
     let ids: Vec<String> = res.iter().map(|m| m.model.clone()).collect();

@@ -3,7 +3,7 @@
 use crate::render::model_grid::Grid;
 use crate::render::number::{fixed, sig};
 use crate::report::vessel::VesselReport;
-use crate::shown_units::{standard_volume_unit, TemperatureScale};
+use crate::shown_units::{pressure_as_typed, standard_volume_unit, TemperatureScale};
 use crate::units::PA_PER_BAR;
 
 /// The vessel report as text.
@@ -13,11 +13,10 @@ pub fn table(r: &VesselReport) -> String {
     let scale = TemperatureScale::of_input(&i.temperature);
     let (sv, m3_per_sv) = standard_volume_unit(&r.base.id);
     out.push_str(&format!(
-        "vessel {} at {}, {} ({} bar abs); {sv} at {} ({} {}, {} kPa)\n",
+        "vessel {} at {}, {}; {sv} at {} ({} {}, {} kPa)\n",
         i.volume.trim(),
         i.temperature.trim(),
-        i.pressure.trim(),
-        sig(i.pressure_pa / PA_PER_BAR, 6),
+        pressure_as_typed(&i.pressure, i.pressure_pa),
         r.base.id,
         fixed(scale.from_kelvin(r.base.temperature_k), 2),
         scale.label(),
