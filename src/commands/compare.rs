@@ -475,18 +475,28 @@ fn chart_curves(
         return Ok(None);
     }
     let temps = crate::render::chart::chart_temperatures(&grid.temperatures_k);
+    let temps: Vec<String> = temps.iter().map(|t| format!("{t:e} K")).collect();
+    resampled(
+        args,
+        report,
+        temps.join(","),
+        format!("{lo:e}..{hi:e} Pa n {CHART_POINTS}"),
+    )
+}
+
+/// The comparison of `args` re-run on the given temperatures and pressures, for charts:
+/// reference data (drawn as the points they are) are left out of the re-run.
+fn resampled(
+    args: &CompareArgs,
+    report: &CompareReport,
+    temperatures: String,
+    pressures: String,
+) -> Result<Option<CompareReport>, CliError> {
     let mut sampled = args.clone();
-    sampled.temperatures = Some(
-        temps
-            .iter()
-            .map(|t| format!("{t:e} K"))
-            .collect::<Vec<_>>()
-            .join(","),
-    );
-    sampled.pressures = Some(format!("{lo:e}..{hi:e} Pa n {CHART_POINTS}"));
+    sampled.temperatures = Some(temperatures);
+    sampled.pressures = Some(pressures);
     sampled.states = None;
     if report.reference.kind != "model" {
-        // Reference data are drawn as the points they are; the curves are the models'.
         sampled.reference = None;
         sampled.reference_file = None;
     }
@@ -514,15 +524,12 @@ fn chart_maps(
     if t0 >= t1 || p0 >= p1 || !(t0.is_finite() && p1.is_finite()) {
         return Ok(None);
     }
-    let mut sampled = args.clone();
-    sampled.temperatures = Some(format!("{t0:e}..{t1:e} K n {MAP_POINTS}"));
-    sampled.pressures = Some(format!("{p0:e}..{p1:e} Pa n {MAP_POINTS}"));
-    sampled.states = None;
-    if report.reference.kind != "model" {
-        sampled.reference = None;
-        sampled.reference_file = None;
-    }
-    run(&sampled).map(Some)
+    resampled(
+        args,
+        report,
+        format!("{t0:e}..{t1:e} K n {MAP_POINTS}"),
+        format!("{p0:e}..{p1:e} Pa n {MAP_POINTS}"),
+    )
 }
 
 /// What the points are kept for: the chosen output, and charts when asked.
