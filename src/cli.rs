@@ -8,6 +8,7 @@ pub mod audit_args;
 pub mod compress_args;
 pub mod equilibrium_args;
 pub mod flow_args;
+pub mod gravity_args;
 pub mod grid_args;
 pub mod process_args;
 pub mod relief_args;
@@ -123,11 +124,7 @@ pub enum RootArg {
 #[derive(Debug, Clone, Args)]
 pub struct FluidArgs {
     /// A pure fluid by name, alias, formula or CAS number (e.g. methane, CO2, 124-38-9).
-    #[arg(
-        long,
-        conflicts_with_all = ["mix", "mix_file"],
-        required_unless_present_any = ["mix", "mix_file"]
-    )]
+    #[arg(long, conflicts_with_all = ["mix", "mix_file"])]
     pub fluid: Option<String>,
     /// A mixture as name=fraction pairs, e.g. "methane=0.9,ethane=0.1" or "CH4=90%,C2H6=10%".
     #[arg(long, conflicts_with = "mix_file")]
@@ -158,6 +155,8 @@ pub struct FluidArgs {
 pub struct StateArgs {
     #[command(flatten)]
     pub fluid: FluidArgs,
+    #[command(flatten)]
+    pub gravity: crate::cli::gravity_args::GravityArgs,
     /// Temperature with its unit: "300 K", "25 degC", "77 degF", "540 R".
     #[arg(long, short = 't', allow_hyphen_values = true)]
     pub temperature: Option<String>,

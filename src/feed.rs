@@ -29,6 +29,22 @@ pub struct Feed {
     pub mass: Vec<f64>,
     /// Interaction parameters the user set (`--kij`, `--kij-file`), over the built-in ones.
     pub kij: Vec<fluids::UserKij>,
+    /// Set when the gas is known by its specific gravity (`--gravity`): the first record is
+    /// then its hydrocarbon part ([`fluids::gravity_gas`]), and only Z and density can be had.
+    pub gravity: Option<GravityGas>,
+}
+
+/// A natural gas given by its specific gravity and its non-hydrocarbons (mole fractions).
+#[derive(Debug, Clone, PartialEq)]
+pub struct GravityGas {
+    /// The gravity as typed.
+    pub typed: String,
+    /// Gas gravity, M / M_air.
+    pub gravity: f64,
+    /// Nitrogen, carbon dioxide and hydrogen sulfide mole fractions.
+    pub n2: f64,
+    pub co2: f64,
+    pub h2s: f64,
 }
 
 impl Feed {
@@ -56,8 +72,17 @@ impl Feed {
             .sum()
     }
 
+    /// False for a gas known by its gravity: it has no ideal-gas heat capacity, so only Z
+    /// and density (and what follows from them) can be computed.
+    pub fn energy_known(&self) -> bool {
+        self.gravity.is_none()
+    }
+
     /// The zero of enthalpy and entropy, in words: the same for every model of the feed.
     pub fn caloric_zero(&self) -> String {
+        if !self.energy_known() {
+            return "none: a gas known by its gravity has Z and density only".to_string();
+        }
         const IDEAL: &str = "h = 0 and s = 0 for the ideal gas at 298.15 K and 101.325 kPa";
         const STEAM: &str = "the steam-table zero (u = 0 and s = 0 for saturated liquid water at \
                              the triple point, IAPWS-95)";
@@ -74,6 +99,22 @@ impl Feed {
 
     /// A short label: the component name, or "mixture of N components".
     pub fn label(&self) -> String {
+        if let Some(g) = &self.gravity {
+            let inerts: Vec<String> = [("N2", g.n2), ("CO2", g.co2), ("H2S", g.h2s)]
+                .iter()
+                .filter(|(_, y)| *y > 0.0)
+                .map(|(name, y)| format!("{name} {y:.4}"))
+                .collect();
+            return if inerts.is_empty() {
+                format!("natural gas of gravity {}", g.typed)
+            } else {
+                format!(
+                    "natural gas of gravity {} ({} mole fractions)",
+                    g.typed,
+                    inerts.join(", ")
+                )
+            };
+        }
         if self.is_pure() {
             self.records[0].name.clone()
         } else {
@@ -225,6 +266,7 @@ pub fn from_amounts(
         mole,
         mass,
         kij: Vec::new(),
+        gravity: None,
     })
 }
 

@@ -32,6 +32,7 @@ pub mod exit;
 pub mod feed;
 pub mod feed_input;
 pub mod file_header;
+pub mod gravity_feed;
 pub mod input_notes;
 pub mod json_call;
 pub mod kij_input;

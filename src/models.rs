@@ -54,6 +54,9 @@ const ALL_SET: [&str; 9] = [
     "reference",
 ];
 
+/// The models that take a gas known only by its gravity (`--gravity`).
+pub const GRAVITY_ONLY: [&str; 2] = ["dak", "hy"];
+
 /// The models with an ideal-gas part of their own (the reference formulations and IAPWS-IF97):
 /// the component table's heat-capacity fits, and their fitted ranges, do not enter them.
 pub const OWN_IDEAL_GAS: [&str; 3] = ["reference", "sw12", "if97"];
@@ -223,6 +226,9 @@ fn unknown(part: &str) -> CliError {
 /// Expands a `--model` value ("all", one id, or a comma-separated list) into ids, refusing
 /// unknown ones with the list of known ids. "all" keeps only the models that apply to `feed`.
 pub fn resolve_ids(spec: &str, feed: &Feed) -> Result<Vec<String>, CliError> {
+    if spec.trim().eq_ignore_ascii_case("all") && feed.gravity.is_some() {
+        return Ok(GRAVITY_ONLY.iter().map(|s| s.to_string()).collect());
+    }
     if spec.trim().eq_ignore_ascii_case("all") {
         return Ok(ALL_SET
             .iter()
@@ -258,6 +264,9 @@ pub fn parse_ids(spec: &str) -> Result<Vec<String>, CliError> {
 /// True when model `id` can be built for `feed` (reference formulations exist for a few pure
 /// fluids, IF97 only for water).
 pub fn applies(id: &str, feed: &Feed) -> bool {
+    if feed.gravity.is_some() {
+        return GRAVITY_ONLY.contains(&id);
+    }
     match id {
         "reference" => {
             feed.is_pure() && eos::helmholtz::reference_for(&feed.records[0].id).is_some()
@@ -277,6 +286,16 @@ fn info(id: &str) -> (String, String) {
 
 /// Builds model `id` for `feed`.
 pub fn build(id: &str, feed: &Feed) -> Result<BuiltModel, CliError> {
+    if feed.gravity.is_some() && !GRAVITY_ONLY.contains(&id) {
+        if !ALL_IDS.contains(&id) {
+            return Err(unknown(id));
+        }
+        return Err(CliError::BadInput(format!(
+            "model {id} needs each component's critical constants; a gas known by its \
+             --gravity has Z and density from the gas-gravity correlations only: choose -m dak \
+             or -m hy (or give the composition with --mix for the other models)"
+        )));
+    }
     let comps = feed.components();
     let ctx = format!("building model {id}");
     let err = |e| from_eos(&ctx, e);

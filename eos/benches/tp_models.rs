@@ -158,6 +158,7 @@ mod z_only {
             gravity: 0.65,
             y_co2: 0.0,
             y_h2s: 0.0,
+            y_n2: 0.0,
             pseudo_critical: GravityCorrelation::Sutton,
             z,
         };

@@ -103,6 +103,7 @@ fn one_call_api_reports_its_warnings() {
         gravity: 0.65,
         y_co2: 0.02,
         y_h2s: 0.0,
+        y_n2: 0.0,
         pseudo_critical: GravityCorrelation::Sutton,
         z: ZCorrelation::Dak,
     };

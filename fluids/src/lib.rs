@@ -69,7 +69,8 @@
 //! ## Modules
 //! One concept per file, each using only those above it in this list: [`error`] (typed
 //! errors), [`name`] (the canonical form of a name), [`record`] (the record types),
-//! [`kij_entry`] (a k_ij row and its family), [`data`] (loading), [`source`](mod@source)
+//! [`kij_entry`] (a k_ij row and its family), [`gravity_gas`] (the hydrocarbon part of a gas
+//! known by its gravity), [`data`] (loading), [`source`](mod@source)
 //! (citations), [`suggest`] (suggestions), [`lookup`] (find a built-in component), [`user`]
 //! (the user's components), [`query`] (find any component), [`search`](mod@search) (substring
 //! search), [`kij`](mod@kij) (interaction parameters).
@@ -79,6 +80,7 @@
 
 pub mod data;
 pub mod error;
+pub mod gravity_gas;
 pub mod kij;
 pub mod kij_entry;
 pub mod lookup;

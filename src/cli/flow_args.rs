@@ -9,6 +9,8 @@ use clap::Args;
 pub struct FlowArgs {
     #[command(flatten)]
     pub fluid: FluidArgs,
+    #[command(flatten)]
+    pub gravity: crate::cli::gravity_args::GravityArgs,
     /// The flow with its unit: "12 kg/s", "50000 Sm3/h", "20 MMscfd", "1500 m3/h" (actual
     /// volume flows need --temperature and --pressure).
     #[arg(long)]

@@ -104,6 +104,8 @@ pub enum TableFormat {
 pub struct TableArgs {
     #[command(flatten)]
     pub fluid: FluidArgs,
+    #[command(flatten)]
+    pub gravity: crate::cli::gravity_args::GravityArgs,
     /// Temperatures: values with units and ranges, e.g. "250 K,300 K" or "250..350 K step 25".
     #[arg(
         long,

@@ -9,6 +9,8 @@ use clap::Args;
 pub struct VesselArgs {
     #[command(flatten)]
     pub fluid: FluidArgs,
+    #[command(flatten)]
+    pub gravity: crate::cli::gravity_args::GravityArgs,
     /// Internal volume with its unit: "1 m3", "50 L", "1.5 ft3".
     #[arg(long)]
     pub volume: String,

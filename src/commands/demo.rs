@@ -25,6 +25,7 @@ pub fn run(args: &DemoArgs) -> Result<Exit, CliError> {
             kij: None,
             kij_file: None,
         },
+        gravity: Default::default(),
         temperature: Some("40 degC".to_string()),
         pressure: Some("70 barg".to_string()),
         density: None,

@@ -9,11 +9,13 @@ use crate::report::flow::{FlowInput, FlowReport, FlowResult, VolumeAt};
 use crate::report::jobs_common::Compared;
 use eos::jobs::base_conditions::{molar_volume, NAMED};
 use eos::jobs::BaseConditions;
+use eos::need::Need;
+use eos::state::RootChoice;
 use eos::Model;
 
 /// Computes the report.
 pub fn run(args: &FlowArgs) -> Result<FlowReport, CliError> {
-    let feed = feed_input::read(&args.fluid)?;
+    let feed = feed_input::read_gas(&args.fluid, &args.gravity)?;
     let amb = jc::ambient(&args.shared.ambient)?;
     let base = args.base.as_deref().map(|b| jc::base(b, amb)).transpose()?;
     let flow = jc::flow(&args.flow, "--flow", base)?;
@@ -77,13 +79,20 @@ fn one(
     actual: Option<(f64, f64)>,
     x: &[f64],
 ) -> Result<FlowResult, CliError> {
-    let m: &dyn Model = pair.built.model()?;
     let ig: &dyn Model = &pair.ideal;
     let e = ctx(&pair.built.id);
     let at = actual.unwrap_or((f64::NAN, f64::NAN));
-    let n = molar_flow(m, flow, x, at).map_err(&e)?;
+    let mm = ig.molar_mass(x);
+    let n = match pair.built.helmholtz() {
+        Some(m) => molar_flow(m, flow, x, at).map_err(&e)?,
+        None => match flow {
+            Flow::Mass(q) => q / mm,
+            Flow::Molar(q) => q,
+            Flow::Actual(q) => q / volume_at(pair, at.0, at.1, x).map_err(&e)?.0,
+            Flow::Standard(q, b) => q / volume_at(pair, b.t, b.p, x).map_err(&e)?.0,
+        },
+    };
     let ni = molar_flow(ig, flow, x, at).map_err(&e)?;
-    let mm = m.molar_mass(x);
     let mut conds: Vec<BaseConditions> = NAMED.to_vec();
     if let Flow::Standard(_, b) = flow {
         if !NAMED.iter().any(|k| k.id == b.id) {
@@ -91,27 +100,17 @@ fn one(
         }
     }
     let mut volumes = Vec::new();
-    for b in &conds {
-        let (v, s) = molar_volume(m, b.t, b.p, x).map_err(&e)?;
-        let (vi, _) = molar_volume(ig, b.t, b.p, x).map_err(&e)?;
-        volumes.push(VolumeAt {
-            base: b.id.to_string(),
-            temperature_k: b.t,
-            pressure_pa: b.p,
-            z: s.z,
-            phase: s.phase.to_string(),
-            volume_flow_m3_s: Compared::new(n * v, ni * vi),
-        });
-    }
-    if let Some((t, p)) = actual {
-        let (v, s) = molar_volume(m, t, p, x).map_err(&e)?;
+    let named = conds.iter().map(|b| (b.id.to_string(), b.t, b.p));
+    let flowing = actual.map(|(t, p)| ("actual".to_string(), t, p));
+    for (base, t, p) in named.chain(flowing) {
+        let (v, z, phase) = volume_at(pair, t, p, x).map_err(&e)?;
         let (vi, _) = molar_volume(ig, t, p, x).map_err(&e)?;
         volumes.push(VolumeAt {
-            base: "actual".to_string(),
+            base,
             temperature_k: t,
             pressure_pa: p,
-            z: s.z,
-            phase: s.phase.to_string(),
+            z,
+            phase,
             volume_flow_m3_s: Compared::new(n * v, ni * vi),
         });
     }
@@ -126,10 +125,30 @@ fn one(
     })
 }
 
+/// Molar volume, Z and phase name at (T, P): a model with a Helmholtz energy through the
+/// phase-checked state of `base_conditions`, a model explicit in (T, P) (the gas-gravity
+/// correlations, Lee-Kesler, IF97) from its Z alone, as a flow of gas needs.
+fn volume_at(pair: &Pair, t: f64, p: f64, x: &[f64]) -> Result<(f64, f64, String), eos::Error> {
+    match pair.built.helmholtz() {
+        Some(m) => molar_volume(m, t, p, x).map(|(v, s)| (v, s.z, s.phase.to_string())),
+        None => pair
+            .built
+            .at_tp_need(t, p, x, RootChoice::LowestGibbs, Need::Volumetric)
+            .map(|s| (1.0 / s.props.rho, s.props.z, s.phase.to_string())),
+    }
+}
+
 /// The fluid's Z by the ISO 6976 summation method, or why there is none.
 fn summation(feed: &crate::feed::Feed) -> crate::report::flow::Summation {
     use crate::compare::iso6976_sum;
     use crate::report::flow::{Summation, SummationZ};
+    if feed.gravity.is_some() {
+        return Summation {
+            method: iso6976_sum::METHOD,
+            values: Vec::new(),
+            unavailable: Some("a gas known by its gravity has no composition to sum over".into()),
+        };
+    }
     let ids = feed.ids();
     match iso6976_sum::all_temperatures(&ids, &feed.mole) {
         Ok(values) => Summation {

@@ -278,15 +278,17 @@ fn flow_si(v: f64, key: &str, std: &dyn Fn(f64, &str) -> Flow) -> Option<Flow> {
 pub fn explicit_state(st: &crate::models::ModelState, t: f64, p: f64) -> StateReport {
     let pr = &st.props;
     let m = pr.molar_mass;
+    // Z and density only (a gas known by its gravity): no energies to show.
+    let energy = pr.computed == eos::need::Need::All;
     StateReport {
         temperature_k: t,
         pressure_pa: p,
         phase: st.phase.to_string(),
         z: pr.z,
         mass_density_kg_m3: pr.rho * m,
-        enthalpy_j_kg: pr.h / m,
-        entropy_j_kg_k: pr.s / m,
-        internal_energy_j_kg: pr.u / m,
+        enthalpy_j_kg: energy.then(|| pr.h / m),
+        entropy_j_kg_k: energy.then(|| pr.s / m),
+        internal_energy_j_kg: energy.then(|| pr.u / m),
         vapor_mass_fraction: None,
         vapor_mole_fraction: None,
         liquid_composition: None,

@@ -12,6 +12,7 @@ use crate::report::state::{
     StateReport,
 };
 use crate::units::{self, Density};
+use eos::need::Need;
 use eos::pure::Spec;
 use eos::solid::SolidCheck;
 use eos::state::RootChoice;
@@ -51,7 +52,7 @@ impl Given {
 
 /// Computes the state with every requested model.
 pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
-    let feed = feed_input::read(&args.fluid)?;
+    let feed = feed_input::read_gas(&args.fluid, &args.gravity)?;
     let ambient = units::ambient_pressure(&args.shared.ambient)?;
     let (t, p) = units::optional_tp(
         args.temperature.as_deref(),
@@ -92,6 +93,13 @@ pub fn run(args: &StateArgs) -> Result<StateReport, CliError> {
             ))
         }
     };
+    if feed.gravity.is_some() && !matches!(given, Given::Tp(..)) {
+        return Err(CliError::BadInput(
+            "a gas known by its --gravity takes --temperature and --pressure: the gas-gravity \
+             correlations give Z at a temperature and pressure"
+                .to_string(),
+        ));
+    }
     if !feed.is_pure()
         && matches!(
             given,
@@ -314,8 +322,14 @@ fn compute(
         }
         _ => given,
     };
+    // A gas known by its gravity has no ideal-gas heat capacity: Z and density only.
+    let need = if feed.energy_known() {
+        Need::All
+    } else {
+        Need::Volumetric
+    };
     let mut state = match given {
-        Given::Tp(t, p) => built.at_tp(t, p, x, root),
+        Given::Tp(t, p) => built.at_tp_need(t, p, x, root, need),
         Given::TRho(t, r) => built.at_trho(t, r, x, root),
         Given::PRho(p, r) => built.at_prho(p, r, x, root),
         _ => unreachable_pair(),
@@ -340,7 +354,7 @@ fn compute(
     let pr = &state.props;
     let (dev, of) = ideal_gas_error(asked, pr.z);
     let mut notes = built.notes.clone();
-    if pr.cp.is_none() {
+    if pr.cp.is_none() && feed.energy_known() {
         notes.push(
             "cp, speed of sound, Joule-Thomson coefficient and isentropic exponent are undefined: \
              the state is mechanically unstable (dP/drho <= 0)"
@@ -366,7 +380,9 @@ fn compute(
     let mm = pr.molar_mass;
     let (t_given, p_given) = given_tp(asked);
     let rt = eos::constants::R * pr.t;
+    let energy = feed.energy_known();
     let (h, s) = (snap(pr.h, rt), snap(pr.s, eos::constants::R));
+    let known = |v: f64| energy.then_some(v);
     let result = ModelResult {
         model: built.id.clone(),
         model_name: built.name.clone(),
@@ -382,19 +398,19 @@ fn compute(
         specific_volume_m3_kg: pr.molar_volume() / mm,
         ideal_gas_deviation_pct: 100.0 * dev,
         ideal_gas_deviation_of: of,
-        enthalpy_j_mol: h,
-        entropy_j_mol_k: s,
-        internal_energy_j_mol: pr.u,
-        enthalpy_j_kg: h / mm,
-        entropy_j_kg_k: s / mm,
-        cv_j_mol_k: (!cv_withheld).then_some(pr.cv),
-        cp_j_mol_k: pr.cp,
-        speed_of_sound_m_s: pr.w,
-        joule_thomson_k_pa: pr.jt,
-        isentropic_exponent: pr.isentropic_exponent,
-        residual_enthalpy_j_mol: Some(pr.h_res),
-        residual_entropy_j_mol_k: Some(pr.s_res),
-        residual_gibbs_j_mol: Some(pr.g_res),
+        enthalpy_j_mol: known(h),
+        entropy_j_mol_k: known(s),
+        internal_energy_j_mol: known(pr.u),
+        enthalpy_j_kg: known(h / mm),
+        entropy_j_kg_k: known(s / mm),
+        cv_j_mol_k: (energy && !cv_withheld).then_some(pr.cv),
+        cp_j_mol_k: pr.cp.filter(|_| energy),
+        speed_of_sound_m_s: pr.w.filter(|_| energy),
+        joule_thomson_k_pa: pr.jt.filter(|_| energy),
+        isentropic_exponent: pr.isentropic_exponent.filter(|_| energy),
+        residual_enthalpy_j_mol: known(pr.h_res),
+        residual_entropy_j_mol_k: known(pr.s_res),
+        residual_gibbs_j_mol: known(pr.g_res),
         vapor_fraction: None,
         phases: Vec::new(),
         fugacity: fugacities(feed, &pr.ln_phi, x, pr.p),
@@ -489,11 +505,11 @@ fn two_phase_of(
         specific_volume_m3_kg: v_molar / mm,
         ideal_gas_deviation_pct: 100.0 * ideal_gas_error(asked, z).0,
         ideal_gas_deviation_of: ideal_gas_error(asked, z).1,
-        enthalpy_j_mol: bulk(vap.h, liq.h),
-        entropy_j_mol_k: bulk(vap.s, liq.s),
-        internal_energy_j_mol: bulk(vap.u, liq.u),
-        enthalpy_j_kg: bulk(vap.h, liq.h) / mm,
-        entropy_j_kg_k: bulk(vap.s, liq.s) / mm,
+        enthalpy_j_mol: Some(bulk(vap.h, liq.h)),
+        entropy_j_mol_k: Some(bulk(vap.s, liq.s)),
+        internal_energy_j_mol: Some(bulk(vap.u, liq.u)),
+        enthalpy_j_kg: Some(bulk(vap.h, liq.h) / mm),
+        entropy_j_kg_k: Some(bulk(vap.s, liq.s) / mm),
         cv_j_mol_k: None,
         cp_j_mol_k: None,
         speed_of_sound_m_s: None,
@@ -696,12 +712,12 @@ fn check_finite(r: &ModelResult) -> Result<(), CliError> {
         r.z,
         r.molar_density_mol_m3,
         r.mass_density_kg_m3,
-        r.enthalpy_j_mol,
-        r.entropy_j_mol_k,
         r.temperature_k,
         r.pressure_pa,
     ];
     let optional = [
+        r.enthalpy_j_mol,
+        r.entropy_j_mol_k,
         r.cv_j_mol_k,
         r.cp_j_mol_k,
         r.speed_of_sound_m_s,

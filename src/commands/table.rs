@@ -205,7 +205,7 @@ struct Plan {
 
 impl Plan {
     fn new(args: &TableArgs) -> Result<Plan, CliError> {
-        let feed = feed_input::read(&args.fluid)?;
+        let feed = feed_input::read_gas(&args.fluid, &args.gravity)?;
         let ambient = units::ambient_pressure(&args.ambient)?;
         let sel = table_property::parse(&args.properties)?;
         let ids = models::resolve_ids(&args.model, &feed)?;
@@ -217,6 +217,22 @@ impl Plan {
             )));
         }
         let built = models::build(&ids[0], &feed)?;
+        if !feed.energy_known() {
+            let energy: Vec<&str> = sel
+                .properties
+                .iter()
+                .filter(|p| !p.from_z)
+                .map(|p| p.id)
+                .collect();
+            if !energy.is_empty() {
+                return Err(CliError::BadInput(format!(
+                    "--properties {}: these need the gas's ideal-gas heat capacity, which a \
+                     --gravity alone does not give; ask for what follows from Z (z, density, \
+                     molar_density, volume, ideal_gas_error), or give the composition with --mix",
+                    energy.join(",")
+                )));
+            }
+        }
         let t = grid::parse_axis(&args.temperatures, units::temperature)
             .map_err(|e| CliError::BadInput(format!("--temperatures: {e}")))?;
         let p = grid::parse_axis(&args.pressures, |s| {

@@ -41,7 +41,7 @@ struct Input {
 
 /// Computes the report.
 pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
-    let feed = feed_input::read(&args.fluid)?;
+    let feed = feed_input::read_gas(&args.fluid, &args.gravity)?;
     let amb = jc::ambient(&args.shared.ambient)?;
     let t = jc::temperature(&args.temperature)?;
     let opt_t = |s: &Option<String>| s.as_deref().map(jc::temperature).transpose();
@@ -90,7 +90,7 @@ pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
     }
     let x = feed.mole.clone();
     let (results, mut warnings) = per_model(&args.shared.model, &feed, |pair| {
-        let mut r = one(pair, &input, &x)?;
+        let mut r = one(pair, &input, &x, feed.energy_known())?;
         let edge = jc::edge_notes(pair, &feed, &[("contents", &r.state)]);
         r.notes.extend(edge);
         Ok(r)
@@ -121,7 +121,12 @@ pub fn run(args: &VesselArgs) -> Result<VesselReport, CliError> {
 /// IF97): what the vessel holds needs only Z, n = P V / (Z R T), and its standard volume Z at
 /// the base. The other operations follow the contents through heat and work, or solve for a
 /// state, and are refused for these models.
-fn inventory_only(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, CliError> {
+fn inventory_only(
+    pair: &Pair,
+    inp: &Input,
+    x: &[f64],
+    energy: bool,
+) -> Result<VesselResult, CliError> {
     let id = pair.built.id.as_str();
     let asked: Vec<&str> = [
         (inp.to_t.is_some(), "--to-temperature"),
@@ -143,7 +148,15 @@ fn inventory_only(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, C
     }
     let e = ctx(id);
     let root = eos::state::RootChoice::LowestGibbs;
-    let st = pair.built.at_tp(inp.t, inp.p, x, root).map_err(&e)?;
+    let need = if energy {
+        eos::need::Need::All
+    } else {
+        eos::need::Need::Volumetric
+    };
+    let st = pair
+        .built
+        .at_tp_need(inp.t, inp.p, x, root, need)
+        .map_err(&e)?;
     let at_base = pair
         .built
         .at_tp_need(inp.base.t, inp.base.p, x, root, eos::need::Need::Volumetric)
@@ -181,9 +194,9 @@ fn cmp(a: f64, b: f64) -> Compared {
     Compared::new(a, b)
 }
 
-fn one(pair: &Pair, inp: &Input, x: &[f64]) -> Result<VesselResult, CliError> {
+fn one(pair: &Pair, inp: &Input, x: &[f64], energy: bool) -> Result<VesselResult, CliError> {
     let Some(m) = pair.built.helmholtz() else {
-        return inventory_only(pair, inp, x);
+        return inventory_only(pair, inp, x, energy);
     };
     let ig: &dyn Model = &pair.ideal;
     let id = pair.built.id.as_str();

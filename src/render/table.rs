@@ -5,7 +5,7 @@ use crate::render::house_table;
 use crate::render::model_grid::{Grid, WIDTH};
 use crate::render::number::{opt, sig};
 use crate::report::fluids::FluidsReport;
-use crate::report::state::StateReport;
+use crate::report::state::{CompositionRow, ModelResult, StateReport};
 use crate::units::{KELVIN_AT_0_DEGC, PA_PER_BAR};
 use comfy_table::{CellAlignment, ContentArrangement, Table};
 
@@ -109,37 +109,10 @@ pub fn state(r: &StateReport) -> String {
     row(&mut t, &format!("ideal-gas error in {of}"), "%", &|i| {
         sig(res[i].ideal_gas_deviation_pct, 4)
     });
-    row(&mut t, "enthalpy", "kJ/kg", &|i| {
-        sig(res[i].enthalpy_j_kg / 1e3, 6)
-    });
-    row(&mut t, "entropy", "kJ/(kg K)", &|i| {
-        sig(res[i].entropy_j_kg_k / 1e3, 6)
-    });
-    let mm = |i: usize| res[i].mass_density_kg_m3 / res[i].molar_density_mol_m3;
-    row(&mut t, "cp", "kJ/(kg K)", &|i| {
-        opt(res[i].cp_j_mol_k.map(|c| c / mm(i) / 1e3), 5)
-    });
-    row(&mut t, "cv", "kJ/(kg K)", &|i| {
-        opt(res[i].cv_j_mol_k.map(|c| c / mm(i) / 1e3), 5)
-    });
-    row(&mut t, "speed of sound", "m/s", &|i| {
-        opt(res[i].speed_of_sound_m_s, 5)
-    });
-    row(&mut t, "Joule-Thomson coeff.", "K/bar", &|i| {
-        opt(res[i].joule_thomson_k_pa.map(|j| j * PA_PER_BAR), 4)
-    });
-    row(&mut t, "isentropic exponent", "-", &|i| {
-        opt(res[i].isentropic_exponent, 5)
-    });
-    for (k, c) in r.composition.iter().enumerate() {
-        let name = if r.composition.len() == 1 {
-            "fugacity coeff.".to_string()
-        } else {
-            format!("fugacity coeff. {}", c.id)
-        };
-        row(&mut t, &name, "-", &|i| {
-            opt(res[i].fugacity.get(k).and_then(|f| f.phi), 6)
-        });
+    // A gas known by its gravity has no energy properties: their rows are left out.
+    let energy = res.iter().any(|m| m.enthalpy_j_kg.is_some());
+    if energy {
+        energy_rows(&mut t, res, &r.composition);
     }
     out.push_str(&t.finish());
     let notes = crate::render::notes::grouped(
@@ -152,9 +125,56 @@ pub fn state(r: &StateReport) -> String {
             out.push_str(&format!("  {n}\n"));
         }
     }
-    out.push_str(&format!("h and s: {}.\n", r.enthalpy_entropy_zero));
+    if energy {
+        out.push_str(&format!("h and s: {}.\n", r.enthalpy_entropy_zero));
+    } else {
+        out.push_str(
+            "h, s, cp, speed of sound, fugacities: not available for a gas known by its \
+             gravity\n(no ideal-gas heat capacity); give its composition with --mix.\n",
+        );
+    }
     out.push_str(&format!("caution: {}\n", r.caution));
     out
+}
+
+/// The rows of enthalpy, entropy, heat capacities, speed of sound, Joule-Thomson coefficient,
+/// isentropic exponent and fugacity coefficients.
+fn energy_rows(t: &mut Grid, res: &[ModelResult], composition: &[CompositionRow]) {
+    let row = |t: &mut Grid, name: &str, unit: &str, f: &dyn Fn(usize) -> String| {
+        t.row(name, unit, (0..res.len()).map(f).collect());
+    };
+    row(t, "enthalpy", "kJ/kg", &|i| {
+        opt(res[i].enthalpy_j_kg.map(|h| h / 1e3), 6)
+    });
+    row(t, "entropy", "kJ/(kg K)", &|i| {
+        opt(res[i].entropy_j_kg_k.map(|s| s / 1e3), 6)
+    });
+    let mm = |i: usize| res[i].mass_density_kg_m3 / res[i].molar_density_mol_m3;
+    row(t, "cp", "kJ/(kg K)", &|i| {
+        opt(res[i].cp_j_mol_k.map(|c| c / mm(i) / 1e3), 5)
+    });
+    row(t, "cv", "kJ/(kg K)", &|i| {
+        opt(res[i].cv_j_mol_k.map(|c| c / mm(i) / 1e3), 5)
+    });
+    row(t, "speed of sound", "m/s", &|i| {
+        opt(res[i].speed_of_sound_m_s, 5)
+    });
+    row(t, "Joule-Thomson coeff.", "K/bar", &|i| {
+        opt(res[i].joule_thomson_k_pa.map(|j| j * PA_PER_BAR), 4)
+    });
+    row(t, "isentropic exponent", "-", &|i| {
+        opt(res[i].isentropic_exponent, 5)
+    });
+    for (k, c) in composition.iter().enumerate() {
+        let name = if composition.len() == 1 {
+            "fugacity coeff.".to_string()
+        } else {
+            format!("fugacity coeff. {}", c.id)
+        };
+        row(t, &name, "-", &|i| {
+            opt(res[i].fugacity.get(k).and_then(|f| f.phi), 6)
+        });
+    }
 }
 
 /// The component list or one component's record, as text.

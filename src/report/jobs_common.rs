@@ -72,12 +72,13 @@ pub struct StateReport {
     pub z: f64,
     /// Overall mass density, kg/m3.
     pub mass_density_kg_m3: f64,
-    /// Specific enthalpy, J/kg.
-    pub enthalpy_j_kg: f64,
+    /// Specific enthalpy, J/kg (null with the energies below for a gas known by its gravity
+    /// only, which has no ideal-gas heat capacity).
+    pub enthalpy_j_kg: Option<f64>,
     /// Specific entropy, J/(kg K).
-    pub entropy_j_kg_k: f64,
+    pub entropy_j_kg_k: Option<f64>,
     /// Specific internal energy, J/kg.
-    pub internal_energy_j_kg: f64,
+    pub internal_energy_j_kg: Option<f64>,
     /// Vapour mass fraction of a two-phase state.
     pub vapor_mass_fraction: Option<f64>,
     /// Vapour mole fraction of a two-phase state.
@@ -97,9 +98,9 @@ impl From<&eos::jobs::EqState> for StateReport {
             phase: s.phase.to_string(),
             z: s.z,
             mass_density_kg_m3: s.mass_density(),
-            enthalpy_j_kg: s.h / m,
-            entropy_j_kg_k: s.s / m,
-            internal_energy_j_kg: s.u / m,
+            enthalpy_j_kg: Some(s.h / m),
+            entropy_j_kg_k: Some(s.s / m),
+            internal_energy_j_kg: Some(s.u / m),
             vapor_mass_fraction: s.split.as_ref().map(|p| p.vapor_mass_fraction),
             vapor_mole_fraction: s.split.as_ref().map(|p| p.vapor_fraction),
             liquid_composition: s.split.as_ref().map(|p| p.x.clone()),

@@ -94,11 +94,14 @@ pub struct ModelResult {
     /// Which variable the ideal-gas deviation is for: "density", "pressure" or "temperature".
     /// For a two-phase state the bulk density (both phases together) is used.
     pub ideal_gas_deviation_of: &'static str,
-    pub enthalpy_j_mol: f64,
-    pub entropy_j_mol_k: f64,
-    pub internal_energy_j_mol: f64,
-    pub enthalpy_j_kg: f64,
-    pub entropy_j_kg_k: f64,
+    /// Enthalpy, entropy and internal energy; null for a gas known by its gravity only (it
+    /// has no ideal-gas heat capacity), as are the heat capacities, speed of sound and
+    /// departures below.
+    pub enthalpy_j_mol: Option<f64>,
+    pub entropy_j_mol_k: Option<f64>,
+    pub internal_energy_j_mol: Option<f64>,
+    pub enthalpy_j_kg: Option<f64>,
+    pub entropy_j_kg_k: Option<f64>,
     /// Isochoric heat capacity; null for a two-phase state.
     pub cv_j_mol_k: Option<f64>,
     /// Isobaric heat capacity; null where the state is mechanically unstable.

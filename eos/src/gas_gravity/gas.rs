@@ -1,6 +1,7 @@
 //! Z of a natural gas from its gravity, temperature and pressure, in one call.
 
-use super::pseudo_critical::{pseudo_critical, GravityCorrelation, PseudoCriticalPoint};
+use super::inerts::{pseudo_critical_with_inerts, InertFractions};
+use super::pseudo_critical::{GravityCorrelation, PseudoCriticalPoint};
 use super::warning::RangeWarning;
 use super::{dak, hall_yarborough, wichert_aziz};
 use crate::error::{positive, Result};
@@ -34,6 +35,9 @@ pub struct GasSpec {
     pub y_co2: f64,
     /// H2S mole fraction.
     pub y_h2s: f64,
+    /// N2 mole fraction (with CO2 and H2S, taken out of the gravity before the correlation:
+    /// see [`super::inerts`]).
+    pub y_n2: f64,
     /// Pseudo-critical correlation.
     pub pseudo_critical: GravityCorrelation,
     /// Z correlation.
@@ -59,7 +63,13 @@ pub fn z_tp(gas: &GasSpec, t: f64, p: f64) -> Result<GasZ> {
     positive("temperature (K)", t)?;
     positive("pressure (Pa)", p)?;
     let mut warnings = Vec::new();
-    let mut pc = pseudo_critical(gas.gravity, gas.pseudo_critical, &mut warnings)?;
+    let inerts = InertFractions {
+        n2: gas.y_n2,
+        co2: gas.y_co2,
+        h2s: gas.y_h2s,
+    };
+    let mut pc =
+        pseudo_critical_with_inerts(gas.gravity, &inerts, gas.pseudo_critical, &mut warnings)?;
     if gas.y_co2 != 0.0 || gas.y_h2s != 0.0 {
         pc = wichert_aziz::correct(pc, gas.y_co2, gas.y_h2s, &mut warnings)?;
     }

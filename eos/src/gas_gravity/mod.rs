@@ -10,12 +10,14 @@
 pub mod dak;
 mod gas;
 pub mod hall_yarborough;
+pub mod inerts;
 pub mod pseudo_critical;
 mod units;
 pub mod warning;
 pub mod wichert_aziz;
 
 pub use gas::{z_tp, GasSpec, GasZ, ZCorrelation};
+pub use inerts::{InertFractions, M_AIR};
 pub use pseudo_critical::{pseudo_critical, GravityCorrelation, PseudoCriticalPoint};
 pub use units::{K_PER_RANKINE, PA_PER_PSI};
 pub use warning::RangeWarning;

@@ -1,18 +1,15 @@
 //! The gas-gravity Z correlations (Dranchuk-Abou-Kassem, Hall-Yarborough) as a (T, P)-explicit
 //! model of a mixture: the gravity is the mixture's molar mass over that of dry air, the acid
 //! gases are the mixture's carbon dioxide and hydrogen sulfide, and the pseudo-critical point
-//! comes from Sutton's correlation with the Wichert-Aziz correction (see
+//! comes from Sutton's correlation for the hydrocarbon part, mixed with the nitrogen, carbon
+//! dioxide and hydrogen sulfide by Kay's rule, with the Wichert-Aziz correction (see
 //! [`crate::gas_gravity`]). Energy properties follow from Z by the departure integrals.
 
 use super::{TpModel, TpPoint};
 use crate::component::Component;
 use crate::error::Result;
-use crate::gas_gravity::{z_tp, GasSpec, GravityCorrelation, ZCorrelation};
+use crate::gas_gravity::{z_tp, GasSpec, GravityCorrelation, ZCorrelation, M_AIR};
 use crate::state::RootChoice;
-
-/// Molar mass of dry air, kg/mol: 28.9647 g/mol (from memory of the CRC Handbook of Chemistry
-/// and Physics; the value customarily used for gas gravity).
-pub const M_AIR: f64 = 0.028_964_7;
 
 /// A Z correlation of the Standing-Katz chart for given components.
 #[derive(Debug, Clone)]
@@ -21,11 +18,13 @@ pub struct GravityModel {
     z: ZCorrelation,
     co2: Option<usize>,
     h2s: Option<usize>,
+    n2: Option<usize>,
 }
 
 impl GravityModel {
-    /// The correlation `z` for these components; carbon dioxide and hydrogen sulfide are
-    /// recognised by name for the acid-gas correction.
+    /// The correlation `z` for these components; nitrogen, carbon dioxide and hydrogen
+    /// sulfide are recognised by name (taken out of the hydrocarbon part, and the acid gases
+    /// corrected for).
     pub fn new(comps: &[Component], z: ZCorrelation) -> Self {
         let find = |names: &[&str]| {
             comps
@@ -37,6 +36,7 @@ impl GravityModel {
             z,
             co2: find(&["carbon dioxide", "co2"]),
             h2s: find(&["hydrogen sulfide", "hydrogen sulphide", "h2s"]),
+            n2: find(&["nitrogen", "n2"]),
         }
     }
 }
@@ -61,6 +61,7 @@ impl TpModel for GravityModel {
             gravity: m / M_AIR,
             y_co2: self.co2.map_or(0.0, |i| x[i]),
             y_h2s: self.h2s.map_or(0.0, |i| x[i]),
+            y_n2: self.n2.map_or(0.0, |i| x[i]),
             pseudo_critical: GravityCorrelation::Sutton,
             z: self.z,
         };
