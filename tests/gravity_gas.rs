@@ -137,6 +137,12 @@ fn table_vessel_and_flow_take_the_gravity() {
     ]
     .concat());
     assert_eq!(code, 0, "{err}");
+    // A gas-gravity correlation has no phase equilibrium: the basis must not claim a flash.
+    let method = csv.lines().find(|l| l.starts_with("# method:")).unwrap();
+    assert!(
+        method.contains("not flashed") && !method.contains("is flashed"),
+        "{method}"
+    );
     let row = csv
         .lines()
         .find(|l| !l.starts_with('#') && !l.starts_with("temp"))

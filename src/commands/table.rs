@@ -279,6 +279,15 @@ impl Plan {
                 }
                 (Some(z), method)
             }
+            None if !feed.is_pure() && (built.helmholtz().is_none() || built.id == "ideal") => {
+                let method = format!(
+                    "each state from (T, P) with the root of lowest Gibbs energy; model {} has \
+                     no phase equilibrium: every state is the feed as one phase, not flashed; \
+                     every property from the model",
+                    built.id
+                );
+                (None, method)
+            }
             None => {
                 let method = format!(
                     "each state from (T, P) with the root of lowest Gibbs energy; {} (a state \
