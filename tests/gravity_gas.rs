@@ -302,3 +302,22 @@ fn what_a_gravity_cannot_give_is_refused_with_the_reason() {
         assert!(!help.contains("--gravity"), "{cmd} offers --gravity");
     }
 }
+
+#[test]
+fn a_mass_flow_comes_back_as_given_with_a_reference_formulation() {
+    // The flow's molar mass is the model's own (Setzmann-Wagner methane's), so 10 kg/s is
+    // 10 kg/s again, not 10 x (M_table / M_formulation).
+    let v = json(&[
+        "flow",
+        "--fluid",
+        "methane",
+        "--flow",
+        "10 kg/s",
+        "-m",
+        "reference,dak",
+    ]);
+    for r in v["results"].as_array().unwrap() {
+        let m = r["mass_flow_kg_s"].as_f64().unwrap();
+        assert!((m - 10.0).abs() < 1e-12, "{}: {m}", r["model"]);
+    }
+}

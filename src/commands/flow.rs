@@ -82,15 +82,17 @@ fn one(
     let ig: &dyn Model = &pair.ideal;
     let e = ctx(&pair.built.id);
     let at = actual.unwrap_or((f64::NAN, f64::NAN));
-    let mm = ig.molar_mass(x);
-    let n = match pair.built.helmholtz() {
-        Some(m) => molar_flow(m, flow, x, at).map_err(&e)?,
-        None => match flow {
-            Flow::Mass(q) => q / mm,
-            Flow::Molar(q) => q,
-            Flow::Actual(q) => q / volume_at(pair, at.0, at.1, x).map_err(&e)?.0,
-            Flow::Standard(q, b) => q / volume_at(pair, b.t, b.p, x).map_err(&e)?.0,
-        },
+    // The model's own molar mass where it has one (a reference formulation's), else the
+    // components'.
+    let mm = pair
+        .built
+        .helmholtz()
+        .map_or_else(|| ig.molar_mass(x), |m| m.molar_mass(x));
+    let n = match flow {
+        Flow::Mass(q) => q / mm,
+        Flow::Molar(q) => q,
+        Flow::Actual(q) => q / volume_at(pair, at.0, at.1, x).map_err(&e)?.0,
+        Flow::Standard(q, b) => q / volume_at(pair, b.t, b.p, x).map_err(&e)?.0,
     };
     let ni = molar_flow(ig, flow, x, at).map_err(&e)?;
     let mut conds: Vec<BaseConditions> = NAMED.to_vec();
