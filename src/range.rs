@@ -64,6 +64,73 @@ impl StateCheck {
         (!f.is_empty()).then(|| f.join("; "))
     }
 
+    /// The flagged states among (t[i], p[i]) with compression factor z[i], as (index, flag)
+    /// in index order, each flag as [`StateCheck::flag`] gives it; on all cores. A block of
+    /// states whose whole (T, P) box lies inside the model's range and clear of the solid is
+    /// passed over without a state-by-state check (the box test is exact for the range and,
+    /// for the solid, relies on melting pressures rising with temperature above the triple
+    /// point, which holds for every curve in [`eos::solid`] and is tested there). A state
+    /// whose Z is not a positive number is not flagged here (it has no density to check).
+    pub fn flags(&self, t: &[f64], p: &[f64], z: &[f64]) -> Vec<(usize, String)> {
+        use rayon::prelude::*;
+        const BLOCK: usize = 4096;
+        let n = t.len().min(p.len()).min(z.len());
+        (0..n.div_ceil(BLOCK))
+            .into_par_iter()
+            .flat_map_iter(|b| {
+                let r = b * BLOCK..((b + 1) * BLOCK).min(n);
+                let (tb, pb, zb) = (&t[r.clone()], &p[r.clone()], &z[r.clone()]);
+                let clear = self.box_is_clear(tb, pb);
+                r.zip(tb.iter().zip(pb).zip(zb))
+                    .filter(move |_| !clear)
+                    .filter_map(|(i, ((&t, &p), &z))| {
+                        (z > 0.0)
+                            .then(|| self.flag(t, p, p / (z * R * t)))
+                            .flatten()
+                            .map(|f| (i, f))
+                    })
+            })
+            .collect()
+    }
+
+    /// True when no state of the box spanned by `t` and `p` can be flagged: inside the
+    /// stated range, not a truncated virial series (its limit depends on each density), and
+    /// above the triple point and below the melting pressure at the lowest temperature.
+    fn box_is_clear(&self, t: &[f64], p: &[f64]) -> bool {
+        if self.virial_rho_c.is_some() {
+            return false;
+        }
+        // Each bound is found only where a check needs it; a NaN or an infinity in the block
+        // makes its bound not finite, and the block is then checked state by state.
+        let below = |bound: f64, v: f64| v.is_finite() && v <= bound;
+        let t_lo = match (&self.range, &self.solid) {
+            (None, None) => return true,
+            _ => lowest(t),
+        };
+        let in_range = match &self.range {
+            None => true,
+            Some(r) => {
+                r.t_min <= t_lo
+                    && below(r.t_max, -lowest_negated(t))
+                    && below(r.p_max, -lowest_negated(p))
+            }
+        };
+        let clear_of_solid = match &self.solid {
+            None => true,
+            Some((l, _)) => {
+                l.t_triple <= t_lo
+                    && t_lo.is_finite()
+                    && match l.melting {
+                        None => true,
+                        Some(melting) => {
+                            melting(t_lo).is_some_and(|m| below(m, -lowest_negated(p)))
+                        }
+                    }
+            }
+        };
+        in_range && clear_of_solid
+    }
+
     /// The published range when (T, P) lies outside it.
     fn outside_range(&self, t: f64, p: f64) -> Option<eos::pure::FluidRange> {
         self.range
@@ -77,6 +144,39 @@ impl StateCheck {
         (rho > VIRIAL_MAX_DENSITY_OVER_CRITICAL * rho_c || (z - 1.0).abs() > VIRIAL_MAX_CORRECTION)
             .then_some((rho / rho_c, z - 1.0))
     }
+}
+
+/// Columns of the running minimum in [`lowest`]: independent chains, so that it vectorises.
+const COLUMNS: usize = 8;
+
+/// The smallest value (infinity for none); NaN where any value is NaN.
+fn lowest(v: &[f64]) -> f64 {
+    lowest_of(v, |x| x)
+}
+
+/// The smallest negated value, that is minus the largest; NaN where any value is NaN.
+fn lowest_negated(v: &[f64]) -> f64 {
+    lowest_of(v, |x| -x)
+}
+
+#[allow(clippy::needless_range_loop)]
+fn lowest_of(v: &[f64], f: impl Fn(f64) -> f64) -> f64 {
+    let mut lo = [f64::INFINITY; COLUMNS];
+    let mut poison = [0.0; COLUMNS];
+    let mut chunks = v.chunks_exact(COLUMNS);
+    for c in &mut chunks {
+        for k in 0..COLUMNS {
+            let x = f(c[k]);
+            lo[k] = if x < lo[k] { x } else { lo[k] };
+            poison[k] += x * 0.0;
+        }
+    }
+    for &x in chunks.remainder() {
+        let x = f(x);
+        lo[0] = if x < lo[0] { x } else { lo[0] };
+        poison[0] += x * 0.0;
+    }
+    lo.iter().fold(f64::INFINITY, |a, &b| a.min(b)) + poison.iter().sum::<f64>()
 }
 
 /// Warnings for a state of `built` at (T, P) with molar density `rho`: outside the model's

@@ -211,6 +211,29 @@ mod tests {
     }
 
     #[test]
+    fn melting_pressures_rise_with_temperature_above_the_triple_point() {
+        // A block of states is cleared of the solid by its lowest temperature and highest
+        // pressure alone (zfactor's range check) only because of this: the Simon-type curves
+        // of CO2 and nitrogen and water's curves of ices III, V, VI and VII all rise with T
+        // (common practice; the phase diagrams in the sources named in `lines`).
+        for id in ["water", "co2", "nitrogen", "methane"] {
+            let l = of(id);
+            let Some(melting) = l.melting else { continue };
+            let mut last = 0.0;
+            for k in 0..20_000 {
+                let t = l.t_triple + 0.05 * k as f64;
+                if let Some(m) = melting(t) {
+                    assert!(
+                        m >= last,
+                        "{id}: melting pressure falls at {t} K: {m} < {last}"
+                    );
+                    last = m;
+                }
+            }
+        }
+    }
+
+    #[test]
     fn the_curves_meet_at_the_triple_point() {
         for id in ["co2", "nitrogen"] {
             let l = of(id);

@@ -179,8 +179,6 @@ fn z_batch<'py>(
     if t.len() != p.len() {
         return Ok(None);
     }
-    check_positive("temperature", "K", t)?;
-    check_positive("pressure", "Pa", p)?;
     let (feed, built) = fluid_and_model(model, fluid, mix, kij)?;
     if !feed.is_pure() {
         return Ok(None);
@@ -188,31 +186,60 @@ fn z_batch<'py>(
     let Some(batch) = zfactor::zgrid::batch_model(&built.id, &feed) else {
         return Ok(None);
     };
-    let (t, p) = (t.to_vec(), p.to_vec());
-    let found = py.detach(|| {
-        let mut z = vec![0.0; t.len()];
-        batch
-            .z_tp_par(&t, &p, eos::batch::BatchRoot::LowestGibbs, &mut z)
-            .map(|()| {
-                let check = zfactor::range::StateCheck::new(&built, &feed);
-                let r = eos::constants::R;
-                // Only the flagged states, as (index, flag): a list of a million Nones would
-                // cost the caller more than the kernel.
-                let flags: Vec<(usize, String)> = t
-                    .par_iter()
-                    .zip(p.par_iter())
-                    .zip(z.par_iter())
-                    .enumerate()
-                    .filter_map(|(i, ((&t, &p), &z))| {
-                        check.flag(t, p, p / (z * r * t)).map(|f| (i, f))
-                    })
-                    .collect();
-                (z, flags)
-            })
+    // The output is allocated by NumPy, which asks the kernel for huge pages for large arrays
+    // (a million states then cost a few page faults rather than thousands).
+    let out = PyArray1::<f64>::zeros(py, t.len(), false);
+    // SAFETY: the array was created just above and no Python code holds a reference to it
+    // until this function returns, so nothing else reads or writes it while the GIL is
+    // released; it is a contiguous, one-dimensional float64 array.
+    #[allow(unsafe_code)]
+    let z = unsafe { out.as_slice_mut()? };
+    let found = INPUTS.with_borrow_mut(|(tv, pv)| {
+        // Copies, so that no Python thread can change the input while the GIL is released,
+        // into buffers this thread keeps for its next call.
+        tv.clear();
+        tv.extend_from_slice(t);
+        pv.clear();
+        pv.extend_from_slice(p);
+        let found = py.detach(|| {
+            batch
+                .z_tp_par(tv, pv, eos::batch::BatchRoot::LowestGibbs, z)
+                .map(|()| {
+                    // Only the flagged states, as (index, flag): a list of a million Nones
+                    // would cost the caller more than the kernel.
+                    zfactor::range::StateCheck::new(&built, &feed).flags(tv, pv, z)
+                })
+        });
+        if tv.capacity() > INPUTS_KEPT {
+            *tv = Vec::new();
+            *pv = Vec::new();
+        }
+        found
     });
-    let (z, flags) = found
-        .map_err(|e| value_error(zfactor::error::from_eos(&format!("model {}", built.id), e)))?;
-    Ok(Some((PyArray1::from_vec(py, z), flags)))
+    match found {
+        Ok(flags) => Ok(Some((out, flags))),
+        Err(e) => {
+            // The kernel screens every state as it goes; name the first bad one as
+            // `evaluate` does.
+            check_positive("temperature", "K", t)?;
+            check_positive("pressure", "Pa", p)?;
+            Err(value_error(zfactor::error::from_eos(
+                &format!("model {}", built.id),
+                e,
+            )))
+        }
+    }
+}
+
+/// The most states whose input copies a thread keeps between calls of [`z_batch`] (16 bytes
+/// a state: 64 MB at most).
+const INPUTS_KEPT: usize = 4 << 20;
+
+thread_local! {
+    /// The copies of the temperatures and pressures of [`z_batch`], kept between calls on
+    /// the same thread so that a repeated large call does not pay for fresh pages each time.
+    static INPUTS: std::cell::RefCell<(Vec<f64>, Vec<f64>)> =
+        const { std::cell::RefCell::new((Vec::new(), Vec::new())) };
 }
 
 /// Z of every state, and the flagged states as (index, flag).
