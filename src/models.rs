@@ -165,6 +165,25 @@ impl BuiltModel {
         }
     }
 
+    /// The stable state at (T, P) (the root of lowest Gibbs energy) with what `need` asks;
+    /// where the model knows the stable branch in advance only that branch is searched
+    /// ([`State::stable_at_tp_need`]): the same values as [`BuiltModel::at_tp_need`], and
+    /// `roots` counts the roots searched.
+    pub fn stable_at_tp_need(
+        &self,
+        t: f64,
+        p: f64,
+        x: &[f64],
+        need: Need,
+    ) -> eos::Result<ModelState> {
+        match &self.engine {
+            Engine::Helmholtz(m) => {
+                State::stable_at_tp_need(m.as_ref(), t, p, x, need).map(from_state)
+            }
+            Engine::TpExplicit(_) => self.at_tp_need(t, p, x, RootChoice::LowestGibbs, need),
+        }
+    }
+
     /// The state at (T, molar density).
     pub fn at_trho(
         &self,

@@ -9,7 +9,6 @@ use crate::phase_screen::PhaseScreen;
 use crate::range::StateCheck;
 use eos::need::Need;
 use eos::properties::Properties;
-use eos::state::RootChoice;
 use rayon::prelude::*;
 
 /// What one state gave.
@@ -78,7 +77,7 @@ impl StatePlan {
                 )),
             };
         }
-        match built.at_tp_need(t, p, &feed.mole, RootChoice::LowestGibbs, self.need) {
+        match built.stable_at_tp_need(t, p, &feed.mole, self.need) {
             Ok(s) => StateOutcome {
                 flag: if s.warnings.is_empty() {
                     self.check.flag(t, p, s.props.rho)

@@ -94,6 +94,16 @@ pub trait Model: Send + Sync {
     /// Every density at which the model gives pressure `p` at (T, x), in mol/m3.
     fn densities(&self, t: f64, p: f64, x: &[f64]) -> DensityRoots;
 
+    /// The density (mol/m3) of the stable phase at (T, P, x) when the model can tell in
+    /// advance which branch of the isotherm it lies on, found on that branch alone; `None`
+    /// where it cannot, and the caller compares the Gibbs energies of every root of
+    /// [`Model::densities`]. Where it answers, the answer is the stable phase's root, also
+    /// where a root on a spurious loop of the equation has a lower Gibbs energy.
+    fn stable_density(&self, t: f64, p: f64, x: &[f64]) -> Option<f64> {
+        let _ = (t, p, x);
+        None
+    }
+
     /// The highest molar density the model can represent at composition x (the co-volume
     /// limit 1/b for a cubic), mol/m3.
     fn max_density(&self, x: &[f64]) -> f64;

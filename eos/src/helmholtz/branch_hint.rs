@@ -33,8 +33,15 @@ pub fn ancillary_pressure(f: &Formulation, t: f64) -> Option<(f64, f64)> {
     (est.is_finite() && est > 0.0).then_some((est, margin))
 }
 
-/// The stable branch at (T, p) when the ancillary settles it.
+/// The stable branch at (T, p) when the ancillary settles it: from the triple point up,
+/// where its margin is checked. Below the triple point the ancillary is an extrapolation and
+/// the formulation itself (outside its range) can have roots the ancillary knows nothing of,
+/// so the answer there is `None` (CO2 with the 12-term equation at 160 K and 94 bar: the
+/// ancillary says liquid, the root of lowest Gibbs energy is a low-density one).
 pub fn stable_branch(f: &Formulation, t: f64, p: f64) -> Option<Branch> {
+    if t < f.t_triple {
+        return None;
+    }
     let (est, m) = ancillary_pressure(f, t)?;
     if p > est * (1.0 + m) {
         Some(Branch::Liquid)

@@ -215,25 +215,38 @@ pub fn solve_branch_split(
 pub fn roots(f: &Formulation, t: f64, p: f64) -> ([f64; 2], usize) {
     let mut out = [0.0; 2];
     let mut n = 0;
-    let ideal = p / (f.r * t);
-    if let Some(v) = solve_branch(f, t, p, Branch::Vapour, ideal) {
+    if let Some(v) = vapour_root(f, t, p) {
         out[n] = v;
         n += 1;
     }
-    if t < f.tc {
-        let start = match &f.rhol_anc {
-            Some(a) => f.rhoc * a.reduced(t, f.tc),
-            None => 2.0 * f.rhoc,
-        };
-        if let Some(l) = solve_branch(f, t, p, Branch::Liquid, start.max(1.01 * f.rhoc)) {
-            let spurious = dome_middle(f, t).is_some_and(|mid| l < mid);
-            if !spurious && (n == 0 || (l - out[0]).abs() > 1e-9 * l) {
-                out[n] = l;
-                n += 1;
-            }
+    if let Some(l) = liquid_root(f, t, p) {
+        if n == 0 || (l - out[0]).abs() > 1e-9 * l {
+            out[n] = l;
+            n += 1;
         }
     }
     (out, n)
+}
+
+/// The root on the vapour-like branch (the only branch at or above Tc), searched from the
+/// ideal-gas density.
+pub fn vapour_root(f: &Formulation, t: f64, p: f64) -> Option<f64> {
+    solve_branch(f, t, p, Branch::Vapour, p / (f.r * t))
+}
+
+/// The root on the liquid branch below Tc, searched from the saturated-liquid ancillary
+/// density; `None` at or above Tc, where there is none, or where the one found is spurious.
+pub fn liquid_root(f: &Formulation, t: f64, p: f64) -> Option<f64> {
+    if t >= f.tc {
+        return None;
+    }
+    let start = match &f.rhol_anc {
+        Some(a) => f.rhoc * a.reduced(t, f.tc),
+        None => 2.0 * f.rhoc,
+    };
+    let l = solve_branch(f, t, p, Branch::Liquid, start.max(1.01 * f.rhoc))?;
+    let spurious = dome_middle(f, t).is_some_and(|mid| l < mid);
+    (!spurious).then_some(l)
 }
 
 /// The density halfway between the saturated vapour and liquid at T (from the ancillary

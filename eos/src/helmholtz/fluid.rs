@@ -36,7 +36,7 @@
 //! ([`crate::IdealGasCp::with_zero`]).
 
 use super::branch_hint;
-use super::density::{self, solve_branch, Branch};
+use super::density::{self, Branch};
 use super::formulation::{Formulation, Tier, Validity};
 use super::properties;
 use super::saturation::{self, Saturation};
@@ -177,19 +177,8 @@ impl HelmholtzFluid {
     pub fn density(&self, t: f64, p: f64) -> Result<f64> {
         positive("temperature (K)", t)?;
         positive("pressure (Pa)", p)?;
-        if let Some(branch) = branch_hint::stable_branch(self.form, t, p) {
-            let f = self.form;
-            let start = match branch {
-                Branch::Vapour => p / (f.r * t),
-                Branch::Liquid => f
-                    .rhol_anc
-                    .as_ref()
-                    .map_or(2.0 * f.rhoc, |a| f.rhoc * a.reduced(t, f.tc))
-                    .max(1.01 * f.rhoc),
-            };
-            if let Some(rho) = solve_branch(f, t, p, branch, start) {
-                return Ok(rho);
-            }
+        if let Some(rho) = Model::stable_density(self, t, p, &[]) {
+            return Ok(rho);
         }
         let roots = self.density_roots(t, p)?;
         let tau = self.form.tc / t;
@@ -294,6 +283,16 @@ impl Model for HelmholtzFluid {
     fn densities(&self, t: f64, p: f64, _x: &[f64]) -> DensityRoots {
         let (r, n) = density::roots(self.form, t, p);
         DensityRoots::from_slice(&r[..n])
+    }
+
+    /// Below Tc and away from the saturation line, the vapour-pressure ancillary names the
+    /// stable branch ([`super::branch_hint`]), and only that branch is searched, from the same
+    /// start as in [`Model::densities`], so the root is the same to the bit.
+    fn stable_density(&self, t: f64, p: f64, _x: &[f64]) -> Option<f64> {
+        match branch_hint::stable_branch(self.form, t, p)? {
+            Branch::Vapour => density::vapour_root(self.form, t, p),
+            Branch::Liquid => density::liquid_root(self.form, t, p),
+        }
     }
 
     fn max_density(&self, _x: &[f64]) -> f64 {
