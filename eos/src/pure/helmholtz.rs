@@ -12,7 +12,7 @@
 use super::error::{positive, PureError, PureResult};
 use super::fluid::{Branch, Critical, FluidRange, PureFluid, SatState};
 use crate::helmholtz::branch_hint::ancillary_pressure;
-use crate::helmholtz::density::{self as hd, solve_branch};
+use crate::helmholtz::density as hd;
 use crate::helmholtz::{HelmholtzFluid, Saturation};
 use crate::properties::Properties;
 
@@ -131,13 +131,9 @@ impl PureFluid for HelmholtzFluid {
         positive("pressure (Pa)", p)?;
         let f = self.formulation();
         let found = if t >= f.tc || branch == Branch::Vapour {
-            solve_branch(f, t, p, hd::Branch::Vapour, p / (f.r * t))
+            hd::vapour_root(f, t, p)
         } else {
-            let start = match &f.rhol_anc {
-                Some(a) => f.rhoc * a.reduced(t, f.tc),
-                None => 2.0 * f.rhoc,
-            };
-            solve_branch(f, t, p, hd::Branch::Liquid, start.max(1.01 * f.rhoc))
+            hd::liquid_root(f, t, p)
         };
         found.ok_or_else(|| {
             PureError::Model(crate::Error::NoSolution(format!(
