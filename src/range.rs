@@ -149,12 +149,13 @@ impl StateCheck {
 /// Columns of the running minimum in [`lowest`]: independent chains, so that it vectorises.
 const COLUMNS: usize = 8;
 
-/// The smallest value (infinity for none); NaN where any value is NaN.
+/// The smallest value (infinity for none); NaN where any value is NaN or infinite.
 fn lowest(v: &[f64]) -> f64 {
     lowest_of(v, |x| x)
 }
 
-/// The smallest negated value, that is minus the largest; NaN where any value is NaN.
+/// The smallest negated value, that is minus the largest; NaN where any value is NaN or
+/// infinite.
 fn lowest_negated(v: &[f64]) -> f64 {
     lowest_of(v, |x| -x)
 }

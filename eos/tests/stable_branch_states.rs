@@ -102,3 +102,14 @@ fn compressed_liquid_methane_near_its_triple_point_is_a_liquid() {
     assert_eq!(s.phase, eos::phase::Phase::Liquid);
     assert!((kg_m3 / 451.48 - 1.0).abs() < 0.01, "{kg_m3} kg/m3");
 }
+
+/// The same compressed liquid has one density root: the root the vapour branch search found
+/// on a spurious loop near the critical density (10 061 mol/m3 at 79 bar, above methane's
+/// critical pressure of 45.99 bar, where no vapour can exist below Tc) is not a root.
+#[test]
+fn a_compressed_liquid_below_tc_above_pc_has_no_vapour_root() {
+    let fluid = HelmholtzFluid::new(formulation("methane-setzmann-wagner1991").unwrap());
+    let roots = fluid.density_roots(93.45, 79.43e5).unwrap();
+    assert_eq!(roots.as_slice().len(), 1, "{:?}", roots.as_slice());
+    assert!(roots.as_slice()[0] > fluid.formulation().rhoc);
+}

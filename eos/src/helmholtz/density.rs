@@ -229,10 +229,24 @@ pub fn roots(f: &Formulation, t: f64, p: f64) -> ([f64; 2], usize) {
 }
 
 /// The root on the vapour-like branch (the only branch at or above Tc), searched from the
-/// ideal-gas density.
+/// ideal-gas density; `None` where there is none or the one found is spurious.
+///
+/// Below Tc a vapour, stable or metastable, exists only up to the vapour spinodal, whose
+/// pressure stays below the critical pressure (the spinodal ends at the critical point): a
+/// vapour-branch root at a pressure above pc (with a margin of [`PC_MARGIN`] for the
+/// difference between the published critical point and the equation's own) lies on one of
+/// the spurious loops inside the dome (Span, *Multiparameter Equations of State*, Springer
+/// 2000, ch. 3). Found for compressed liquid methane by Setzmann & Wagner at 93 K and 79 bar:
+/// a root at 10 061 mol/m3, just below the critical density.
 pub fn vapour_root(f: &Formulation, t: f64, p: f64) -> Option<f64> {
-    solve_branch(f, t, p, Branch::Vapour, p / (f.r * t))
+    let rho = solve_branch(f, t, p, Branch::Vapour, p / (f.r * t))?;
+    let spurious = t < f.tc && p > f.pc * (1.0 + PC_MARGIN);
+    (!spurious).then_some(rho)
 }
+
+/// Relative margin above the published critical pressure before a vapour root below Tc is
+/// taken as spurious.
+const PC_MARGIN: f64 = 1e-3;
 
 /// The root on the liquid branch below Tc, searched from the saturated-liquid ancillary
 /// density; `None` at or above Tc, where there is none, or where the one found is spurious.
