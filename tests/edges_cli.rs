@@ -961,8 +961,7 @@ fn compressed_liquid_methane_near_its_triple_point_is_a_liquid_in_state_and_vess
     // 451.48 kg/m3 (the paper's table, recalled from memory); a compressed liquid 3 K above
     // it is about as dense. The comparison of every density root kept a root on a spurious
     // loop of the equation inside the dome: "vapor", Z 1.016, 161 kg/m3.
-    let (v, code, err) = run_json(&[
-        "state",
+    let liquid = [
         "--fluid",
         "methane",
         "-m",
@@ -971,25 +970,14 @@ fn compressed_liquid_methane_near_its_triple_point_is_a_liquid_in_state_and_vess
         "93.45 K",
         "-p",
         "79.43 bar",
-    ]);
+    ];
+    let (v, code, err) = run_json(&[&["state"], &liquid[..]].concat());
     assert_eq!(code, 0, "{err}");
     let r = result(&v, "reference");
     assert_eq!(r["phase"], "liquid", "{r}");
     let kg_m3 = r["mass_density_kg_m3"].as_f64().unwrap();
     assert!((kg_m3 / 451.48 - 1.0).abs() < 0.01, "{kg_m3}");
-    let (v, code, err) = run_json(&[
-        "vessel",
-        "--fluid",
-        "methane",
-        "-m",
-        "reference",
-        "-t",
-        "93.45 K",
-        "-p",
-        "79.43 bar",
-        "--volume",
-        "1 m3",
-    ]);
+    let (v, code, err) = run_json(&[&["vessel"], &liquid[..], &["--volume", "1 m3"]].concat());
     assert_eq!(code, 0, "{err}");
     let text = v.to_string();
     assert!(

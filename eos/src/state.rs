@@ -102,43 +102,12 @@ impl State {
         root: RootChoice,
         need: Need,
     ) -> Result<Self> {
-        positive("temperature (K)", t)?;
-        positive("pressure (Pa)", p)?;
-        composition::check(x, model.components().len())?;
-        let roots = refined_densities(model, t, p, x);
-        let r = roots.as_slice();
-        if r.is_empty() {
-            return Err(Error::NoSolution(format!(
-                "{} has no density root at T = {t} K, P = {p} Pa",
-                model.id()
-            )));
-        }
-        let rho = match root {
-            RootChoice::Vapor => r[0],
-            RootChoice::Liquid => r[r.len() - 1],
-            // Where the model knows the stable branch, its root: a multiparameter equation
-            // can have a root on a spurious loop inside the dome with a lower Gibbs energy
-            // (methane by Setzmann & Wagner at 93 K and 79 bar: 10 061 mol/m3 beside the
-            // liquid's 28 236), which no comparison of roots can tell from a phase.
-            RootChoice::LowestGibbs => model
-                .stable_density(t, p, x)
-                .and_then(|rho| refine(model, t, p, x, rho))
-                .unwrap_or_else(|| {
-                    r.iter()
-                        .copied()
-                        .min_by(|a, b| {
-                            g_res_rt(model, t, *a, x).total_cmp(&g_res_rt(model, t, *b, x))
-                        })
-                        .unwrap_or(r[0])
-                }),
+        check_tp(model, t, p, x)?;
+        let known = match root {
+            RootChoice::LowestGibbs => known_stable(model, t, p, x),
+            RootChoice::Vapor | RootChoice::Liquid => None,
         };
-        let props = evaluate_need(model, t, rho, x, need);
-        let (phase, n) = phase_among(model, t, p, rho, x, &roots);
-        Ok(State {
-            props,
-            phase,
-            roots: n,
-        })
+        Self::among_roots(model, t, p, x, root, known, need)
     }
 
     /// The stable state at (T, P): [`State::at_tp_need`] with [`RootChoice::LowestGibbs`],
@@ -152,23 +121,74 @@ impl State {
         x: &[f64],
         need: Need,
     ) -> Result<Self> {
-        positive("temperature (K)", t)?;
-        positive("pressure (Pa)", p)?;
-        composition::check(x, model.components().len())?;
-        let known = model
-            .stable_density(t, p, x)
-            .and_then(|rho| refine(model, t, p, x, rho));
-        let Some(rho) = known else {
-            return Self::at_tp_need(model, t, p, x, RootChoice::LowestGibbs, need);
+        check_tp(model, t, p, x)?;
+        match known_stable(model, t, p, x) {
+            Some(rho) => Ok(Self::assemble(
+                model,
+                t,
+                p,
+                x,
+                rho,
+                &DensityRoots::from_slice(&[rho]),
+                need,
+            )),
+            None => Self::among_roots(model, t, p, x, RootChoice::LowestGibbs, None, need),
+        }
+    }
+
+    /// The state on the root `root` asks for among every refined root; `known` is the stable
+    /// root where the model named it ([`known_stable`]), taken for [`RootChoice::LowestGibbs`]
+    /// in place of the comparison of Gibbs energies: a multiparameter equation can have a
+    /// root on a spurious loop inside the dome with a lower Gibbs energy (methane by Setzmann
+    /// & Wagner at 93 K and 79 bar: 10 061 mol/m3 beside the liquid's 28 236), which no
+    /// comparison of roots can tell from a phase.
+    fn among_roots(
+        model: &dyn Model,
+        t: f64,
+        p: f64,
+        x: &[f64],
+        root: RootChoice,
+        known: Option<f64>,
+        need: Need,
+    ) -> Result<Self> {
+        let roots = refined_densities(model, t, p, x);
+        let r = roots.as_slice();
+        if r.is_empty() {
+            return Err(Error::NoSolution(format!(
+                "{} has no density root at T = {t} K, P = {p} Pa",
+                model.id()
+            )));
+        }
+        let rho = match root {
+            RootChoice::Vapor => r[0],
+            RootChoice::Liquid => r[r.len() - 1],
+            RootChoice::LowestGibbs => known.unwrap_or_else(|| {
+                r.iter()
+                    .copied()
+                    .min_by(|a, b| g_res_rt(model, t, *a, x).total_cmp(&g_res_rt(model, t, *b, x)))
+                    .unwrap_or(r[0])
+            }),
         };
-        let roots = DensityRoots::from_slice(&[rho]);
+        Ok(Self::assemble(model, t, p, x, rho, &roots, need))
+    }
+
+    /// The state at root `rho` of (T, P), one of `roots`.
+    fn assemble(
+        model: &dyn Model,
+        t: f64,
+        p: f64,
+        x: &[f64],
+        rho: f64,
+        roots: &DensityRoots,
+        need: Need,
+    ) -> Self {
         let props = evaluate_need(model, t, rho, x, need);
-        let (phase, n) = phase_among(model, t, p, rho, x, &roots);
-        Ok(State {
+        let (phase, n) = phase_among(model, t, p, rho, x, roots);
+        State {
             props,
             phase,
             roots: n,
-        })
+        }
     }
 
     /// The state at temperature `t` (K) and molar density `rho` (mol/m3).
@@ -239,6 +259,22 @@ impl State {
         s.props.p = p;
         Ok(s)
     }
+}
+
+/// Refuses a temperature or pressure that is not positive, or a composition that does not
+/// fit the model.
+fn check_tp(model: &dyn Model, t: f64, p: f64, x: &[f64]) -> Result<()> {
+    positive("temperature (K)", t)?;
+    positive("pressure (Pa)", p)?;
+    composition::check(x, model.components().len())
+}
+
+/// The stable root at (T, P) where the model names it ([`Model::stable_density`]), refined
+/// as every root is.
+fn known_stable(model: &dyn Model, t: f64, p: f64, x: &[f64]) -> Option<f64> {
+    model
+        .stable_density(t, p, x)
+        .and_then(|rho| refine(model, t, p, x, rho))
 }
 
 /// The model's density roots at (T, P), each confirmed by Newton steps on P(rho) = p with the
